@@ -1,0 +1,11 @@
+#!/usr/bin/env node
+// Entry point of the `lockstep` command: runs the TypeScript sources through tsx (no build step).
+import { register } from 'tsx/esm/api';
+
+register();
+const { runCli } = await import('../cli/main.ts');
+const code = await runCli(process.argv.slice(2), {
+  stdout: (text) => process.stdout.write(text.endsWith('\n') ? text : `${text}\n`),
+  stderr: (text) => process.stderr.write(text.endsWith('\n') ? text : `${text}\n`),
+});
+process.exitCode = code;

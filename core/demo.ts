@@ -1,0 +1,66 @@
+/**
+ * The demo design: an invented scenario (no real make or model). A 3.5 t long-wheelbase panel van,
+ * converted from diesel to battery-electric drive and fitted out as a camper; the traction battery
+ * sits in the floor between the axles, which lowers the CG, and the rear axle carries the motor.
+ */
+import type { DesignFile } from './design.ts';
+
+export function demoDesign(): DesignFile {
+  return {
+    format: 'lockstep-design/1',
+    name: 'Demo: long-wheelbase panel van, battery-electric camper conversion',
+    notes:
+      'Invented example. Diesel engine, gearbox and fuel tank removed; 74 kWh floor battery between the axles, ' +
+      'rear drive unit, camper furniture, 80 l fresh-water tank over the rear axle.',
+    vehicle: { category: 'N1', wheelbase_m: 3.665, abs: false, drive: 'rear' },
+    load_states: [
+      { id: 'unladen', label: 'Unladen, driver only', kind: 'unladen', mass_kg: 2720, front_axle_kg: 1420, cg_height_m: 0.78 },
+      { id: 'laden', label: 'Laden to 3500 kg', kind: 'laden', mass_kg: 3500, front_axle_kg: 1610, cg_height_m: 0.9 },
+    ],
+    axles: {
+      front: {
+        tyre_radius_m: 0.345,
+        brake: {
+          type: 'disc',
+          caliper: 'sliding',
+          piston_diameters_mm: [48, 48],
+          effective_radius_m: 0.128,
+          pad_friction: 0.4,
+          threshold_pressure_bar: 0.5,
+        },
+      },
+      rear: {
+        tyre_radius_m: 0.345,
+        brake: {
+          type: 'disc',
+          caliper: 'sliding',
+          piston_diameters_mm: [48],
+          effective_radius_m: 0.118,
+          pad_friction: 0.4,
+          threshold_pressure_bar: 1,
+        },
+      },
+    },
+    hydraulics: {
+      master_cylinder_bore_mm: 25.4,
+      pedal_ratio: 3.8,
+      booster_ratio: 5.5,
+      booster_runout_bar: 90,
+      circuit_split: 'front_rear',
+      rear_valve: {
+        type: 'load_sensing',
+        ratio: 0.3,
+        knee_bar_at_rear_axle_kg: [
+          [1200, 20],
+          [1900, 48],
+        ],
+      },
+    },
+    adhesion_coefficients: [0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1.0],
+    provenance: {
+      'load_states[0].front_axle_kg': { source: 'measured', note: 'weighbridge, driver on board' },
+      'load_states[1].cg_height_m': { source: 'assumed', note: 'estimated from the fit-out' },
+      'axles.rear.brake.pad_friction': { source: 'maker', note: 'pad data sheet, mean value' },
+    },
+  };
+}

@@ -1,0 +1,134 @@
+/**
+ * The `lockstep-result/1` for a design: per load state the static loads, the crossings of the
+ * ideal and the critical braking rate, the first lock on each surface, the operating points at the
+ * requested braking rates and (on request) the plotting curves.
+ */
+import { CAUTION } from './caution.ts';
+import { DEFAULT_ADHESION, DEFAULT_AT } from './constants.ts';
+import { crossings } from './crossings.ts';
+import { type Curves, curves } from './curves.ts';
+import type { DesignFile } from './design.ts';
+import { frontShareAtLowPressure } from './distribution.ts';
+import { firstLock, type LockResult } from './lock-order.ts';
+import { type OperatingPoint, operatingPoint } from './operating-point.ts';
+import { type StateModel, stateModel } from './state-model.ts';
+import type { Warning } from './validate.ts';
+import { LOCKSTEP_VERSION } from './version.ts';
+
+export interface LoadStateResult {
+  id: string;
+  label: string;
+  kind: string;
+  mass_kg: number;
+  front_axle_kg: number;
+  cg_height_m: number;
+  front_axle_static_n: number;
+  rear_axle_static_n: number;
+  /** ψ = P1 / P. */
+  static_front_share: number;
+  /** Front share of the braking force where both axles brake below the first kink (null if never). */
+  front_share_low_pressure: number | null;
+  /** Braking rate at which the rear axle load reaches zero. */
+  rear_lift_off_braking_rate: number;
+  critical_braking_rate: number | null;
+  critical_braking_rates: number[];
+  lock: LockResult[];
+  /** Lowest braking efficiency over the surfaces analysed. */
+  lowest_efficiency: { adhesion: number; efficiency: number } | null;
+  at: OperatingPoint[];
+  warnings: Warning[];
+  curves?: Curves;
+}
+
+export interface EvaluationResult {
+  format: 'lockstep-result/1';
+  lockstep_version: string;
+  design_name: string;
+  adhesion_coefficients: number[];
+  load_states: LoadStateResult[];
+  checks: unknown[];
+  warnings: Warning[];
+  caution: string;
+}
+
+export interface EvaluateOptions {
+  /** Braking rates for the `at` list (default 0.1 … 1.0). */
+  at?: readonly number[];
+  /** Include the plotting series per load state. */
+  curves?: boolean;
+}
+
+export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateOptions = {}): LoadStateResult {
+  const adhesion = design.adhesion_coefficients ?? [...DEFAULT_ADHESION];
+  const cross = crossings(s.loads, s.dist);
+  const lock = adhesion.map((k) => firstLock(s.loads, s.dist, k));
+  const at = (opts.at ?? DEFAULT_AT).map((z) => operatingPoint(s, z));
+  const warnings: Warning[] = [];
+  const index = design.load_states.indexOf(s.state);
+  const zLift = s.loads.zLift;
+  if (zLift <= 1) {
+    warnings.push({
+      code: 'WARN_REAR_LIFT_OFF',
+      path: `load_states[${index}]`,
+      message: `the rear axle load reaches zero at braking rate ${zLift.toFixed(3)}; utilisations above it are not defined`,
+    });
+  }
+  const lifted = at.filter((p) => p.rear_utilisation === null).map((p) => p.braking_rate);
+  if (lifted.length > 0) {
+    warnings.push({
+      code: 'WARN_AT_BEYOND_LIFT_OFF',
+      path: `load_states[${index}]`,
+      message: `braking rate ${lifted.join(', ')} is beyond rear-axle lift-off (${zLift.toFixed(3)}): utilisations reported as null`,
+    });
+  }
+  for (const l of lock) {
+    if (l.first_axle === 'none') {
+      warnings.push({
+        code: 'WARN_LIFT_BEFORE_LOCK',
+        path: `load_states[${index}]`,
+        message: `on adhesion ${l.adhesion} the rear axle lifts off (z = ${zLift.toFixed(3)}) before either axle locks`,
+      });
+    }
+  }
+  let lowest: LoadStateResult['lowest_efficiency'] = null;
+  for (const l of lock) if (!lowest || l.efficiency < lowest.efficiency) lowest = { adhesion: l.adhesion, efficiency: l.efficiency };
+  const r: LoadStateResult = {
+    id: s.state.id,
+    label: s.state.label,
+    kind: s.state.kind,
+    mass_kg: s.state.mass_kg,
+    front_axle_kg: s.state.front_axle_kg,
+    cg_height_m: s.state.cg_height_m,
+    front_axle_static_n: s.loads.P1,
+    rear_axle_static_n: s.loads.P2,
+    static_front_share: s.loads.psi,
+    front_share_low_pressure: frontShareAtLowPressure(s.dist),
+    rear_lift_off_braking_rate: zLift,
+    critical_braking_rate: cross.critical,
+    critical_braking_rates: cross.rates,
+    lock,
+    lowest_efficiency: lowest,
+    at,
+    warnings,
+  };
+  if (opts.curves) r.curves = curves(s, cross.rates, cross.critical);
+  return r;
+}
+
+export function stateModels(design: DesignFile): StateModel[] {
+  return design.load_states.map((st) => stateModel(design, st));
+}
+
+export function evaluate(design: DesignFile, opts: EvaluateOptions & { warnings?: Warning[] } = {}): EvaluationResult {
+  const models = stateModels(design);
+  return {
+    format: 'lockstep-result/1',
+    lockstep_version: LOCKSTEP_VERSION,
+    design_name: design.name,
+    adhesion_coefficients: design.adhesion_coefficients ?? [...DEFAULT_ADHESION],
+    load_states: models.map((m) => evaluateState(design, m, opts)),
+    checks: [],
+    warnings: opts.warnings ?? [],
+    caution: CAUTION,
+  };
+}

@@ -29,4 +29,6 @@ export const cliErrors = {
     new CliError('CLI_ERR_NOT_JSON', `"${file}" is not valid JSON (${why}); a design file is JSON, see docs/design-file.md`),
   invalid: (file: string, issues: string[]) =>
     new CliError('CLI_ERR_DESIGN_INVALID', `"${file}" is not a valid design file (${issues.length} problem${issues.length === 1 ? '' : 's'}):`, issues),
+  axleLiftInvalid: (file: string, issues: string[]) =>
+    new CliError('CLI_ERR_AXLE_LIFT_INVALID', `"${file}" is not a valid axle-lift file (${issues.length} problem${issues.length === 1 ? '' : 's'}; see docs/axle-lift.md):`, issues),
 } as const;

@@ -4,7 +4,10 @@
  */
 import { CAUTION } from '../core/index.ts';
 import { demoCommand } from './commands/demo.ts';
+import { cgLiftCommand } from './commands/cg-lift.ts';
 import { evaluateCommand } from './commands/evaluate.ts';
+import { packetCommand } from './commands/packet.ts';
+import { storeCommand } from './commands/store.ts';
 import { CliError } from './errors.ts';
 
 export interface CommandOutput {
@@ -15,7 +18,10 @@ export interface CommandOutput {
 type Command = (argv: string[], out: CommandOutput) => number | Promise<number>;
 
 const commands: Record<string, { run: Command; summary: string }> = {
-  evaluate: { run: evaluateCommand, summary: 'evaluate FILE [--at z1,z2,...] [--json] [--curves]   braking distribution, lock order and checks' },
+  evaluate: { run: evaluateCommand, summary: 'evaluate FILE [--at z1,z2,...] [--rules id,...] [--json] [--curves]   braking distribution, lock order and regulation checks' },
+  'cg-lift': { run: cgLiftCommand, summary: 'cg-lift FILE [--json]                                  CG height from axle-lift weighings, with uncertainty' },
+  packet: { run: packetCommand, summary: 'packet FILE --out packet.pdf [--date D] | packet --revision ID --out packet.pdf   evidence packet PDF' },
+  store: { run: storeCommand, summary: 'store list|save|show|history|diff|rename|duplicate|delete ...   saved designs (LOCKSTEP_DATA_DIR)' },
   demo: { run: demoCommand, summary: 'demo                                                   print the demo design file' },
 };
 

@@ -1,10 +1,15 @@
 /** The human-readable form of `lockstep evaluate`: one block per load state, then checks and the caution. */
 import type { EvaluationResult, LoadStateResult } from '../core/index.ts';
 import { fmt, textTable } from './table.ts';
+import { pedalTravelSection, pitfallSection, valveFailureSection } from './hardware-report.ts';
+import { checksSection } from './checks-report.ts';
+import { limitsSection } from './limits-report.ts';
+import { conversionLines } from './conversion-report.ts';
 
 function stateBlock(s: LoadStateResult): string {
   const out: string[] = [];
   out.push(`Load state "${s.id}" (${s.label}, ${s.kind}): ${fmt(s.mass_kg, 0)} kg, front axle ${fmt(s.front_axle_kg, 0)} kg, CG height ${fmt(s.cg_height_m, 3)} m`);
+  out.push(...conversionLines(s));
   out.push(
     `  Static axle loads: front ${fmt(s.front_axle_static_n, 1)} N, rear ${fmt(s.rear_axle_static_n, 1)} N ` +
       `(front share ${fmt(s.static_front_share * 100, 1)} %)`,
@@ -58,10 +63,16 @@ export function textReport(r: EvaluationResult): string {
   out.push('');
   for (const w of r.warnings) out.push(`Warning: ${w.path ? `${w.path}: ` : ''}${w.message}`);
   if (r.warnings.length) out.push('');
+  const pit = pitfallSection(r);
+  if (pit.length) out.push(...pit, '');
   for (const s of r.load_states) {
     out.push(stateBlock(s));
     out.push('');
   }
+  out.push(...valveFailureSection(r), '', ...pedalTravelSection(r), '');
+  out.push(...limitsSection(r), '');
+  const checks = checksSection(r);
+  if (checks.length) out.push(...checks, '');
   out.push(`CAUTION: ${r.caution}`);
   return out.join('\n');
 }

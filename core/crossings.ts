@@ -7,7 +7,7 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { CROSSING_Z_MAX } from './constants.ts';
-import { type Distribution, forcesAt, segments } from './distribution.ts';
+import { type Distribution, forcesAt, type Segment, segments } from './distribution.ts';
 
 export interface Crossings {
   /** Every z at which f1 − f2 changes sign, ascending. */
@@ -35,11 +35,12 @@ export function frontRearSign(m: AxleLoadModel, d: Distribution, z: number): num
   return D > scale ? 1 : D < -scale ? -1 : 0;
 }
 
-export function crossings(m: AxleLoadModel, d: Distribution): Crossings {
+/** `segs` may be passed in when the caller has them already (segments(d) of the same distribution). */
+export function crossings(m: AxleLoadModel, d: Distribution, segs: readonly Segment[] = segments(d)): Crossings {
   const zMax = Math.min(CROSSING_Z_MAX, m.zLift);
   const A = -m.chi * m.P;
   const candidates: number[] = [];
-  for (const s of segments(d)) {
+  for (const s of segs) {
     if (s.zFrom >= zMax) break;
     const hi = Math.min(s.zTo, zMax);
     for (const r of quadraticRoots(A, s.b1 - m.P1, s.a1)) {

@@ -57,6 +57,10 @@ export function demoDesign(): DesignFile {
       },
     },
     adhesion_coefficients: [0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1.0],
+    // Rear drive unit: regenerative torque as set in the motor controller (invented figures).
+    regen: { max_motor_torque_nm: 90, gear_ratio: 9.5, max_power_kw: 40, blending: { type: 'regen_first' } },
+    // Rotor masses as weighed; base vehicle = the diesel van laden as it left the factory (invented figures).
+    heat: { front_rotor_kg: 9.5, rear_rotor_kg: 7, max_speed_kmh: 130, base_vehicle_mass_kg: 3100, base_vehicle_front_axle_kg: 1560 },
     provenance: {
       'load_states[0].front_axle_kg': { source: 'measured', note: 'weighbridge, driver on board' },
       'load_states[1].cg_height_m': { source: 'assumed', note: 'estimated from the fit-out' },

@@ -3,6 +3,10 @@
  * Types come from z.infer. Units are those in the key names (see docs/design-file.md).
  */
 import { z } from 'zod';
+import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
+import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
+import { RULE_SELECTORS } from './rules/index.ts';
+import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 
 /** Words for a value a person typed, in an error message. */
 export function describeValue(v: unknown): string {
@@ -23,8 +27,8 @@ function bounded(min: number, max: number, openBelow: boolean) {
   const base = z.number({
     error: (iss) =>
       iss.input === undefined
-        ? `is required (a number ${range})`
-        : `${describeValue(iss.input)} is not a number (allowed: ${range})`,
+        ? `is required: a number ${range}`
+        : `${describeValue(iss.input)} is not a number; allowed: ${range}`,
   });
   const lower = openBelow
     ? base.gt(min, { error: (iss) => `${describeValue(iss.input)} is not ${range}` })
@@ -54,6 +58,7 @@ export const LoadState = z.strictObject({
   mass_kg: num(50, 60000),
   front_axle_kg: numAbove(0, 60000),
   cg_height_m: numAbove(0, 10),
+  ...loadStateBuildUpShape, // optional: derived_from, from_build_up, overrides, cg_height_derived_from, cg_height_uncertainty_m
 });
 
 export const DiscBrake = z.strictObject({
@@ -98,12 +103,115 @@ export const Hydraulics = z.strictObject({
   booster_runout_bar: numAbove(0, 300).optional(),
   circuit_split: z.enum(['front_rear', 'diagonal']),
   rear_valve: RearValve,
+  balance_bar: BalanceBar.optional(), // two master cylinders on a balance bar (core/sizing/sizing-schema.ts)
 });
 
 export const Provenance = z.record(
   z.string().min(1).max(200),
   z.strictObject({ source: z.enum(PROVENANCE_SOURCES), note: z.string().max(2000).optional() }),
 );
+
+/** Who and what an evidence packet is for; printed literally on its cover (all free text, optional). */
+export const Identification = z.strictObject({
+  vehicle_identification_number: z.string().max(40).optional(),
+  owner: z.string().max(200).optional(),
+  modifier: z.string().max(200).optional(),
+  approval_regime: z.string().max(200).optional(),
+  approval_code: z.string().max(200).optional(),
+});
+
+/**
+ * Limits at grip and heat (docs/design-file.md, "Optional blocks for the limits"): traction,
+ * regenerative braking, stopping distance, brake heat and the roller brake tester. All optional.
+ */
+export const TractionOptions = z.strictObject({
+  all_wheel_front_share: num(0, 1).optional(), // share of the drive force on the front axle; omitted: ideal split
+  rolling_resistance: num(0, 0.1).optional(), // rolling-resistance coefficient, force / weight
+});
+
+export const RegenBlending = z.discriminatedUnion('type', [
+  z.strictObject({ type: z.literal('regen_first') }),
+  z.strictObject({ type: z.literal('fixed_proportion'), proportion: numAbove(0, 5) }),
+]);
+
+export const Regen = z
+  .strictObject({
+    max_motor_torque_nm: numAbove(0, 20000),
+    gear_ratio: num(1, 50),
+    max_power_kw: numAbove(0, 2000),
+    fade_start_kmh: num(0, 100).optional(),
+    cutoff_kmh: num(0, 100).optional(),
+    blending: RegenBlending,
+    front_share: num(0, 1).optional(),
+    speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
+  })
+  .superRefine((r, ctx) => {
+    const fade = r.fade_start_kmh ?? 15;
+    const cut = r.cutoff_kmh ?? 5;
+    if (cut > fade) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['cutoff_kmh'],
+        message: `${cut} is above fade_start_kmh ${fade} (regeneration fades out from fade_start_kmh down to cutoff_kmh)`,
+      });
+    }
+  });
+
+export const StoppingOptions = z.strictObject({
+  speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
+  reaction_time_s: num(0, 5).optional(),
+  build_up_time_s: num(0, 3).optional(),
+  abs_adhesion_factor: numAbove(0, 1).optional(),
+});
+
+export const HeatOptions = z.strictObject({
+  front_rotor_kg: numAbove(0, 200),
+  rear_rotor_kg: numAbove(0, 200),
+  specific_heat_j_per_kg_k: num(100, 2000).optional(),
+  heat_to_rotor_share: numAbove(0, 1).optional(),
+  cooling_coefficient_per_s: num(0, 1).optional(),
+  ambient_c: num(-40, 60).optional(),
+  rotating_energy_share: num(0, 0.5).optional(),
+  max_speed_kmh: numAbove(0, 400).optional(),
+  stop_speed_kmh: numAbove(0, 300).optional(),
+  base_vehicle_mass_kg: num(50, 60000).optional(),
+  base_vehicle_front_axle_kg: numAbove(0, 60000).optional(),
+});
+
+export const TesterOptions = z.strictObject({
+  roller_adhesion: numAbove(0, 1.5).optional(),
+  test_mass_kg: num(50, 60000).optional(),
+  required_pct: num(1, 150).optional(),
+  pedal_force_limit_n: numAbove(0, 3000).optional(),
+});
+
+/**
+ * Parking brake for the parking checks (core/checks/performance-check.ts): the braked axle, the
+ * control, and either a declared holding force at the tyres or the mechanism (control force ×
+ * lever_ratio × efficiency = total actuating force into the axle's two brakes; tyre force =
+ * that × brake_factor × effective_radius_m / tyre radius). Without either only the adhesion is checked.
+ */
+export const ParkingBrake = z
+  .strictObject({
+    axle: z.enum(['front', 'rear']),
+    control: z.enum(['hand', 'foot']),
+    holding_force_n: numAbove(0, 500000).optional(),
+    control_force_n: numAbove(0, 2000).optional(),
+    lever_ratio: numAbove(0, 1000).optional(),
+    efficiency: numAbove(0, 1).optional(),
+    brake_factor: num(0.3, 15).optional(),
+    effective_radius_m: num(0.03, 0.5).optional(),
+  })
+  .superRefine((b, ctx) => {
+    const mech = (['lever_ratio', 'efficiency', 'brake_factor', 'effective_radius_m'] as const).filter((k) => b[k] !== undefined);
+    if (b.holding_force_n !== undefined && mech.length > 0) {
+      ctx.addIssue({ code: 'custom', path: ['holding_force_n'], message: 'give either holding_force_n or the mechanism (lever_ratio, efficiency, brake_factor, effective_radius_m), not both' });
+    } else if (mech.length > 0 && mech.length < 4) {
+      for (const k of ['lever_ratio', 'efficiency', 'brake_factor', 'effective_radius_m'] as const) {
+        if (b[k] === undefined) ctx.addIssue({ code: 'custom', path: [k], message: 'is required with the other mechanism keys (lever_ratio, efficiency, brake_factor, effective_radius_m)' });
+      }
+    }
+  });
 
 /** Keys of the design file proper. Later features add optional blocks here (see docs/design-file.md). */
 export const designShape = {
@@ -116,6 +224,21 @@ export const designShape = {
   hydraulics: Hydraulics,
   adhesion_coefficients: z.array(num(0.05, 1.5)).min(1).max(20).optional(),
   provenance: Provenance.optional(),
+  traction: TractionOptions.optional(),
+  regen: Regen.optional(),
+  stopping: StoppingOptions.optional(),
+  heat: HeatOptions.optional(),
+  tester: TesterOptions.optional(),
+  identification: Identification.optional(),
+  hardware: Hardware.optional(),
+  base_vehicle: BaseVehicle.optional(),
+  conversion: Conversion.optional(),
+  build_up: BuildUp.optional(),
+  ratings: Ratings.optional(),
+  rules: z.array(z.enum(RULE_SELECTORS as [string, ...string[]])).min(1).max(20).optional(),
+  test_adhesion: num(0.05, 1.5).optional(),
+  parking_brake: ParkingBrake.optional(),
+  tolerances: Tolerances.optional(), // robustness analysis of the sizing assistant (core/sizing/sizing-schema.ts)
 };
 
 /** Cross-field rules: each issue lands on the field a person has to change. */
@@ -129,7 +252,9 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
         message: `${s.front_axle_kg} is not below mass_kg ${s.mass_kg} (the front axle load must be between 0 and the vehicle mass)`,
       });
     }
-    if (s.cg_height_m >= d.vehicle.wheelbase_m) {
+    // Compared only with a wheelbase inside its own range, so a bad wheelbase gives one message, not one per state.
+    const E = d.vehicle.wheelbase_m;
+    if (E >= 0.5 && E <= 10 && s.cg_height_m >= E) {
       ctx.addIssue({
         code: 'custom',
         path: ['load_states', i, 'cg_height_m'],
@@ -179,3 +304,10 @@ export type DrumBrake = z.infer<typeof DrumBrake>;
 export type RearValve = z.infer<typeof RearValve>;
 export type Hydraulics = z.infer<typeof Hydraulics>;
 export type Vehicle = z.infer<typeof Vehicle>;
+export type TractionOptions = z.infer<typeof TractionOptions>;
+export type Regen = z.infer<typeof Regen>;
+export type StoppingOptions = z.infer<typeof StoppingOptions>;
+export type HeatOptions = z.infer<typeof HeatOptions>;
+export type TesterOptions = z.infer<typeof TesterOptions>;
+export type Identification = z.infer<typeof Identification>;
+export type ParkingBrake = z.infer<typeof ParkingBrake>;

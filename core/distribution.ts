@@ -52,10 +52,12 @@ export function segmentIndex(d: Distribution, z: number): number {
   return lo;
 }
 
-function lerp(v: number[], j: number, frac: number): number {
+/** Value of breakpoint list v a fraction `frac` of the way along segment j (the one interpolation rule). */
+export function lerpAt(v: readonly number[], j: number, frac: number): number {
   const a = v[j]!;
   return a + (v[j + 1]! - a) * frac;
 }
+const lerp = lerpAt;
 
 export function forcesAt(d: Distribution, z: number): ForcesAt {
   if (!(z > 0)) return { front: 0, rear: 0, p: d.p ? 0 : NaN, p2: d.p2 ? 0 : NaN };
@@ -85,9 +87,52 @@ export function segments(d: Distribution): Segment[] {
 }
 
 /** Front share of the total braking force on the first piece where both axles brake, or null. */
-export function frontShareAtLowPressure(d: Distribution): number | null {
-  for (const s of segments(d)) {
+export function frontShareAtLowPressure(d: Distribution, segs: readonly Segment[] = segments(d)): number | null {
+  for (const s of segs) {
     if (s.b1 > 0 && s.b2 > 0) return s.b1 / (s.b1 + s.b2);
   }
   return null;
+}
+
+/** Forces and pressures at many braking rates at once. */
+export interface ForcesAlong {
+  front: number[];
+  rear: number[];
+  p: number[];
+  p2: number[];
+}
+
+/**
+ * forcesAt for an ascending list of braking rates, walking the breakpoints once instead of searching
+ * for each rate (the curves' hot loop). Same segment choice and the same arithmetic as forcesAt, so the
+ * values are identical to calling it point by point.
+ */
+export function forcesAlong(d: Distribution, zs: ArrayLike<number>): ForcesAlong {
+  const n = zs.length;
+  // Plain arrays of the final length: typed arrays of this size get a separate backing store and
+  // growing arrays are copied, both of which cost more than the loop itself.
+  const out: ForcesAlong = { front: new Array<number>(n), rear: new Array<number>(n), p: new Array<number>(n), p2: new Array<number>(n) };
+  const bz = d.z;
+  const last = bz.length - 2;
+  const pz = d.p;
+  const p2z = d.p2;
+  let j = 0;
+  for (let i = 0; i < n; i++) {
+    const z = zs[i]!;
+    if (!(z > 0)) {
+      out.front[i] = 0;
+      out.rear[i] = 0;
+      out.p[i] = pz ? 0 : NaN;
+      out.p2[i] = p2z ? 0 : NaN;
+      continue;
+    }
+    if (z < bz[j]!) j = 0; // not ascending after all: start the walk again
+    while (j < last && bz[j + 1]! <= z) j++;
+    const frac = (z - bz[j]!) / (bz[j + 1]! - bz[j]!);
+    out.front[i] = lerp(d.t1, j, frac);
+    out.rear[i] = lerp(d.t2, j, frac);
+    out.p[i] = pz ? lerp(pz, j, frac) : NaN;
+    out.p2[i] = p2z ? lerp(p2z, j, frac) : NaN;
+  }
+  return out;
 }

@@ -8,12 +8,20 @@ import { DEFAULT_ADHESION, DEFAULT_AT } from './constants.ts';
 import { crossings } from './crossings.ts';
 import { type Curves, curves } from './curves.ts';
 import type { DesignFile } from './design.ts';
-import { frontShareAtLowPressure } from './distribution.ts';
+import { frontShareAtLowPressure, segments } from './distribution.ts';
 import { firstLock, type LockResult } from './lock-order.ts';
 import { type OperatingPoint, operatingPoint } from './operating-point.ts';
 import { type StateModel, stateModel } from './state-model.ts';
 import type { Warning } from './validate.ts';
 import { LOCKSTEP_VERSION } from './version.ts';
+import type { CheckResult } from './checks/check-result.ts';
+import { runChecks } from './checks/run-checks.ts';
+import { type PedalTravelResult, pedalTravel } from './fluid-volume.ts';
+import { type FailureModeResult, valveFailureModes } from './valve-failure.ts';
+import { type Pitfall, pitfalls } from './pitfalls.ts';
+import { designLimits, type DesignLimits, stateLimits, type StateLimits } from './limits.ts';
+import { type LoadStateOrigin, loadStateOrigin } from './build-up.ts';
+import { type RatingMargins, ratingMargins, ratingWarnings } from './ratings.ts';
 
 export interface LoadStateResult {
   id: string;
@@ -22,6 +30,13 @@ export interface LoadStateResult {
   mass_kg: number;
   front_axle_kg: number;
   cg_height_m: number;
+  /** Where the figures come from (build_up | measured | entered), and the CG height's own source and uncertainty. */
+  derived_from?: LoadStateOrigin['derived_from'];
+  cg_height_derived_from?: LoadStateOrigin['cg_height_derived_from'];
+  cg_height_uncertainty_m?: LoadStateOrigin['cg_height_uncertainty_m'];
+  from_build_up?: LoadStateOrigin['from_build_up'];
+  /** Margins against the `ratings` block (null without one). */
+  ratings?: RatingMargins | null;
   front_axle_static_n: number;
   rear_axle_static_n: number;
   /** ψ = P1 / P. */
@@ -38,6 +53,10 @@ export interface LoadStateResult {
   at: OperatingPoint[];
   warnings: Warning[];
   curves?: Curves;
+  /** Limits at grip (traction, stopping) and the roller-tester prediction (core/limits.ts). */
+  traction: StateLimits['traction'];
+  stopping: StateLimits['stopping'];
+  tester: StateLimits['tester'];
 }
 
 export interface EvaluationResult {
@@ -46,8 +65,18 @@ export interface EvaluationResult {
   design_name: string;
   adhesion_coefficients: number[];
   load_states: LoadStateResult[];
-  checks: unknown[];
+  /** Regulation checks per rule, load state and scenario (core/checks). */
+  checks: CheckResult[];
   warnings: Warning[];
+  /** Failed distribution valve per mode and load state (71/320 Annex II Appendix point 6). */
+  failure_modes: FailureModeResult[];
+  /** Fluid volume and pedal travel, service and one circuit failed. */
+  pedal_travel: PedalTravelResult;
+  /** Practitioner pitfalls the design states facts for. */
+  pitfalls: Pitfall[];
+  /** Regenerative braking and brake heat (null without a `regen` / `heat` block). */
+  regen: DesignLimits['regen'];
+  heat: DesignLimits['heat'];
   caution: string;
 }
 
@@ -56,12 +85,15 @@ export interface EvaluateOptions {
   at?: readonly number[];
   /** Include the plotting series per load state. */
   curves?: boolean;
+  /** Rule-set or rule ids to check (overrides the design's `rules` key; default by category). */
+  rules?: readonly string[];
 }
 
 export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateOptions = {}): LoadStateResult {
   const adhesion = design.adhesion_coefficients ?? [...DEFAULT_ADHESION];
-  const cross = crossings(s.loads, s.dist);
-  const lock = adhesion.map((k) => firstLock(s.loads, s.dist, k));
+  const segs = segments(s.dist); // computed once, shared by the crossings, the lock table and the share
+  const cross = crossings(s.loads, s.dist, segs);
+  const lock = adhesion.map((k) => firstLock(s.loads, s.dist, k, segs));
   const at = (opts.at ?? DEFAULT_AT).map((z) => operatingPoint(s, z));
   const warnings: Warning[] = [];
   const index = design.load_states.indexOf(s.state);
@@ -92,6 +124,7 @@ export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateO
   }
   let lowest: LoadStateResult['lowest_efficiency'] = null;
   for (const l of lock) if (!lowest || l.efficiency < lowest.efficiency) lowest = { adhesion: l.adhesion, efficiency: l.efficiency };
+  warnings.push(...ratingWarnings(design, s.state, index));
   const r: LoadStateResult = {
     id: s.state.id,
     label: s.state.label,
@@ -99,10 +132,12 @@ export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateO
     mass_kg: s.state.mass_kg,
     front_axle_kg: s.state.front_axle_kg,
     cg_height_m: s.state.cg_height_m,
+    ...loadStateOrigin(s.state),
+    ratings: ratingMargins(design, s.state),
     front_axle_static_n: s.loads.P1,
     rear_axle_static_n: s.loads.P2,
     static_front_share: s.loads.psi,
-    front_share_low_pressure: frontShareAtLowPressure(s.dist),
+    front_share_low_pressure: frontShareAtLowPressure(s.dist, segs),
     rear_lift_off_braking_rate: zLift,
     critical_braking_rate: cross.critical,
     critical_braking_rates: cross.rates,
@@ -110,6 +145,7 @@ export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateO
     lowest_efficiency: lowest,
     at,
     warnings,
+    ...stateLimits(design, s, adhesion),
   };
   if (opts.curves) r.curves = curves(s, cross.rates, cross.critical);
   return r;
@@ -127,8 +163,12 @@ export function evaluate(design: DesignFile, opts: EvaluateOptions & { warnings?
     design_name: design.name,
     adhesion_coefficients: design.adhesion_coefficients ?? [...DEFAULT_ADHESION],
     load_states: models.map((m) => evaluateState(design, m, opts)),
-    checks: [],
+    checks: runChecks(design, models, { rules: opts.rules }),
     warnings: opts.warnings ?? [],
+    failure_modes: valveFailureModes(design, models, design.adhesion_coefficients ?? [...DEFAULT_ADHESION]),
+    pedal_travel: pedalTravel(design, models),
+    pitfalls: pitfalls(design),
+    ...designLimits(design, models, design.adhesion_coefficients ?? [...DEFAULT_ADHESION]),
     caution: CAUTION,
   };
 }

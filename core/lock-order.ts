@@ -6,7 +6,7 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { SIMULTANEOUS_LOCK_DZ } from './constants.ts';
-import { type Distribution, segments } from './distribution.ts';
+import { type Distribution, type Segment, segments } from './distribution.ts';
 
 export type FirstAxle = 'front' | 'rear' | 'both' | 'none';
 
@@ -22,8 +22,8 @@ export interface LockResult {
 }
 
 /** Smallest z ≥ 0 with T_i(z) − k N_i(z) ≥ 0, where N_i = n0 + n1 z; null when none below zMax. */
-function firstReach(d: Distribution, axle: 1 | 2, k: number, n0: number, n1: number, zMax: number): number | null {
-  for (const s of segments(d)) {
+function firstReach(segs: readonly Segment[], axle: 1 | 2, k: number, n0: number, n1: number, zMax: number): number | null {
+  for (const s of segs) {
     if (s.zFrom >= zMax) break;
     const a = axle === 1 ? s.a1 : s.a2;
     const b = axle === 1 ? s.b1 : s.b2;
@@ -40,9 +40,10 @@ function firstReach(d: Distribution, axle: 1 | 2, k: number, n0: number, n1: num
   return null;
 }
 
-export function firstLock(m: AxleLoadModel, d: Distribution, k: number): LockResult {
-  const zFront = firstReach(d, 1, k, m.P1, m.chi * m.P, m.zLift);
-  const zRear = firstReach(d, 2, k, m.P2, -m.chi * m.P, m.zLift);
+/** `segs` may be passed in when the caller has them already (segments(d) of the same distribution). */
+export function firstLock(m: AxleLoadModel, d: Distribution, k: number, segs: readonly Segment[] = segments(d)): LockResult {
+  const zFront = firstReach(segs, 1, k, m.P1, m.chi * m.P, m.zLift);
+  const zRear = firstReach(segs, 2, k, m.P2, -m.chi * m.P, m.zLift);
   let first: FirstAxle;
   let z: number;
   if (zFront === null && zRear === null) {

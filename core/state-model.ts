@@ -4,17 +4,18 @@
  */
 import { type AxleLoadModel, axleLoadModel } from './axle-loads.ts';
 import { brakeGain } from './brake-gain.ts';
-import { G_N, PA_PER_BAR } from './constants.ts';
+import { PA_PER_BAR } from './constants.ts';
 import type { DesignFile, LoadState } from './design.ts';
 import type { Distribution } from './distribution.ts';
 import { installedDistribution } from './installed-distribution.ts';
 import { type PedalModel, pedalModel } from './pedal-force.ts';
 import { type ValveLaw, valveLaw } from './rear-valve.ts';
+import { balanceBarPressureRatio } from './sizing/sizing-schema.ts';
 
 export interface StateModel {
   state: LoadState;
   loads: AxleLoadModel;
-  /** Brake gains, N/Pa, and thresholds, Pa. */
+  /** Brake gains, N/Pa, and thresholds, Pa (with a balance bar the rear ones are referred to the front line pressure). */
   G1: number;
   G2: number;
   threshold1: number;
@@ -27,11 +28,23 @@ export interface StateModel {
 export function stateModel(design: DesignFile, state: LoadState): StateModel {
   const loads = axleLoadModel(state.mass_kg, state.front_axle_kg, state.cg_height_m, design.vehicle.wheelbase_m);
   const G1 = brakeGain(design.axles.front.brake, design.axles.front.tyre_radius_m);
-  const G2 = brakeGain(design.axles.rear.brake, design.axles.rear.tyre_radius_m);
+  const G2own = brakeGain(design.axles.rear.brake, design.axles.rear.tyre_radius_m);
   const threshold1 = design.axles.front.brake.threshold_pressure_bar * PA_PER_BAR;
-  const threshold2 = design.axles.rear.brake.threshold_pressure_bar * PA_PER_BAR;
-  const valve = valveLaw(design.hydraulics.rear_valve, loads.P2 / G_N);
+  const threshold2own = design.axles.rear.brake.threshold_pressure_bar * PA_PER_BAR;
+  // Rear static axle load in kg taken from the file directly (P2 / g would carry rounding error).
+  const law = valveLaw(design.hydraulics.rear_valve, state.mass_kg - state.front_axle_kg);
   const h = design.hydraulics;
+  // Balance bar (two master cylinders): the rear master pressure is λ·p, so the rear gain, threshold and
+  // valve knee are referred to the front pressure p (G2·λ, threshold2/λ, knee/λ) and the rear line
+  // pressures scaled back by λ; the pedal sees the front bore over the bar's front share.
+  const bar = h.balance_bar;
+  const lambda = bar ? balanceBarPressureRatio(h.master_cylinder_bore_mm, bar) : 1;
+  const G2 = G2own * lambda;
+  const threshold2 = threshold2own / lambda;
+  const valve = bar ? { knee: law.knee / lambda, ratio: law.ratio } : law;
+  const dist = installedDistribution({ P: loads.P, G1, G2, threshold1, threshold2, valve });
+  if (bar) dist.p2 = dist.p2!.map((q) => q * lambda);
+  const bore = bar ? h.master_cylinder_bore_mm / Math.sqrt(bar.setting_front_share) : h.master_cylinder_bore_mm;
   return {
     state,
     loads,
@@ -40,7 +53,7 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
     threshold1,
     threshold2,
     valve,
-    dist: installedDistribution({ P: loads.P, G1, G2, threshold1, threshold2, valve }),
-    pedal: pedalModel(h.master_cylinder_bore_mm, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar),
+    dist,
+    pedal: pedalModel(bore, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar),
   };
 }

@@ -3,6 +3,7 @@
  * and add warnings for values that are allowed but odd.
  */
 import type { z } from 'zod';
+import { resolveBuildUp } from './build-up.ts';
 import { DesignFile, describeValue } from './design.ts';
 
 export interface FieldIssue {
@@ -35,9 +36,9 @@ export function unitOfKey(path: ReadonlyArray<PropertyKey>): string {
   for (let i = path.length - 1; i >= 0; i--) {
     const k = path[i];
     if (typeof k !== 'string') continue;
-    const m = /_(kg|m|mm|bar|n|deg|s|ms2|kmh|pct)$/.exec(k);
+    const m = /_(per_bar_mm3|mm3|kg|m|mm|bar|n|deg|s|ms2|kmh|pct)$/.exec(k);
     if (!m) return '';
-    return { kg: 'kg', m: 'm', mm: 'mm', bar: 'bar', n: 'N', deg: '°', s: 's', ms2: 'm/s²', kmh: 'km/h', pct: '%' }[m[1]!] ?? '';
+    return { per_bar_mm3: 'mm³/bar', mm3: 'mm³', kg: 'kg', m: 'm', mm: 'mm', bar: 'bar', n: 'N', deg: '°', s: 's', ms2: 'm/s²', kmh: 'km/h', pct: '%' }[m[1]!] ?? '';
   }
   return '';
 }
@@ -155,7 +156,12 @@ export function designWarnings(d: DesignFile): Warning[] {
 }
 
 export function readDesign(input: unknown): DesignReading {
-  const r = DesignFile.safeParse(input);
-  if (!r.success) return { ok: false, errors: r.error.issues.map((iss) => describeIssue(iss, input)) };
-  return { ok: true, design: r.data, warnings: designWarnings(r.data) };
+  // Load states that name `from_build_up` get their figures from the build-up first (core/build-up.ts).
+  const pre = resolveBuildUp(input);
+  const r = DesignFile.safeParse(pre.input);
+  if (!r.success || pre.issues.length > 0) {
+    const errors = r.success ? [] : r.error.issues.map((iss) => describeIssue(iss, pre.input)).filter((e) => !pre.suppress.includes(e.path));
+    return { ok: false, errors: [...pre.issues, ...errors] };
+  }
+  return { ok: true, design: r.data, warnings: [...designWarnings(r.data), ...pre.warnings] };
 }

@@ -1,6 +1,6 @@
-/** `lockstep evaluate FILE [--at z1,z2,...] [--json]`: exit 0 all checks pass, 1 a check fails, 2 invalid input. */
+/** `lockstep evaluate FILE [--at z1,z2,...] [--rules id,id] [--json]`: exit 0 all checks pass, 1 a check fails, 2 invalid input. */
 import { parseArgs } from 'node:util';
-import { evaluate, readDesign } from '../../core/index.ts';
+import { evaluate, failedChecks, readDesign, RULE_SELECTORS } from '../../core/index.ts';
 import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
 import { textReport } from '../text-report.ts';
@@ -17,19 +17,31 @@ export function parseBrakingRates(text: string): number[] {
   });
 }
 
+/** `--rules eu-appendix,fmvss135`: rule-set ids or single rule ids, each one known. */
+export function parseRuleSelection(text: string): string[] {
+  const ids = text.split(',').map((s) => s.trim());
+  for (const id of ids) {
+    if (!RULE_SELECTORS.includes(id)) {
+      throw cliErrors.usage(`--rules: "${id}" is not a rule set or rule; use one or more of ${RULE_SELECTORS.join(', ')} separated by commas`);
+    }
+  }
+  return ids;
+}
+
 export function evaluateCommand(argv: string[], out: CommandOutput): number {
   const { values, positionals } = parseArgs({
     args: argv,
-    options: { at: { type: 'string' }, json: { type: 'boolean', default: false }, curves: { type: 'boolean', default: false } },
+    options: { at: { type: 'string' }, json: { type: 'boolean', default: false }, curves: { type: 'boolean', default: false }, rules: { type: 'string' } },
     allowPositionals: true,
     strict: true,
   });
-  if (positionals.length !== 1) throw cliErrors.usage('usage: lockstep evaluate FILE [--at z1,z2,...] [--json] [--curves]');
+  if (positionals.length !== 1) throw cliErrors.usage('usage: lockstep evaluate FILE [--at z1,z2,...] [--rules id,id,...] [--json] [--curves]');
   const file = positionals[0]!;
   const at = values.at === undefined ? undefined : parseBrakingRates(values.at);
+  const rules = values.rules === undefined ? undefined : parseRuleSelection(values.rules);
   const reading = readDesign(readJsonFile(file));
   if (!reading.ok) throw cliErrors.invalid(file, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
-  const result = evaluate(reading.design, { at, curves: values.curves, warnings: reading.warnings });
+  const result = evaluate(reading.design, { at, curves: values.curves, rules, warnings: reading.warnings });
   out.stdout(values.json ? JSON.stringify(result, null, 2) : textReport(result));
-  return result.checks.some((c) => (c as { passed?: boolean }).passed === false) ? 1 : 0;
+  return failedChecks(result.checks).length > 0 ? 1 : 0;
 }

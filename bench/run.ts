@@ -1,0 +1,32 @@
+/**
+ * Benchmark dispatcher: `npm run bench` runs every benchmark, `npm run bench -- engine` only the one
+ * named. Each benchmark is a module in this folder exporting `run(): Promise<void> | void` that prints
+ * its own figures; add a line to `benchmarks` to register a new one. Benchmarks only print: timing is
+ * never asserted in tests (the machine is shared).
+ */
+type Benchmark = { summary: string; load: () => Promise<{ run: () => void | Promise<void> }> };
+
+const benchmarks: Record<string, Benchmark> = {
+  engine: { summary: 'evaluate() on the demo design against a closed-form floor', load: () => import('./engine.ts') },
+};
+
+async function main(argv: string[]): Promise<number> {
+  if (argv.includes('--help') || argv.includes('-h')) {
+    console.log(`usage: npm run bench [-- name ...]\n\n${Object.entries(benchmarks).map(([n, b]) => `  ${n.padEnd(12)} ${b.summary}`).join('\n')}`);
+    return 0;
+  }
+  const names = argv.length > 0 ? argv : Object.keys(benchmarks);
+  const unknown = names.filter((n) => !(n in benchmarks));
+  if (unknown.length > 0) {
+    console.error(`unknown benchmark ${unknown.map((n) => `"${n}"`).join(', ')}; known: ${Object.keys(benchmarks).join(', ')}`);
+    return 2;
+  }
+  for (const name of names) {
+    console.log(`== ${name}: ${benchmarks[name]!.summary}`);
+    const mod = await benchmarks[name]!.load();
+    await mod.run();
+  }
+  return 0;
+}
+
+process.exitCode = await main(process.argv.slice(2));

@@ -1,0 +1,80 @@
+/**
+ * Canonical JSON: one text for one content, so that a hash of it can name a design revision.
+ * Rules: object keys sorted by UTF-16 code units (JSON.stringify order of a sorted key list), no whitespace,
+ * keys whose value is undefined left out (as JSON does), numbers normalised (-0 → 0; rounded to
+ * CANONICAL_DIGITS significant digits, which removes conversion noise such as 0.30000000000000004, then
+ * printed in the shortest round-trip form ECMAScript defines for Number.prototype.toString).
+ * Non-finite numbers, functions, symbols and bigints have no JSON form and are refused.
+ */
+/** A value that has no canonical JSON form (a programming error at the caller: designs are parsed JSON). */
+export class CanonicalJsonError extends Error {
+  constructor(
+    readonly code: 'CORE_ERR_CANONICAL_NON_FINITE' | 'CORE_ERR_CANONICAL_TYPE',
+    message: string,
+  ) {
+    super(message);
+    this.name = 'CanonicalJsonError';
+  }
+}
+
+/** Significant digits kept in canonical numbers: below the 15.95 digits a double carries. */
+export const CANONICAL_DIGITS = 15;
+
+export function canonicalNumber(n: number): string {
+  if (!Number.isFinite(n)) throw new CanonicalJsonError('CORE_ERR_CANONICAL_NON_FINITE', `${String(n)} has no JSON form (numbers must be finite)`);
+  if (n === 0) return '0';
+  return String(Number(n.toPrecision(CANONICAL_DIGITS)));
+}
+
+function write(v: unknown, path: string, out: string[]): void {
+  if (v === null) {
+    out.push('null');
+    return;
+  }
+  switch (typeof v) {
+    case 'number':
+      try {
+        out.push(canonicalNumber(v));
+      } catch (e) {
+        throw new CanonicalJsonError('CORE_ERR_CANONICAL_NON_FINITE', `${path || '(root)'}: ${(e as Error).message}`);
+      }
+      return;
+    case 'string':
+      out.push(JSON.stringify(v));
+      return;
+    case 'boolean':
+      out.push(v ? 'true' : 'false');
+      return;
+    case 'object': {
+      if (Array.isArray(v)) {
+        out.push('[');
+        v.forEach((item, i) => {
+          if (i > 0) out.push(',');
+          // JSON writes undefined array members as null
+          write(item === undefined ? null : item, `${path}[${i}]`, out);
+        });
+        out.push(']');
+        return;
+      }
+      const obj = v as Record<string, unknown>;
+      const keys = Object.keys(obj).filter((k) => obj[k] !== undefined).sort();
+      out.push('{');
+      keys.forEach((k, i) => {
+        if (i > 0) out.push(',');
+        out.push(JSON.stringify(k), ':');
+        write(obj[k], path ? `${path}.${k}` : k, out);
+      });
+      out.push('}');
+      return;
+    }
+    default:
+      throw new CanonicalJsonError('CORE_ERR_CANONICAL_TYPE', `${path || '(root)'}: a ${typeof v} has no JSON form`);
+  }
+}
+
+/** The canonical JSON text of a JSON-like value. */
+export function canonicalJson(value: unknown): string {
+  const out: string[] = [];
+  write(value, '', out);
+  return out.join('');
+}

@@ -1,0 +1,60 @@
+/**
+ * One regulation check on one load state (and scenario): the data object the CLI JSON, the page
+ * and the evidence packet show unchanged.
+ */
+import { VERIFY_NOTE } from '../caution.ts';
+import type { RuleSource, RuleStatus } from '../rules/rule-types.ts';
+import type { BranchVerdict } from './curve-check.ts';
+
+export type CheckScenario =
+  | 'as_designed'
+  | 'abs_failed'
+  | 'front_circuit_only'
+  | 'rear_circuit_only'
+  | 'one_diagonal'
+  | 'no_booster_assist'
+  | 'facing_uphill'
+  | 'facing_downhill'
+  | 'parking_brake_capacity';
+
+export type MarginUnit = 'adhesion' | 'm/s²' | 'N';
+
+export interface CheckResult {
+  /** Rule id, e.g. `eu-appendix/lock-order`. */
+  rule: string;
+  rule_set: string;
+  title: string;
+  source: RuleSource;
+  status: RuleStatus;
+  /** Load-state id; null for a verdict about the whole design (rule not applicable). */
+  load_state: string | null;
+  scenario: CheckScenario;
+  /** False when the rule does not apply (ABS, category, mass, load state); then passed is null. */
+  applies: boolean;
+  passed: boolean | null;
+  /** True for results shown for information that do not decide the exit status (the ABS-failed case). */
+  advisory: boolean;
+  /** Signed: positive = met with room to spare. */
+  worst_margin: number | null;
+  margin_unit: MarginUnit;
+  worst_at_braking_rate: number | null;
+  failing_ranges: [number, number][];
+  /** Curve rules: the branch that passed (main requirement or an accepted alternative). */
+  branch: string | null;
+  branches?: BranchVerdict[];
+  /** VERIFY_NOTE when the status is not "verified". */
+  verify_note?: string;
+  /** What the figures mean, why the rule does not apply, what limited the result. */
+  note?: string;
+  /** Figures behind the verdict, units in the key names. */
+  details?: Record<string, number | string | boolean | null>;
+}
+
+export function verifyNoteFor(status: RuleStatus): { verify_note?: string } {
+  return status === 'verified' ? {} : { verify_note: VERIFY_NOTE };
+}
+
+/** Checks that decide the outcome and did not pass (advisory and not-applicable results excluded). */
+export function failedChecks(checks: readonly CheckResult[]): CheckResult[] {
+  return checks.filter((c) => c.applies && !c.advisory && c.passed === false);
+}

@@ -1,0 +1,140 @@
+/**
+ * Runs the selected rule sets on every load state of a design and returns one CheckResult per rule,
+ * load state and scenario. Selection: the `--rules` option, else the design's `rules` key, else the
+ * default for the category and ABS (core/rules/index.ts).
+ */
+import type { DesignFile } from '../design.ts';
+import { defaultRuleSelection, selectRules } from '../rules/index.ts';
+import type { CurveRule, DecelerationRule, ParkingRule, Rule } from '../rules/rule-types.ts';
+import type { StateModel } from '../state-model.ts';
+import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-result.ts';
+import { circuitCases } from './circuit-failure.ts';
+import { checkCurveRule } from './curve-check.ts';
+import { checkDeceleration, checkParking } from './performance-check.ts';
+
+export const ABS_EXEMPT_NOTE =
+  'not applicable: ABS directly controls the wheels of every axle (71/320/EEC Annex II Appendix point 1 with Annex X; ' +
+  'R13-H likewise, from memory); the curves are still shown, and the ABS-failed case is checked below as a vehicle without ABS';
+
+export const ABS_FAILED_NOTE = 'ABS failed: evaluated as a vehicle without ABS (the hydraulic valve as designed); shown for information';
+
+function base(rule: Rule, loadState: string | null, scenario: CheckScenario): Omit<CheckResult, 'applies' | 'passed' | 'worst_margin' | 'margin_unit'> {
+  return {
+    rule: rule.id,
+    rule_set: rule.rule_set,
+    title: rule.title,
+    source: rule.source,
+    status: rule.status,
+    load_state: loadState,
+    scenario,
+    advisory: false,
+    worst_at_braking_rate: null,
+    failing_ranges: [],
+    branch: null,
+  };
+}
+
+function marginUnit(rule: Rule): CheckResult['margin_unit'] {
+  return rule.kind === 'curve' || rule.kind === 'parking' ? 'adhesion' : 'm/s²';
+}
+
+function notApplicable(rule: Rule, loadState: string | null, note: string, scenario: CheckScenario = 'as_designed'): CheckResult {
+  return { ...base(rule, loadState, scenario), ...verifyNoteFor(rule.status), applies: false, passed: null, worst_margin: null, margin_unit: marginUnit(rule), note };
+}
+
+function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, advisory: boolean): CheckResult {
+  const v = checkCurveRule(rule, s.loads, s.dist);
+  const lift = v.branches.some((b) => b.lift_off_in_range);
+  const notes = [rule.note ?? ''];
+  if (advisory) notes.unshift(ABS_FAILED_NOTE);
+  if (lift) notes.push(`the rear axle lifts off at z = ${s.loads.zLift.toFixed(3)}, inside the checked range (counted as failing above it)`);
+  return {
+    ...base(rule, s.state.id, scenario),
+    status: v.status,
+    ...verifyNoteFor(v.status),
+    applies: true,
+    passed: v.passed,
+    advisory,
+    worst_margin: v.worst_margin,
+    margin_unit: 'adhesion',
+    worst_at_braking_rate: v.worst_at_braking_rate,
+    failing_ranges: v.failing_ranges,
+    branch: v.branch,
+    branches: v.branches,
+    note: notes.filter(Boolean).join('; '),
+  };
+}
+
+function decelerationResults(design: DesignFile, rule: DecelerationRule, s: StateModel): CheckResult[] {
+  const cases = rule.kind === 'secondary' ? circuitCases(design.hydraulics.circuit_split) : [null];
+  return cases.map((which) => {
+    const o = checkDeceleration(design, s, rule, which);
+    return {
+      ...base(rule, s.state.id, o.scenario),
+      ...verifyNoteFor(rule.status),
+      applies: true,
+      passed: o.passed,
+      worst_margin: o.margin_ms2,
+      margin_unit: 'm/s²',
+      note: o.note,
+      details: o.details,
+    };
+  });
+}
+
+function parkingResults(design: DesignFile, rule: ParkingRule, s: StateModel): CheckResult[] {
+  return checkParking(design, s, rule).map((o) => ({
+    ...base(rule, s.state.id, o.scenario),
+    ...verifyNoteFor(rule.status),
+    applies: true,
+    passed: o.passed,
+    worst_margin: o.margin,
+    margin_unit: o.margin_unit,
+    note: o.note,
+    details: o.details,
+  }));
+}
+
+export interface RunChecksOptions {
+  /** Rule-set or rule ids; overrides the design's `rules` key. */
+  rules?: readonly string[];
+}
+
+/** The selection in force for a design: option, design key, or the default. */
+export function ruleSelection(design: DesignFile, opts: RunChecksOptions = {}): string[] {
+  return [...(opts.rules ?? design.rules ?? defaultRuleSelection(design.vehicle.category, design.vehicle.abs))];
+}
+
+export function runChecks(design: DesignFile, models: readonly StateModel[], opts: RunChecksOptions = {}): CheckResult[] {
+  const category = design.vehicle.category;
+  // the maximum permitted mass where the design rates it (GVWR), else the heaviest load state
+  const rated = design.ratings?.max_mass_kg;
+  const heaviest = rated ?? Math.max(...models.map((m) => m.state.mass_kg));
+  const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
+  const out: CheckResult[] = [];
+  for (const { rule, covers_category } of selectRules(ruleSelection(design, opts), category)) {
+    if (!covers_category) {
+      out.push(notApplicable(rule, null, `not applicable: ${rule.rule_set} has no requirement "${rule.id}" for category ${category} (covers ${rule.categories.join(', ')})`));
+      continue;
+    }
+    if (rule.max_mass_kg !== undefined && heaviest > rule.max_mass_kg) {
+      out.push(notApplicable(rule, null, `not applicable: covers vehicles up to ${rule.max_mass_kg} kg; ${massWords} ${heaviest} kg`));
+      continue;
+    }
+    const states = rule.load_states === 'all' ? models : models.filter((m) => (rule.load_states as readonly string[]).includes(m.state.kind));
+    if (states.length === 0) {
+      out.push(notApplicable(rule, null, `not checked: needs a load state of kind ${(rule.load_states as readonly string[]).join(' or ')}`));
+      continue;
+    }
+    for (const s of states) {
+      if (rule.kind === 'curve') {
+        if (rule.abs_exempt && design.vehicle.abs) {
+          out.push(notApplicable(rule, s.state.id, ABS_EXEMPT_NOTE));
+          out.push(curveResult(rule, s, 'abs_failed', true));
+        } else out.push(curveResult(rule, s, 'as_designed', false));
+      } else if (rule.kind === 'parking') out.push(...parkingResults(design, rule, s));
+      else out.push(...decelerationResults(design, rule, s));
+    }
+  }
+  return out;
+}

@@ -1,0 +1,145 @@
+/**
+ * Pitfall warnings: things converters report getting wrong and inspectors ask about
+ * (/work/shared/reference/field-practice.md, sections 1, 2 and 4 item 12). Each warning names the
+ * practice or regime it comes from. They use the optional `base_vehicle` and `conversion` blocks and
+ * fire only on facts the design states; a design without those blocks raises none.
+ */
+import type { DesignFile } from './design.ts';
+
+export interface Pitfall {
+  code: string;
+  /** Field a person would look at or change. */
+  path: string;
+  message: string;
+  /** Practice or regime the warning comes from. */
+  source: string;
+}
+
+/** Tyre rolling-radius change that triggers a brake reassessment, as a share of the base radius. */
+export const TYRE_RADIUS_CHANGE_LIMIT = 0.07;
+
+const SRC = {
+  tyre: 'NSW Brake assessment manual (RMS 2013) Table 1: a wheel/tyre diameter change above ±7 % triggers a brake assessment (field-practice 1.1, practitioner source)',
+  bias: 'UK IVA practice: a bias adjuster the driver can reach fails; a balance bar set front-first and pinned was accepted (field-practice 1.3, practitioner sources)',
+  abs: 'NSW: no certificate when the modification disables ESC (field-practice 1.1); NZ entry certification needs an ABS declaration (1.2); examiners expect ABS and ESP to keep working (section 2, EV conversions)',
+  lsv: 'Practitioner reports: helper springs, air assistance, lift or lowering stop a load-sensing valve reading the load; its linkage must be reset (field-practice section 2)',
+  split: 'NSW Brake assessment manual Table 1: converting a diagonal split to a front/rear split triggers a brake assessment (field-practice 1.1, practitioner source)',
+  drumMc: 'Practitioner reports: calipers need more fluid than drums, so a drum-system master cylinder may lack displacement; drum residual valves (about 0.7 bar) do not suit discs (field-practice sections 2 and 3)',
+  booster: 'NSW Brake assessment manual Table 1: removing the booster triggers a brake assessment; plate test at 500 N with the booster disconnected (field-practice 1.1)',
+  vacuum: 'EV-conversion practice: without engine vacuum an electric vacuum pump and reservoir are needed (field-practice section 2, EV conversions)',
+} as const;
+
+export function pitfalls(design: DesignFile): Pitfall[] {
+  const out: Pitfall[] = [];
+  const base = design.base_vehicle;
+  const conv = design.conversion;
+  const h = design.hydraulics;
+
+  for (const axle of ['front', 'rear'] as const) {
+    const was = axle === 'front' ? base?.front_tyre_radius_m : base?.rear_tyre_radius_m;
+    const now = design.axles[axle].tyre_radius_m;
+    if (was !== undefined) {
+      const change = now / was - 1;
+      if (Math.abs(change) > TYRE_RADIUS_CHANGE_LIMIT) {
+        out.push({
+          code: 'PITFALL_TYRE_RADIUS_CHANGED',
+          path: `axles.${axle}.tyre_radius_m`,
+          message:
+            `${axle} tyre rolling radius ${now} m is ${change > 0 ? '+' : ''}${(change * 100).toFixed(1)} % from the base vehicle's ${was} m ` +
+            `(more than ±${(TYRE_RADIUS_CHANGE_LIMIT * 100).toFixed(0)} %): brake torque per unit of braking force changes; expect a brake reassessment`,
+          source: SRC.tyre,
+        });
+      }
+    }
+  }
+
+  if (conv?.bias_adjuster === 'driver_adjustable') {
+    out.push({
+      code: 'PITFALL_BIAS_ADJUSTER_REACHABLE',
+      path: 'conversion.bias_adjuster',
+      message: 'the driver can reach the front/rear bias adjuster: set it so the front axle locks first and lock or pin it',
+      source: SRC.bias,
+    });
+  }
+
+  if (base?.abs === true && !design.vehicle.abs) {
+    out.push({
+      code: 'PITFALL_ABS_LOST',
+      path: 'vehicle.abs',
+      message: 'the base vehicle had antilock brakes but they do not work in the conversion: many regimes will not certify it',
+      source: SRC.abs,
+    });
+  }
+  if (base?.stability_control === true && conv?.stability_control_working !== true) {
+    out.push({
+      code: 'PITFALL_STABILITY_CONTROL_LOST',
+      path: 'conversion.stability_control_working',
+      message:
+        conv?.stability_control_working === false
+          ? 'the base vehicle had stability control but it does not work in the conversion: some regimes refuse a certificate'
+          : 'the base vehicle had stability control and the design does not state that it still works (conversion.stability_control_working)',
+      source: SRC.abs,
+    });
+  }
+
+  if (h.rear_valve.type === 'load_sensing' && conv?.suspension_modified === true) {
+    out.push({
+      code: 'PITFALL_LOAD_SENSING_SUSPENSION',
+      path: 'hydraulics.rear_valve',
+      message:
+        'a load-sensing valve on modified suspension no longer reads the load as designed: reset or re-set its linkage ' +
+        'for the new ride height and check the rear pressure with gauges before and after the valve, laden and unladen',
+      source: SRC.lsv,
+    });
+  }
+
+  if (base?.circuit_split === 'diagonal' && h.circuit_split === 'front_rear') {
+    out.push({
+      code: 'PITFALL_SPLIT_CHANGED',
+      path: 'hydraulics.circuit_split',
+      message: 'the diagonal split of the base vehicle became a front/rear split: with the front circuit lost only the rear brakes remain',
+      source: SRC.split,
+    });
+  }
+
+  const discAxles = (['front', 'rear'] as const).filter((a) => design.axles[a].brake.type === 'disc');
+  const swapped = discAxles.filter((a) => (a === 'front' ? base?.front_brake_type : base?.rear_brake_type) === 'drum');
+  const drumMc = conv?.master_cylinder_from_drum_system === true || (swapped.length > 0 && conv?.master_cylinder_replaced !== true);
+  if (discAxles.length > 0 && drumMc) {
+    out.push({
+      code: 'PITFALL_DRUM_MASTER_CYLINDER',
+      path: 'hydraulics.master_cylinder_bore_mm',
+      message:
+        (swapped.length > 0 && conv?.master_cylinder_from_drum_system !== true
+          ? `drums were changed to discs (${swapped.join(', ')}) and the master cylinder is not stated as replaced`
+          : 'discs are fitted and the master cylinder came from a drum system') +
+        ': check its displacement against the calipers (see the pedal-travel result) and remove any drum residual valve',
+      source: SRC.drumMc,
+    });
+  }
+
+  if (base?.booster === true && h.booster_ratio === 1) {
+    out.push({
+      code: 'PITFALL_BOOSTER_REMOVED',
+      path: 'hydraulics.booster_ratio',
+      message: 'the base vehicle had a brake booster and the design has none: pedal forces rise by the booster ratio',
+      source: SRC.booster,
+    });
+  }
+  if (h.booster_ratio > 1) {
+    const src = conv?.booster_source;
+    const gone = src === 'none' || (src === 'engine_vacuum' && conv?.engine_removed === true);
+    const unstated = src === undefined && conv?.engine_removed === true;
+    if (gone || unstated) {
+      out.push({
+        code: 'PITFALL_BOOSTER_NO_VACUUM',
+        path: 'conversion.booster_source',
+        message: unstated
+          ? 'the engine was removed and the design does not state what powers the booster: an electric vacuum pump and reservoir are needed'
+          : 'the booster has no working vacuum or power source: without it the pedal force rises by the booster ratio; fit an electric vacuum pump and reservoir',
+        source: SRC.vacuum,
+      });
+    }
+  }
+  return out;
+}

@@ -1,0 +1,452 @@
+/**
+ * Regenerative braking on the driven axle(s), design-file block `regen` (docs/design-file.md).
+ *
+ * Largest regenerative braking force at the road against vehicle speed v:
+ *   F_max = max_motor_torque_nm · gear_ratio / R_driven          (constant torque)
+ *   above the base speed v_b = P_max / F_max: F = P_max / v      (constant power)
+ *   from fade_start_kmh down to cutoff_kmh the force fades linearly to zero; none below cutoff_kmh.
+ * R_driven is the driven axle's tyre radius (for all-wheel drive the mean of the two, weighted by
+ * front_share). Driveline losses are not modelled (the torque is taken as reaching the wheels).
+ *
+ * Blending (how the pedal demand is shared), both built as a `Distribution` so lock order, crossings
+ * and utilisation work unchanged:
+ *   regen_first       the regenerative force R covers the demand z·P first; friction (the installed
+ *                     hydraulic distribution) supplies the rest: T_i = R_i + T_i,friction((zP − R)/P);
+ *   fixed_proportion  the pedal drives the friction brakes as installed and regeneration adds
+ *                     proportion × the friction force on top, capped at R.
+ * R is split front_share : (1 − front_share) (1 front drive, 0 rear drive; for all-wheel drive the
+ * block's front_share, default 0.5).
+ */
+import type { AxleLoadModel } from './axle-loads.ts';
+import { VERIFY_NOTE } from './caution.ts';
+import { checkCurveRule } from './checks/curve-check.ts';
+import { ruleSelection } from './checks/run-checks.ts';
+import { crossings } from './crossings.ts';
+import type { DesignFile, Regen } from './design.ts';
+import { type Distribution, forcesAt } from './distribution.ts';
+import { firstLock } from './lock-order.ts';
+import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
+import { type CurveRule, type RuleStatus, selectRules } from './rules/index.ts';
+import type { StateModel } from './state-model.ts';
+
+/** Defaults for the optional keys (engineering choices, documented in docs/design-file.md). */
+export const REGEN_DEFAULTS = {
+  fade_start_kmh: 15,
+  cutoff_kmh: 5,
+  all_wheel_front_share: 0.5,
+  speeds_kmh: [20, 50, 80, 120],
+} as const;
+
+export type RegenBlendingSpec = { type: 'regen_first' } | { type: 'fixed_proportion'; proportion: number };
+
+export interface RegenSetup {
+  /** Constant-torque force at the road, N. */
+  maxForce: number;
+  /** Power limit, W. */
+  maxPower: number;
+  /** Speeds, m/s. */
+  fadeStart: number;
+  cutoff: number;
+  blending: RegenBlendingSpec;
+  /** Share of the regenerative force on the front axle. */
+  frontShare: number;
+  /** Tyre radius the torque acts through, m, and the motor-to-wheel ratio. */
+  radius: number;
+  gearRatio: number;
+  speeds: number[];
+}
+
+export function regenSetup(design: DesignFile, r: Regen): RegenSetup {
+  const drive = design.vehicle.drive;
+  const frontShare = drive === 'front' ? 1 : drive === 'rear' ? 0 : (r.front_share ?? REGEN_DEFAULTS.all_wheel_front_share);
+  const radius = frontShare * design.axles.front.tyre_radius_m + (1 - frontShare) * design.axles.rear.tyre_radius_m;
+  return {
+    maxForce: (r.max_motor_torque_nm * r.gear_ratio) / radius,
+    maxPower: r.max_power_kw * 1e3,
+    fadeStart: (r.fade_start_kmh ?? REGEN_DEFAULTS.fade_start_kmh) / 3.6,
+    cutoff: (r.cutoff_kmh ?? REGEN_DEFAULTS.cutoff_kmh) / 3.6,
+    blending: r.blending,
+    frontShare,
+    radius,
+    gearRatio: r.gear_ratio,
+    speeds: [...(r.speeds_kmh ?? REGEN_DEFAULTS.speeds_kmh)],
+  };
+}
+
+/** Base speed where constant torque gives way to constant power, m/s. */
+export function regenBaseSpeed(s: RegenSetup): number {
+  return s.maxPower / s.maxForce;
+}
+
+/** Largest regenerative braking force at the road at speed v (m/s), N. */
+export function regenForceAt(s: RegenSetup, v: number): number {
+  if (!(v > s.cutoff)) return 0;
+  const full = Math.min(s.maxForce, s.maxPower / v);
+  if (v >= s.fadeStart) return full;
+  return (full * (v - s.cutoff)) / (s.fadeStart - s.cutoff);
+}
+
+/**
+ * The distribution with a regenerative force R (N) on the driven axle(s) added to a friction
+ * distribution. Exact: the result is piecewise linear with breakpoints where regeneration saturates
+ * and at the friction distribution's own breakpoints. R = 0 gives the friction distribution back.
+ * The line pressures are kept only for fixed_proportion (the pedal still drives the friction brakes);
+ * with regen_first the pedal does not set the pressure directly, so they are left out.
+ */
+export function regenDistribution(friction: Distribution, R: number, frontShare: number, blending: RegenBlendingSpec): Distribution {
+  if (!(R > 0)) return friction;
+  const P = friction.P;
+  const s = frontShare;
+  if (blending.type === 'regen_first') {
+    const zr = R / P;
+    const d: Distribution = { P, z: [0, zr], t1: [0, s * R], t2: [0, (1 - s) * R] };
+    for (let j = 0; j < friction.z.length; j++) {
+      const zf = friction.z[j]!;
+      if (!(zf > 0)) continue;
+      d.z.push(zr + zf);
+      d.t1.push(s * R + friction.t1[j]!);
+      d.t2.push((1 - s) * R + friction.t2[j]!);
+    }
+    return d;
+  }
+  // fixed_proportion: regeneration r(zf) = min(q·zf·P, R) on top of the friction at rate zf.
+  const q = blending.proportion;
+  const zCap = R / (q * P);
+  const pts: { zf: number; t1: number; t2: number; p: number; p2: number }[] = [];
+  for (let j = 0; j < friction.z.length; j++) {
+    pts.push({
+      zf: friction.z[j]!,
+      t1: friction.t1[j]!,
+      t2: friction.t2[j]!,
+      p: friction.p?.[j] ?? NaN,
+      p2: friction.p2?.[j] ?? NaN,
+    });
+  }
+  const lastZf = pts[pts.length - 1]!.zf;
+  const addAt = (zf: number) => {
+    const f = forcesAt(friction, zf);
+    pts.push({ zf, t1: f.front, t2: f.rear, p: f.p, p2: f.p2 });
+  };
+  addAt(zCap);
+  if (zCap >= lastZf) addAt(zCap + 1);
+  pts.sort((a, b) => a.zf - b.zf);
+  const hasP = friction.p !== undefined && friction.p2 !== undefined;
+  const d: Distribution = { P, z: [], t1: [], t2: [], ...(hasP ? { p: [], p2: [] } : {}) };
+  for (const pt of pts) {
+    const r = Math.min(q * pt.zf * P, R);
+    d.z.push(pt.zf + r / P);
+    d.t1.push(pt.t1 + s * r);
+    d.t2.push(pt.t2 + (1 - s) * r);
+    if (hasP) {
+      d.p!.push(pt.p);
+      d.p2!.push(pt.p2);
+    }
+  }
+  return d;
+}
+
+export interface RegenLock {
+  adhesion: number;
+  first_axle: string;
+  braking_rate: number;
+  efficiency: number;
+  /** Allowed by the lock-order range (see `rule`). */
+  allowed: boolean;
+}
+
+export interface UtilisationPoint {
+  braking_rate: number;
+  /** Null beyond rear-axle lift-off. */
+  front_utilisation: number | null;
+  rear_utilisation: number | null;
+}
+
+export interface RegenSpeedCase {
+  speed_kmh: number;
+  regen_force_n: number;
+  lock: RegenLock[];
+  critical_braking_rates: number[];
+  critical_braking_rate: number | null;
+  /** Adhesion utilisation at braking rates 0.02 … 1.0 (step 0.02) with this regenerative force. */
+  utilisation: UtilisationPoint[];
+}
+
+export interface RegenLimit {
+  adhesion: number;
+  in_rule_range: boolean;
+  /**
+   * Largest regenerative force (N) that keeps the lock order allowed on this surface; null when no
+   * force up to adhesion × weight upsets it; 0 when it is not allowed even without regeneration.
+   */
+  max_force_n: number | null;
+  max_wheel_torque_nm: number | null;
+  max_motor_torque_nm: number | null;
+  /** That force over the system's constant-torque force (1 = the full capability is allowed). */
+  share_of_capability: number | null;
+}
+
+/** One regulation curve check (core/checks, issue 4) on the distribution with a given regenerative force. */
+export interface RegenCurveCheck {
+  rule: string;
+  title: string;
+  status: RuleStatus;
+  verify_note?: string;
+  /** null: zero regeneration. */
+  speed_kmh: number | null;
+  regen_force_n: number;
+  passed: boolean;
+  branch: string | null;
+  worst_margin: number | null;
+  worst_at_braking_rate: number | null;
+}
+
+export interface RegenStateResult {
+  id: string;
+  zero_regen: { lock: RegenLock[]; utilisation: UtilisationPoint[] };
+  at_speeds: RegenSpeedCase[];
+  limits: RegenLimit[];
+  /** The selected curve rules (lock order, efficiency) with zero regeneration and at each speed. */
+  checks: RegenCurveCheck[];
+  /**
+   * Largest regenerative force (N) with which every selected curve rule still passes, found by bisection
+   * up to the system's constant-torque force; null when the full force passes, 0 when a rule fails
+   * without regeneration already or no curve rule is selected for this load state.
+   */
+  max_force_passing_checks_n: number | null;
+}
+
+export interface RegenFlag {
+  /** surface_lock: the lock-order range (`rule`) on one surface; curve_check: a regulation curve rule. */
+  kind: 'surface_lock' | 'curve_check';
+  /** Rule id for curve_check. */
+  rule: string | null;
+  load_state: string;
+  speed_kmh: number;
+  /** Surface for surface_lock, null for curve_check. */
+  adhesion: number | null;
+  braking_rate: number | null;
+  message: string;
+}
+
+export interface RegenResult {
+  estimate: true;
+  blending: RegenBlendingSpec['type'];
+  proportion: number | null;
+  front_share: number;
+  max_force_n: number;
+  max_power_kw: number;
+  base_speed_kmh: number;
+  fade_start_kmh: number;
+  cutoff_kmh: number;
+  tyre_radius_m: number;
+  gear_ratio: number;
+  /** Force against speed for plotting, every 5 km/h. */
+  force_curve: { speed_kmh: number[]; force_n: number[] };
+  rule: LockOrderRange;
+  load_states: RegenStateResult[];
+  flags: RegenFlag[];
+  notes: string[];
+}
+
+/** The curve rules of the design's rule selection that cover its category and this load-state kind. */
+export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
+  const out: CurveRule[] = [];
+  for (const { rule, covers_category } of selectRules(ruleSelection(design), design.vehicle.category)) {
+    if (!covers_category || rule.kind !== 'curve') continue;
+    if (rule.load_states !== 'all' && !(rule.load_states as readonly string[]).includes(kind)) continue;
+    out.push(rule);
+  }
+  return out;
+}
+
+function curveChecks(rules: readonly CurveRule[], loads: AxleLoadModel, d: Distribution, speed: number | null, R: number): RegenCurveCheck[] {
+  return rules.map((rule) => {
+    const v = checkCurveRule(rule, loads, d);
+    return {
+      rule: rule.id,
+      title: rule.title,
+      status: v.status,
+      ...(v.status === 'verified' ? {} : { verify_note: VERIFY_NOTE }),
+      speed_kmh: speed,
+      regen_force_n: R,
+      passed: v.passed,
+      branch: v.branch,
+      worst_margin: v.worst_margin,
+      worst_at_braking_rate: v.worst_at_braking_rate,
+    };
+  });
+}
+
+function maxForcePassing(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup): number | null {
+  if (rules.length === 0) return 0;
+  const ok = (R: number) =>
+    rules.every((rule) => checkCurveRule(rule, loads, regenDistribution(friction, R, setup.frontShare, setup.blending)).passed);
+  if (!ok(0)) return 0;
+  if (ok(setup.maxForce)) return null;
+  let lo = 0;
+  let up = setup.maxForce;
+  for (let i = 0; i < 40 && up - lo > 1e-6 * setup.maxForce; i++) {
+    const mid = (lo + up) / 2;
+    if (ok(mid)) lo = mid;
+    else up = mid;
+  }
+  return lo;
+}
+
+function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange): RegenLock {
+  const l = firstLock(loads, d, k);
+  return {
+    adhesion: k,
+    first_axle: l.first_axle,
+    braking_rate: l.braking_rate,
+    efficiency: l.efficiency,
+    allowed: lockAllowed(rule, k, l.first_axle, l.braking_rate),
+  };
+}
+
+/**
+ * Largest R in [0, k·P] for which the lock on surface k stays allowed (bisection; adding force to the
+ * driven axle moves its lock monotonically earlier). Null when even k·P keeps it allowed.
+ */
+export function maxAllowedRegenForce(
+  loads: AxleLoadModel,
+  friction: Distribution,
+  k: number,
+  frontShare: number,
+  blending: RegenBlendingSpec,
+  rule: LockOrderRange,
+): number | null {
+  const ok = (R: number) => lockRow(loads, regenDistribution(friction, R, frontShare, blending), k, rule).allowed;
+  const hi = k * friction.P;
+  if (!ok(0)) return 0;
+  if (ok(hi)) return null;
+  let lo = 0;
+  let up = hi;
+  for (let i = 0; i < 60 && up - lo > 1e-9 * hi; i++) {
+    const mid = (lo + up) / 2;
+    if (ok(mid)) lo = mid;
+    else up = mid;
+  }
+  return lo;
+}
+
+const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);
+
+function utilisationSeries(loads: AxleLoadModel, d: Distribution): UtilisationPoint[] {
+  return UTIL_AT.map((z) => {
+    const f = forcesAt(d, z);
+    const n1 = loads.P1 + z * loads.chi * loads.P;
+    const n2 = loads.P2 - z * loads.chi * loads.P;
+    return { braking_rate: z, front_utilisation: n2 > 0 ? f.front / n1 : null, rear_utilisation: n2 > 0 ? f.rear / n2 : null };
+  });
+}
+
+export function regenAnalysis(design: DesignFile, models: readonly StateModel[], adhesions: readonly number[]): RegenResult | null {
+  const r = design.regen;
+  if (!r) return null;
+  const setup = regenSetup(design, r);
+  const rule = lockOrderRange(design.vehicle.category);
+  const flags: RegenFlag[] = [];
+  const states: RegenStateResult[] = models.map((m) => {
+    const zero = adhesions.map((k) => lockRow(m.loads, m.dist, k, rule));
+    const rules = regenCurveRules(design, m.state.kind);
+    const checks = curveChecks(rules, m.loads, m.dist, null, 0);
+    const zeroPassed = new Map(checks.map((c) => [c.rule, c.passed]));
+    const atSpeeds = setup.speeds.map((kmh): RegenSpeedCase => {
+      const R = regenForceAt(setup, kmh / 3.6);
+      const d = regenDistribution(m.dist, R, setup.frontShare, setup.blending);
+      const lock = adhesions.map((k) => lockRow(m.loads, d, k, rule));
+      lock.forEach((l, i) => {
+        if (!l.allowed && zero[i]!.allowed) {
+          flags.push({
+            kind: 'surface_lock',
+            rule: null,
+            load_state: m.state.id,
+            speed_kmh: kmh,
+            adhesion: l.adhesion,
+            braking_rate: l.braking_rate,
+            message:
+              `with ${Math.round(R)} N of regeneration at ${kmh} km/h the ${l.first_axle} axle locks first on adhesion ` +
+              `${l.adhesion} (z = ${l.braking_rate.toFixed(3)}), inside the ${rule.category} lock-order range; ` +
+              'without regeneration the front locks first',
+          });
+        }
+      });
+      for (const c of curveChecks(rules, m.loads, d, kmh, R)) {
+        checks.push(c);
+        if (!c.passed && zeroPassed.get(c.rule)) {
+          flags.push({
+            kind: 'curve_check',
+            rule: c.rule,
+            load_state: m.state.id,
+            speed_kmh: kmh,
+            adhesion: null,
+            braking_rate: c.worst_at_braking_rate,
+            message:
+              `${c.rule} (${c.title}) passes without regeneration but fails with ${Math.round(R)} N at ${kmh} km/h` +
+              (c.worst_at_braking_rate !== null ? `, worst at z = ${c.worst_at_braking_rate.toFixed(3)}` : '') +
+              (c.verify_note ? ` (${c.verify_note})` : ''),
+          });
+        }
+      }
+      const cr = crossings(m.loads, d);
+      const utilisation = utilisationSeries(m.loads, d);
+      return {
+        speed_kmh: kmh,
+        regen_force_n: R,
+        lock,
+        critical_braking_rates: cr.rates,
+        critical_braking_rate: cr.critical,
+        utilisation,
+      };
+    });
+    const limits = adhesions.map((k): RegenLimit => {
+      const F = maxAllowedRegenForce(m.loads, m.dist, k, setup.frontShare, setup.blending, rule);
+      return {
+        adhesion: k,
+        in_rule_range: k >= rule.k_from - 1e-12 && k <= rule.k_to + 1e-12,
+        max_force_n: F,
+        max_wheel_torque_nm: F === null ? null : F * setup.radius,
+        max_motor_torque_nm: F === null ? null : (F * setup.radius) / setup.gearRatio,
+        share_of_capability: F === null ? null : F / setup.maxForce,
+      };
+    });
+    return {
+      id: m.state.id,
+      zero_regen: { lock: zero, utilisation: utilisationSeries(m.loads, m.dist) },
+      at_speeds: atSpeeds,
+      limits,
+      checks,
+      max_force_passing_checks_n: maxForcePassing(rules, m.loads, m.dist, setup),
+    };
+  });
+  const speeds: number[] = [];
+  const forces: number[] = [];
+  const top = Math.max(130, ...setup.speeds);
+  for (let v = 0; v <= top + 1e-9; v += 5) {
+    speeds.push(v);
+    forces.push(regenForceAt(setup, v / 3.6));
+  }
+  return {
+    estimate: true,
+    blending: setup.blending.type,
+    proportion: setup.blending.type === 'fixed_proportion' ? setup.blending.proportion : null,
+    front_share: setup.frontShare,
+    max_force_n: setup.maxForce,
+    max_power_kw: setup.maxPower / 1e3,
+    base_speed_kmh: regenBaseSpeed(setup) * 3.6,
+    fade_start_kmh: setup.fadeStart * 3.6,
+    cutoff_kmh: setup.cutoff * 3.6,
+    tyre_radius_m: setup.radius,
+    gear_ratio: setup.gearRatio,
+    force_curve: { speed_kmh: speeds, force_n: forces },
+    rule,
+    load_states: states,
+    flags,
+    notes: [
+      `Lock order judged against ${rule.source} [${rule.status}]: ${rule.note}.`,
+      'Zero regeneration stands for a full battery, a cold battery or a fault; the regenerative force is the largest the motor may give at that speed.',
+      'Driveline losses, the speed change during the stop and any ABS/EBD intervention are not modelled.',
+    ],
+  };
+}

@@ -1,0 +1,70 @@
+/**
+ * Optional design-file blocks of the sizing assistant (docs/sizing.md):
+ *  - `tolerances`: how well the inputs are known, for the robustness analysis;
+ *  - `hydraulics.balance_bar`: two master cylinders worked by a balance bar.
+ * Defaults are stated here and marked "common practice, no source" unless a reference is named.
+ */
+import { z } from 'zod';
+import { boundedNumber as num, boundedNumberAbove as numAbove } from '../bounded-number.ts';
+
+/**
+ * Tolerances as ± limits. In the Monte Carlo a ± limit is read as two standard deviations (about
+ * 95 % of a normal distribution inside it) or as the bounds of a uniform distribution; the worst-case
+ * corners sit at the ± limits.
+ */
+export const Tolerances = z.strictObject({
+  /** Pad (lining) friction, ± per cent of the nominal value, front and rear brakes separately. */
+  pad_friction_front_pct: num(0, 50).optional(),
+  pad_friction_rear_pct: num(0, 50).optional(),
+  /** CG height, ± m (a load state's cg_height_uncertainty_m, a standard uncertainty, takes precedence: ± = 2 u). */
+  cg_height_m: num(0, 1).optional(),
+  /** Front axle load, ± kg (vehicle mass unchanged: what the front gains the rear loses). */
+  front_axle_kg: num(0, 5000).optional(),
+  /** Dynamic tyre radius, ± per cent (the same tyres front and rear drawn together). */
+  tyre_radius_pct: num(0, 20).optional(),
+  /** Shape of the Monte Carlo draws inside the ± limits. */
+  distribution: z.enum(['normal', 'uniform']).optional(),
+});
+export type Tolerances = z.infer<typeof Tolerances>;
+
+/**
+ * Defaults when a design gives no `tolerances`:
+ *  - pad friction ± 15 %: replacement friction material must stay within ± 15 % of the original
+ *    (New Zealand gazette notice, field-practice.md section 1.2); one market's pad sheet states
+ *    ± 0.05 on about 0.4 (field-practice.md section 3), about ± 12 %;
+ *  - CG height ± 0.05 m, front axle load ± 20 kg (weighbridge reading and load placement), tyre
+ *    radius ± 2 % (wear and pressure): common practice, no source.
+ */
+export const DEFAULT_TOLERANCES = {
+  pad_friction_front_pct: 15,
+  pad_friction_rear_pct: 15,
+  cg_height_m: 0.05,
+  front_axle_kg: 20,
+  tyre_radius_pct: 2,
+  distribution: 'normal',
+} as const satisfies Required<Tolerances>;
+
+/**
+ * Two master cylinders (front and rear circuit) pushed by one balance bar. The front master
+ * cylinder's bore is `hydraulics.master_cylinder_bore_mm`; the bar sends `setting_front_share` of the
+ * pushrod force to it and the rest to the rear one. Front line pressure p1 = s·F / A_f, rear master
+ * pressure = (1 − s)·F / A_r (before the rear valve, if any).
+ */
+export const BalanceBar = z.strictObject({
+  rear_bore_mm: num(10, 60),
+  setting_front_share: numAbove(0, 1).refine((s) => s < 1, { error: 'must be below 1 (the rear master cylinder gets 1 − setting_front_share of the pushrod force)' }),
+  /** True when the driver can reach the adjuster (cockpit knob or cable). Some inspection regimes refuse that. */
+  driver_adjustable: z.boolean().optional(),
+});
+export type BalanceBar = z.infer<typeof BalanceBar>;
+
+/** Rear master pressure per front line pressure for a balance bar: ((1 − s) / s) · (A_f / A_r). */
+export function balanceBarPressureRatio(frontBoreMm: number, bar: BalanceBar): number {
+  const s = bar.setting_front_share;
+  return ((1 - s) / s) * (frontBoreMm / bar.rear_bore_mm) ** 2;
+}
+
+/** The setting that gives a rear/front pressure ratio λ (inverse of balanceBarPressureRatio). */
+export function balanceBarSettingForRatio(frontBoreMm: number, rearBoreMm: number, lambda: number): number {
+  return 1 / (1 + lambda * (rearBoreMm / frontBoreMm) ** 2);
+}

@@ -1,0 +1,136 @@
+/**
+ * buildApp(): the Lockstep web app as a Fastify instance. It never listens (server/main.ts does); tests use
+ * inject() or listen on a random loopback port themselves.
+ *
+ * Features register their routes below, one line each (see DEVELOPERS.md, "Workbench panels" and "Routes").
+ */
+import { createHash } from 'node:crypto';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import compress from '@fastify/compress';
+import formbody from '@fastify/formbody';
+import helmet from '@fastify/helmet';
+import fastifyStatic from '@fastify/static';
+import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
+import type { AssetUrls } from '../views/layout.ts';
+import { messagePage, statusBlock } from '../views/pages/workbench.ts';
+import { AppError, appErrors, BODY_LIMIT } from './errors.ts';
+import { sendHtml } from './html-reply.ts';
+import { workbenchRoutes } from './routes/workbench.ts';
+
+const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
+const STATIC_DIR = join(ROOT, 'static');
+const require = createRequire(import.meta.url);
+
+export interface AppOptions {
+  logger?: boolean;
+}
+
+function packageDir(name: string): { dir: string; version: string } {
+  const pkgJson = require.resolve(`${name}/package.json`);
+  return { dir: dirname(pkgJson), version: (JSON.parse(readFileSync(pkgJson, 'utf8')) as { version: string }).version };
+}
+
+/** A hash of every file under static/, so app assets can be cached for a year under a changing URL. */
+function staticHash(dir: string): string {
+  const h = createHash('sha256');
+  const walk = (d: string): void => {
+    for (const name of readdirSync(d).sort()) {
+      const p = join(d, name);
+      if (statSync(p).isDirectory()) walk(p);
+      else h.update(name).update(readFileSync(p));
+    }
+  };
+  walk(dir);
+  return h.digest('hex').slice(0, 10);
+}
+
+export const CSP_DIRECTIVES = {
+  defaultSrc: ["'self'"],
+  scriptSrc: ["'self'"],
+  // plotly.js writes style elements and style attributes while drawing; no script is allowed inline
+  styleSrc: ["'self'", "'unsafe-inline'"],
+  imgSrc: ["'self'", 'data:', 'blob:'],
+  fontSrc: ["'self'"],
+  connectSrc: ["'self'"],
+  objectSrc: ["'none'"],
+  baseUri: ["'self'"],
+  formAction: ["'self'"],
+  frameAncestors: ["'none'"],
+  upgradeInsecureRequests: null,
+};
+
+const wantsFragment = (req: FastifyRequest) => req.headers['hx-request'] === 'true';
+const wantsHtml = (req: FastifyRequest) => String(req.headers.accept ?? '').includes('text/html');
+
+function sendError(req: FastifyRequest, reply: FastifyReply, e: AppError, assets: AssetUrls): FastifyReply {
+  if (wantsFragment(req)) return sendHtml(reply, statusBlock('error', { message: e.message, code: e.code }), e.statusCode);
+  if (wantsHtml(req)) {
+    const title = e.statusCode === 404 ? 'Page not found' : 'Request not handled';
+    return sendHtml(reply, messagePage(assets, title, e.message, e.code), e.statusCode);
+  }
+  return reply.code(e.statusCode).send({ statusCode: e.statusCode, code: e.code, message: e.message });
+}
+
+export function buildApp(opts: AppOptions = {}): FastifyInstance {
+  const app = Fastify({ logger: opts.logger ?? false, bodyLimit: BODY_LIMIT });
+  const htmx = packageDir('htmx.org');
+  const plotly = packageDir('plotly.js-dist-min');
+  const assets: AssetUrls = {
+    app: `/static/${staticHash(STATIC_DIR)}`,
+    htmx: `/vendor/htmx-${htmx.version}/htmx.min.js`,
+    plotly: `/vendor/plotly-${plotly.version}/plotly.min.js`,
+  };
+  app.decorate('assets', assets);
+
+  app.register(helmet, {
+    contentSecurityPolicy: { useDefaults: false, directives: CSP_DIRECTIVES },
+    strictTransportSecurity: false,
+    crossOriginEmbedderPolicy: false,
+  });
+  app.register(compress, { threshold: 1024 });
+  app.register(formbody, { bodyLimit: BODY_LIMIT });
+
+  const year = { maxAge: '365d', immutable: true, index: false as const };
+  app.register(fastifyStatic, { root: STATIC_DIR, prefix: `${assets.app}/`, ...year });
+  app.register(fastifyStatic, {
+    root: join(htmx.dir, 'dist'),
+    prefix: `/vendor/htmx-${htmx.version}/`,
+    decorateReply: false,
+    allowedPath: (p) => p === '/htmx.min.js',
+    ...year,
+  });
+  app.register(fastifyStatic, {
+    root: plotly.dir,
+    prefix: `/vendor/plotly-${plotly.version}/`,
+    decorateReply: false,
+    allowedPath: (p) => p === '/plotly.min.js',
+    ...year,
+  });
+
+  app.register(async (scope) => workbenchRoutes(scope, assets));
+
+  app.setNotFoundHandler((req, reply) => sendError(req, reply, appErrors.notFound(req.url.split('?')[0]!.slice(0, 200)), assets));
+  app.setErrorHandler((err: FastifyError | AppError, req, reply) => {
+    let e: AppError;
+    if (err instanceof AppError) e = err;
+    else if (err.code === 'FST_ERR_CTP_BODY_TOO_LARGE') e = appErrors.bodyTooLarge();
+    else if (err.code === 'FST_ERR_CTP_INVALID_MEDIA_TYPE') e = appErrors.unsupportedMediaType(String(req.headers['content-type'] ?? 'none'));
+    else if (typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 500) e = appErrors.badRequest(err.message);
+    else {
+      req.log.error(err);
+      e = appErrors.internal();
+    }
+    return sendError(req, reply, e, assets);
+  });
+  return app;
+}
+
+declare module 'fastify' {
+  interface FastifyInstance {
+    /** Versioned URLs of the page's assets. */
+    assets: AssetUrls;
+  }
+}

@@ -1,0 +1,370 @@
+/**
+ * The workbench form and the design file, both ways. A form field's name IS its design-file path
+ * (`vehicle.wheelbase_m`, `load_states[1].mass_kg`, `axles.front.brake.piston_diameters_mm[0]`), so a panel
+ * can add inputs for a new optional block without touching this module. Names starting with "_" are
+ * controls of the page (units, operations) and never reach the design.
+ *
+ * Conventions (also in DEVELOPERS.md, "Adding inputs to the workbench"):
+ * - numbers: a key with a unit suffix (_kg, _m, _mm, _bar, _n, _kmh, _ms2, _deg, _s) is shown and typed in the
+ *   user's unit system; any field also takes a typed unit ("58 in"). Keys whose schema is z.number() without a
+ *   suffix are plain numbers. FIELD_QUANTITIES overrides the quantity for paths whose suffix does not tell
+ *   (the rows of the load-sensing table). An empty number field leaves the key out.
+ * - booleans (schema z.boolean()): a hidden input "false" followed by a checkbox "true"; the last value wins.
+ * - everything else is text, sent as typed (enums are <select>s); empty text leaves the key out.
+ * - objects that end up without keys are left out (an optional block nobody filled in stays absent).
+ */
+import { z } from 'zod';
+import {
+  DISPLAY_UNITS,
+  type DesignFile,
+  type FieldIssue,
+  type Quantity,
+  TO_SI,
+  type Unit,
+  type UnitSystem,
+  type Warning,
+  designShape,
+  formatPath,
+  parseQuantity,
+  readDesign,
+} from '../../core/index.ts';
+
+/** Field name -> text as shown or typed. */
+export type FormValues = Record<string, string>;
+export type PathKey = string | number;
+
+/** Quantity overrides for paths whose key suffix does not say it; first match wins. Add a line for a new block. */
+export const FIELD_QUANTITIES: Array<{ pattern: RegExp; quantity: Quantity }> = [
+  { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[0\]$/, quantity: 'mass' },
+  { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[1\]$/, quantity: 'pressure' },
+];
+
+/** Key suffix -> quantity and the unit the design file stores it in. */
+const SUFFIX: Record<string, { quantity: Quantity; unit: Unit }> = {
+  kg: { quantity: 'mass', unit: 'kg' },
+  m: { quantity: 'length', unit: 'm' },
+  mm: { quantity: 'short_length', unit: 'mm' },
+  bar: { quantity: 'pressure', unit: 'bar' },
+  n: { quantity: 'force', unit: 'N' },
+  kmh: { quantity: 'speed', unit: 'km/h' },
+  ms2: { quantity: 'acceleration', unit: 'm/s2' },
+  deg: { quantity: 'angle', unit: 'deg' },
+  s: { quantity: 'time', unit: 's' },
+};
+/** The design-file unit of each quantity (what FIELD_QUANTITIES overrides are stored in). */
+const FILE_UNIT: Partial<Record<Quantity, Unit>> = Object.fromEntries(Object.values(SUFFIX).map((s) => [s.quantity, s.unit]));
+
+export function parseFieldPath(name: string): PathKey[] {
+  const out: PathKey[] = [];
+  const re = /([^.[\]]+)|\[(\d+)\]/g;
+  let m: RegExpExecArray | null;
+  while ((m = re.exec(name)) !== null) out.push(m[2] !== undefined ? Number(m[2]) : m[1]!);
+  return out;
+}
+
+export const fieldPath = formatPath as (path: ReadonlyArray<PathKey>) => string;
+
+export interface FieldUnit {
+  quantity: Quantity;
+  /** Unit of the value in the design file. */
+  fileUnit: Unit;
+}
+
+/** Quantity and file unit of a numeric field, or null for a plain number. */
+export function unitOfField(name: string): FieldUnit | null {
+  for (const o of FIELD_QUANTITIES) {
+    if (o.pattern.test(name)) return { quantity: o.quantity, fileUnit: FILE_UNIT[o.quantity] ?? DISPLAY_UNITS[o.quantity].metric };
+  }
+  const path = parseFieldPath(name);
+  for (let i = path.length - 1; i >= 0; i--) {
+    const k = path[i];
+    if (typeof k !== 'string') continue;
+    const m = /_([a-z0-9]+)$/.exec(k);
+    const s = m ? SUFFIX[m[1]!] : undefined;
+    return s ? { quantity: s.quantity, fileUnit: s.unit } : null;
+  }
+  return null;
+}
+
+/** The unit a field is shown in for a unit system (null for plain numbers). */
+export function displayUnitOf(name: string, units: UnitSystem): Unit | null {
+  const u = unitOfField(name);
+  return u ? DISPLAY_UNITS[u.quantity][units] : null;
+}
+
+/** How a unit is written for a person. */
+export function unitLabel(u: Unit | null): string {
+  if (u === null || u === '1') return '';
+  return ({ 'm/s2': 'm/s²', 'ft/s2': 'ft/s²', deg: '°' } as Partial<Record<Unit, string>>)[u] ?? u;
+}
+
+// ---- what the schema says a leaf is --------------------------------------------------------------
+
+type Def = { type: string; [k: string]: unknown };
+const defOf = (s: unknown): Def => (s as { _zod: { def: Def } })._zod.def;
+
+function leafAt(schema: unknown, path: readonly PathKey[]): Def | null {
+  let d = defOf(schema);
+  for (let i = 0; i <= path.length; i++) {
+    // unwrap wrappers first
+    for (;;) {
+      if (['optional', 'nullable', 'default', 'readonly', 'catch', 'nonoptional', 'prefault'].includes(d.type)) d = defOf(d.innerType);
+      else if (d.type === 'pipe') d = defOf(d.in);
+      else if (d.type === 'lazy') d = defOf((d.getter as () => unknown)());
+      else break;
+    }
+    if (i === path.length) return d;
+    const k = path[i]!;
+    if (d.type === 'union') {
+      for (const o of d.options as unknown[]) {
+        const r = leafAt(o, path.slice(i));
+        if (r) return r;
+      }
+      return null;
+    }
+    if (d.type === 'object' && typeof k === 'string') {
+      const next = (d.shape as Record<string, unknown>)[k];
+      if (!next) return null;
+      d = defOf(next);
+    } else if (d.type === 'array' && typeof k === 'number') d = defOf(d.element);
+    else if (d.type === 'tuple' && typeof k === 'number') {
+      const item = (d.items as unknown[])[k] ?? d.rest;
+      if (!item) return null;
+      d = defOf(item);
+    } else if (d.type === 'record' && typeof k === 'string') d = defOf(d.valueType);
+    else return null;
+  }
+  return null;
+}
+
+export type FieldKind = 'number' | 'boolean' | 'text';
+
+/** Kind of a field from its key suffix and the design schema (designShape, including blocks added later). */
+export function kindOfField(name: string): FieldKind {
+  if (unitOfField(name)) return 'number';
+  const leaf = leafAt(z.object(designShape), parseFieldPath(name));
+  if (!leaf) return 'text';
+  if (leaf.type === 'number' || leaf.type === 'int' || leaf.type === 'float') return 'number';
+  if (leaf.type === 'boolean') return 'boolean';
+  if (leaf.type === 'literal' && (leaf.values as unknown[]).every((v) => typeof v === 'number')) return 'number';
+  return 'text';
+}
+
+// ---- numbers for display -------------------------------------------------------------------------
+
+/** A design-file number as text in the display unit: exact when no conversion, else 6 significant digits. */
+export function formatFieldNumber(name: string, value: number, units: UnitSystem): string {
+  const u = unitOfField(name);
+  if (!u) return String(value);
+  const shown = DISPLAY_UNITS[u.quantity][units];
+  if (shown === u.fileUnit) return String(value);
+  return String(Number(((value * TO_SI[u.fileUnit]) / TO_SI[shown]).toPrecision(6)));
+}
+
+/** Text typed in a field -> number in the design-file unit, or the reason it cannot be read. */
+export function parseFieldNumber(name: string, text: string, units: UnitSystem): { ok: true; value: number } | { ok: false; reason: string } {
+  const u = unitOfField(name);
+  if (!u) {
+    const r = parseQuantity(text, 'ratio', '1');
+    return r.ok ? { ok: true, value: r.value } : { ok: false, reason: `${r.reason}; enter a plain number` };
+  }
+  const shown = DISPLAY_UNITS[u.quantity][units];
+  const r = parseQuantity(text, u.quantity, shown);
+  if (!r.ok) return { ok: false, reason: `${r.reason}; enter a number in ${unitLabel(shown)}` };
+  return { ok: true, value: Number((r.value / TO_SI[u.fileUnit]).toPrecision(12)) };
+}
+
+// ---- design -> form ------------------------------------------------------------------------------
+
+/** Every leaf of a design as form values in the given unit system. */
+export function designToValues(design: unknown, units: UnitSystem): FormValues {
+  const out: FormValues = {};
+  const walk = (v: unknown, path: PathKey[]): void => {
+    if (v === undefined || v === null) return;
+    if (Array.isArray(v)) v.forEach((x, i) => walk(x, [...path, i]));
+    else if (typeof v === 'object') {
+      // provenance keys are paths themselves; the workbench does not edit them (kept in _provenance)
+      for (const [k, x] of Object.entries(v)) if (!(path.length === 0 && k === 'provenance')) walk(x, [...path, k]);
+    } else {
+      const name = fieldPath(path);
+      out[name] = typeof v === 'number' ? formatFieldNumber(name, v, units) : String(v);
+    }
+  };
+  walk(design, []);
+  const prov = (design as { provenance?: unknown }).provenance;
+  if (prov !== undefined) out._provenance = JSON.stringify(prov);
+  return out;
+}
+
+// ---- form -> design ------------------------------------------------------------------------------
+
+function setAt(root: Record<string, unknown>, path: readonly PathKey[], value: unknown): void {
+  let cur: Record<PropertyKey, unknown> = root;
+  for (let i = 0; i < path.length - 1; i++) {
+    const k = path[i]!;
+    const nextIsIndex = typeof path[i + 1] === 'number';
+    let next = cur[k];
+    if (next === undefined || next === null || typeof next !== 'object') {
+      next = nextIsIndex ? [] : {};
+      cur[k] = next;
+    }
+    cur = next as Record<PropertyKey, unknown>;
+  }
+  const last = path[path.length - 1]!;
+  if (value === undefined) {
+    // keep the slot so that an empty list entry is reported as missing, not silently dropped
+    if (Array.isArray(cur) && typeof last === 'number' && cur.length <= last) cur.length = last + 1;
+    return;
+  }
+  cur[last] = value;
+}
+
+function prune(v: unknown): unknown {
+  if (Array.isArray(v)) return Array.from(v, (x) => prune(x));
+  if (v && typeof v === 'object') {
+    const o: Record<string, unknown> = {};
+    for (const [k, x] of Object.entries(v)) {
+      const p = prune(x);
+      if (p !== undefined) o[k] = p;
+    }
+    return Object.keys(o).length === 0 ? undefined : o;
+  }
+  return v;
+}
+
+const TRUE_WORDS = new Set(['true', 'on', '1', 'yes']);
+
+/** Form values -> the object to validate, plus the fields whose text could not be read as a number. */
+export function valuesToInput(values: FormValues, units: UnitSystem): { input: Record<string, unknown>; errors: FieldIssue[] } {
+  const input: Record<string, unknown> = {};
+  const errors: FieldIssue[] = [];
+  for (const [name, text] of Object.entries(values)) {
+    if (name.startsWith('_')) continue;
+    const path = parseFieldPath(name);
+    if (path.length === 0) continue;
+    const kind = kindOfField(name);
+    const t = text.trim();
+    if (kind === 'boolean') setAt(input, path, TRUE_WORDS.has(t.toLowerCase()));
+    else if (kind === 'number') {
+      if (t === '') setAt(input, path, undefined);
+      else {
+        const r = parseFieldNumber(name, t, units);
+        if (r.ok) setAt(input, path, r.value);
+        else {
+          errors.push({ path: fieldPath(path), message: r.reason });
+          setAt(input, path, undefined);
+        }
+      }
+    } else setAt(input, path, t === '' ? undefined : text);
+  }
+  if (values._provenance) {
+    try {
+      input.provenance = JSON.parse(values._provenance) as unknown;
+    } catch {
+      /* a damaged hidden field only loses the provenance notes */
+    }
+  }
+  return { input: (prune(input) as Record<string, unknown> | undefined) ?? {}, errors };
+}
+
+export type FormReading =
+  | { ok: true; design: DesignFile; warnings: Warning[] }
+  | { ok: false; errors: FieldIssue[] };
+
+/** Form values -> validated design, with every problem keyed by the field name it belongs to. */
+export function readForm(values: FormValues, units: UnitSystem): FormReading {
+  const { input, errors } = valuesToInput(values, units);
+  const r = readDesign(input);
+  if (r.ok && errors.length === 0) return r;
+  const seen = new Set(errors.map((e) => e.path));
+  const schemaErrors = r.ok ? [] : r.errors.filter((e) => !seen.has(e.path));
+  return { ok: false, errors: [...errors, ...schemaErrors] };
+}
+
+/** Re-expresses every numeric field in another unit system; text that cannot be read is kept as typed. */
+export function convertValues(values: FormValues, from: UnitSystem, to: UnitSystem): FormValues {
+  if (from === to) return { ...values };
+  const out: FormValues = {};
+  for (const [name, text] of Object.entries(values)) {
+    out[name] = text;
+    if (name.startsWith('_') || !unitOfField(name) || text.trim() === '') continue;
+    const r = parseFieldNumber(name, text, from);
+    if (r.ok) out[name] = formatFieldNumber(name, r.value, to);
+  }
+  return out;
+}
+
+// ---- list operations (add / duplicate / remove an entry of a list in the form) --------------------
+
+/** Entries of a list field: the indices present under `listPath`. */
+export function listIndices(values: FormValues, listPath: string): number[] {
+  const set = new Set<number>();
+  const prefix = `${listPath}[`;
+  for (const name of Object.keys(values)) {
+    if (!name.startsWith(prefix)) continue;
+    const m = /^\[(\d+)\]/.exec(name.slice(listPath.length));
+    if (m) set.add(Number(m[1]));
+  }
+  return [...set].sort((a, b) => a - b);
+}
+
+function entryOf(values: FormValues, listPath: string, i: number): Array<[string, string]> {
+  const p = `${listPath}[${i}]`;
+  return Object.entries(values).filter(([n]) => n === p || n.startsWith(`${p}.`) || n.startsWith(`${p}[`));
+}
+
+function reindex(values: FormValues, listPath: string, entries: Array<Array<[string, string]>>, from: number[]): FormValues {
+  const out: FormValues = {};
+  for (const [n, v] of Object.entries(values)) if (!n.startsWith(`${listPath}[`)) out[n] = v;
+  entries.forEach((entry, newIndex) => {
+    const oldP = `${listPath}[${from[newIndex]}]`;
+    for (const [n, v] of entry) out[`${listPath}[${newIndex}]${n.slice(oldP.length)}`] = v;
+  });
+  return out;
+}
+
+export type ListOp = { op: 'add' | 'dup' | 'remove'; list: string; index: number | null };
+
+/** Reads `_op` values such as "add:load_states", "dup:load_states[1]", "remove:axles.front.brake.piston_diameters_mm[1]". */
+export function parseListOp(text: string): ListOp | null {
+  const m = /^(add|dup|remove):([A-Za-z0-9_.[\]]+?)(?:\[(\d+)\])?$/.exec(text);
+  if (!m) return null;
+  const op = m[1] as ListOp['op'];
+  const index = m[3] === undefined ? null : Number(m[3]);
+  if (op !== 'add' && index === null) return null;
+  return { op, list: m[2]!, index };
+}
+
+/** Applies a list operation. A copied entry with an `id` gets a fresh one; its `label` is marked as a copy. */
+export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): FormValues {
+  const idx = listIndices(values, op.list);
+  const entries = idx.map((i) => entryOf(values, op.list, i));
+  const from = [...idx];
+  if (op.op === 'remove') {
+    const at = idx.indexOf(op.index ?? -1);
+    if (at < 0 || idx.length <= 1) return values;
+    entries.splice(at, 1);
+    from.splice(at, 1);
+    return reindex(values, op.list, entries, from);
+  }
+  if (idx.length >= maxEntries || idx.length === 0) return values;
+  const srcAt = op.op === 'add' ? idx.length - 1 : idx.indexOf(op.index ?? -1);
+  if (srcAt < 0) return values;
+  const srcP = `${op.list}[${idx[srcAt]}]`;
+  const ids = new Set(idx.map((i) => values[`${op.list}[${i}].id`]).filter((v): v is string => v !== undefined));
+  const copy = entries[srcAt]!.map(([n, v]): [string, string] => {
+    const rest = n.slice(srcP.length);
+    if (rest === '.id') {
+      let k = 2;
+      const base = v.replace(/-\d+$/, '') || 'state';
+      while (ids.has(`${base}-${k}`)) k++;
+      return [n, `${base}-${k}`];
+    }
+    if (rest === '.label') return [n, `${v} (copy)`.slice(0, 200)];
+    if (rest === '.kind' && op.op === 'add') return [n, 'other'];
+    return [n, v];
+  });
+  entries.splice(srcAt + 1, 0, copy);
+  from.splice(srcAt + 1, 0, idx[srcAt]!);
+  return reindex(values, op.list, entries, from);
+}

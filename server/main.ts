@@ -1,0 +1,42 @@
+/**
+ * Starts the web app: `npm start`. Listens on 127.0.0.1 and PORT (default 3000). The app has no login, so
+ * binding to any other address needs an explicit HOST and prints a warning.
+ */
+import { buildApp } from './app.ts';
+
+export const DEFAULT_PORT = 3000;
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
+
+const port = process.env.PORT ? Number(process.env.PORT) : DEFAULT_PORT;
+if (!Number.isInteger(port) || port < 0 || port > 65535) {
+  console.error(`APP_ERR_BAD_PORT: PORT="${process.env.PORT}" is not a port number (0 to 65535).`);
+  process.exit(2);
+}
+const host = process.env.HOST?.trim() || '127.0.0.1';
+if (!LOOPBACK.has(host)) {
+  console.warn(
+    `WARNING: listening on ${host}. Lockstep has no login: anyone who can reach this address can use it. ` +
+      'Use HOST only on a network you trust.',
+  );
+}
+
+const app = buildApp({ logger: process.env.LOG === '1' });
+try {
+  await app.listen({ host, port });
+  const shown = host.includes(':') ? `[${host}]` : host;
+  console.log(`Lockstep workbench: http://${shown}:${app.server.address() && typeof app.server.address() === 'object' ? (app.server.address() as { port: number }).port : port}/`);
+} catch (e) {
+  const code = (e as { code?: string }).code;
+  console.error(
+    code === 'EADDRINUSE'
+      ? `APP_ERR_PORT_IN_USE: port ${port} on ${host} is in use; start with another, e.g. PORT=3001 npm start`
+      : `APP_ERR_LISTEN: cannot listen on ${host}:${port}: ${(e as Error).message}`,
+  );
+  process.exit(1);
+}
+
+for (const sig of ['SIGINT', 'SIGTERM'] as const) {
+  process.once(sig, () => {
+    void app.close().then(() => process.exit(0));
+  });
+}

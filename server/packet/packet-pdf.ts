@@ -1,0 +1,285 @@
+/**
+ * Renders the evidence packet (packet-content.ts) as a PDF with pdfkit; charts are SVG placed as vector
+ * graphics with svg-to-pdfkit. User text is written as text, literally (no markup is interpreted).
+ * Font: DejaVu Sans when found (full Unicode: →, ≤, ², μ, non-Latin names); otherwise the built-in
+ * Helvetica, which covers Latin-1 only — characters outside it are then printed as "?".
+ * The path can be set with LOCKSTEP_PDF_FONT (regular) and LOCKSTEP_PDF_FONT_BOLD.
+ */
+import { existsSync } from 'node:fs';
+import PDFDocument from 'pdfkit';
+import SVGtoPDF from 'svg-to-pdfkit';
+import { type Block, type PacketContent, type PacketInput, packetContent } from './packet-content.ts';
+
+const FONT_DIRS = ['/usr/share/fonts/truetype/dejavu', '/usr/share/fonts/dejavu', '/usr/share/fonts/TTF', '/usr/local/share/fonts'];
+
+export interface PacketFonts {
+  regular: string;
+  bold: string;
+  /** True when the fonts are embedded TrueType (full Unicode). */
+  unicode: boolean;
+}
+
+export function findFonts(env: NodeJS.ProcessEnv = process.env): PacketFonts {
+  const reg = env.LOCKSTEP_PDF_FONT;
+  if (reg && existsSync(reg)) {
+    const bold = env.LOCKSTEP_PDF_FONT_BOLD && existsSync(env.LOCKSTEP_PDF_FONT_BOLD) ? env.LOCKSTEP_PDF_FONT_BOLD : reg;
+    return { regular: reg, bold, unicode: true };
+  }
+  for (const d of FONT_DIRS) {
+    const r = `${d}/DejaVuSans.ttf`;
+    const b = `${d}/DejaVuSans-Bold.ttf`;
+    if (existsSync(r)) return { regular: r, bold: existsSync(b) ? b : r, unicode: true };
+  }
+  return { regular: 'Helvetica', bold: 'Helvetica-Bold', unicode: false };
+}
+
+/** Text for a Latin-1-only font: common symbols spelled out, anything else outside Latin-1 as "?". */
+export function latin1(s: string): string {
+  const map: Record<string, string> = { '→': '->', '≤': '<=', '≥': '>=', '−': '-', '–': '-', '—': '-', '•': '-', '…': '...', '·': '·', 'μ': 'mu', '²': '²', '‘': "'", '’': "'", '“': '"', '”': '"' };
+  return [...s].map((c) => map[c] ?? (c.codePointAt(0)! <= 0xff ? c : '?')).join('');
+}
+
+const PAGE = { size: 'A4' as const, margin: 50 };
+const FS = { title: 20, h1: 14, h2: 11.5, body: 9.5, small: 8, table: 7.5 };
+
+interface Ctx {
+  doc: PDFKit.PDFDocument;
+  fonts: PacketFonts;
+  t: (s: string) => string;
+}
+
+function bottom(doc: PDFKit.PDFDocument): number {
+  return doc.page.height - PAGE.margin - 18; // room for the footer
+}
+
+function ensure(ctx: Ctx, h: number): void {
+  if (ctx.doc.y + h > bottom(ctx.doc)) ctx.doc.addPage();
+}
+
+function width(doc: PDFKit.PDFDocument): number {
+  return doc.page.width - 2 * PAGE.margin;
+}
+
+function para(ctx: Ctx, text: string, size: number, font: 'R' | 'B', opts: PDFKit.Mixins.TextOptions = {}): void {
+  const { doc } = ctx;
+  doc.font(font === 'B' ? 'B' : 'R').fontSize(size);
+  const s = ctx.t(text);
+  const h = doc.heightOfString(s, { width: width(doc), ...opts });
+  ensure(ctx, Math.min(h, 60));
+  doc.text(s, PAGE.margin, doc.y, { width: width(doc), ...opts });
+}
+
+function columnWidths(doc: PDFKit.PDFDocument, columns: string[], rows: string[][], weights?: number[]): number[] {
+  const W = width(doc);
+  if (weights && weights.length === columns.length) {
+    const sum = weights.reduce((a, b) => a + b, 0);
+    return weights.map((w) => (w / sum) * W);
+  }
+  // Each column gets at least its longest word (capped), the rest shared by capped content length.
+  const longestWord = (s: string) => Math.max(0, ...s.split(/\s+/).map((w) => w.length));
+  const mins = columns.map((c, i) => {
+    let m = Math.min(longestWord(c), 16);
+    for (const r of rows) m = Math.max(m, Math.min(longestWord(r[i] ?? ''), 16));
+    return Math.max(m, 3) + 1;
+  });
+  const wants = columns.map((c, i) => {
+    let m = Math.min(c.length, 18);
+    for (const r of rows) m = Math.max(m, Math.min((r[i] ?? '').length, 48));
+    return Math.max(m, mins[i]!);
+  });
+  const minSum = mins.reduce((a, b) => a + b, 0);
+  const wantSum = wants.reduce((a, b) => a + b, 0);
+  if (wantSum <= minSum) return mins.map((m) => (m / minSum) * W);
+  // interpolate between minimum and wanted widths so that the total is W (in character units)
+  const charW = FS.table * 0.55;
+  const budget = W / charW;
+  const t = Math.max(0, Math.min(1, (budget - minSum) / (wantSum - minSum)));
+  const chars = mins.map((m, i) => m + t * (wants[i]! - m));
+  const sum = chars.reduce((a, b) => a + b, 0);
+  return chars.map((c) => (c / sum) * W);
+}
+
+function table(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]): void {
+  const { doc } = ctx;
+  const widths = columnWidths(doc, columns, rows, weights);
+  const pad = 2.5;
+  const rowHeight = (cells: string[], font: 'R' | 'B') => {
+    doc.font(font).fontSize(FS.table);
+    let h = 0;
+    cells.forEach((c, i) => {
+      h = Math.max(h, doc.heightOfString(ctx.t(c) || ' ', { width: widths[i]! - 2 * pad }));
+    });
+    return h + 2 * pad;
+  };
+  const drawRow = (cells: string[], font: 'R' | 'B', shade: boolean) => {
+    const h = Math.max(rowHeight(cells, font), font === 'R' && cells.every((c) => c === '') ? 16 : 0);
+    const y = doc.y;
+    let x = PAGE.margin;
+    if (shade) doc.save().rect(x, y, width(doc), h).fill('#eeeeee').restore();
+    doc.font(font).fontSize(FS.table).fillColor('#000');
+    cells.forEach((c, i) => {
+      doc.lineWidth(0.4).strokeColor('#999').rect(x, y, widths[i]!, h).stroke();
+      doc.text(ctx.t(c), x + pad, y + pad, { width: widths[i]! - 2 * pad, lineBreak: true });
+      x += widths[i]!;
+    });
+    doc.x = PAGE.margin;
+    doc.y = y + h;
+  };
+  const header = () => drawRow(columns, 'B', true);
+  ensure(ctx, rowHeight(columns, 'B') + (rows[0] ? rowHeight(rows[0], 'R') : 0));
+  header();
+  for (const r of rows) {
+    const cells = columns.map((_, i) => r[i] ?? '');
+    const h = Math.max(rowHeight(cells, 'R'), cells.every((c) => c === '') ? 16 : 0);
+    if (doc.y + h > bottom(doc)) {
+      doc.addPage();
+      header();
+    }
+    drawRow(cells, 'R', false);
+  }
+  doc.moveDown(0.6);
+}
+
+function kv(ctx: Ctx, rows: [string, string][]): void {
+  const { doc } = ctx;
+  const W = width(doc);
+  const kw = W * 0.36;
+  for (const [k, v] of rows) {
+    // A long word (a revision hash) is printed smaller rather than broken across lines.
+    let size = FS.body;
+    if (!/\s/.test(v)) {
+      doc.font('R').fontSize(FS.body);
+      const w = doc.widthOfString(ctx.t(v));
+      if (w > W - kw) size = Math.max(5.5, (FS.body * (W - kw - 1)) / w);
+    }
+    doc.fontSize(FS.body);
+    const hk = doc.font('B').heightOfString(ctx.t(k), { width: kw - 6 });
+    doc.fontSize(size);
+    const h = Math.max(hk, doc.font('R').heightOfString(ctx.t(v) || ' ', { width: W - kw })) + 4;
+    ensure(ctx, h);
+    const y = doc.y;
+    doc.font('B').fontSize(FS.body).fillColor('#000').text(ctx.t(k), PAGE.margin, y, { width: kw - 6 });
+    doc.font('R').fontSize(size).text(ctx.t(v) || ' ', PAGE.margin + kw, y, { width: W - kw });
+    if (v === '') doc.lineWidth(0.4).strokeColor('#999').moveTo(PAGE.margin + kw, y + h - 2).lineTo(PAGE.margin + W, y + h - 2).stroke();
+    doc.x = PAGE.margin;
+    doc.y = y + h;
+  }
+  doc.moveDown(0.5);
+}
+
+function fields(ctx: Ctx, labels: string[]): void {
+  const { doc } = ctx;
+  for (const l of labels) {
+    ensure(ctx, 40);
+    doc.font('R').fontSize(FS.small).fillColor('#000').text(ctx.t(l), PAGE.margin, doc.y);
+    const y = doc.y + 22;
+    doc.lineWidth(0.5).strokeColor('#000').moveTo(PAGE.margin, y).lineTo(PAGE.margin + width(doc), y).stroke();
+    doc.y = y + 8;
+  }
+  doc.moveDown(0.5);
+}
+
+function chart(ctx: Ctx, svg: string, w: number, h: number): void {
+  const { doc } = ctx;
+  const W = width(doc);
+  const scale = Math.min(1, W / w);
+  ensure(ctx, h * scale + 6);
+  const y = doc.y;
+  SVGtoPDF(doc, svg, PAGE.margin, y, {
+    width: w * scale,
+    height: h * scale,
+    assumePt: true,
+    fontCallback: (_family, bold) => (bold ? 'B' : 'R'),
+  });
+  doc.x = PAGE.margin;
+  doc.y = y + h * scale + 6;
+}
+
+function block(ctx: Ctx, b: Block, first: boolean): void {
+  const { doc } = ctx;
+  switch (b.kind) {
+    case 'title':
+      doc.font('B').fontSize(FS.title).fillColor('#000').text(ctx.t(b.text), PAGE.margin, doc.y, { width: width(doc) });
+      doc.moveDown(0.5);
+      return;
+    case 'h1':
+      ensure(ctx, 60);
+      if (!first) doc.moveDown(0.6);
+      doc.font('B').fontSize(FS.h1).fillColor('#000').text(ctx.t(b.text), PAGE.margin, doc.y, { width: width(doc) });
+      doc.moveDown(0.3);
+      return;
+    case 'h2':
+      ensure(ctx, 50);
+      doc.moveDown(0.3);
+      doc.font('B').fontSize(FS.h2).fillColor('#000').text(ctx.t(b.text), PAGE.margin, doc.y, { width: width(doc) });
+      doc.moveDown(0.2);
+      return;
+    case 'p':
+      if (b.style === 'caution') {
+        doc.fillColor('#8a1c1c');
+        para(ctx, b.text, FS.body, 'B');
+        doc.fillColor('#000');
+      } else if (b.style === 'small') para(ctx, b.text, FS.small, 'R');
+      else if (b.style === 'bold') para(ctx, b.text, FS.body, 'B');
+      else para(ctx, b.text, FS.body, 'R');
+      doc.moveDown(0.25);
+      return;
+    case 'kv':
+      kv(ctx, b.rows);
+      return;
+    case 'table':
+      table(ctx, b.columns, b.rows, b.widths);
+      return;
+    case 'chart':
+      chart(ctx, b.svg, b.width, b.height);
+      return;
+    case 'fields':
+      fields(ctx, b.labels);
+      return;
+    case 'page_break':
+      doc.addPage();
+      return;
+  }
+}
+
+export interface PdfOptions {
+  fonts?: PacketFonts;
+}
+
+/** The PDF of a packet's content. */
+export function renderPacketPdf(content: PacketContent, date: Date, opts: PdfOptions = {}): Promise<Buffer> {
+  const fonts = opts.fonts ?? findFonts();
+  const doc = new PDFDocument({
+    size: PAGE.size,
+    margin: PAGE.margin,
+    bufferPages: true,
+    autoFirstPage: true,
+    info: { Title: content.title, Creator: 'Lockstep', Producer: 'Lockstep (pdfkit)', CreationDate: date, ModDate: date },
+  });
+  doc.registerFont('R', fonts.regular);
+  doc.registerFont('B', fonts.bold);
+  const ctx: Ctx = { doc, fonts, t: fonts.unicode ? (s) => s : latin1 };
+  const chunks: Buffer[] = [];
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('data', (c: Buffer) => chunks.push(c));
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+  doc.font('R');
+  content.blocks.forEach((b, i) => block(ctx, b, i === 0 || content.blocks[i - 1]?.kind === 'page_break'));
+  const range = doc.bufferedPageRange();
+  for (let i = range.start; i < range.start + range.count; i++) {
+    doc.switchToPage(i);
+    const y = doc.page.height - PAGE.margin + 4;
+    const footer = `Revision ${content.revisionId.slice(0, 16)} · page ${i + 1} of ${range.count} · Estimate only: verify by physical brake testing; the local regulations and a licensed inspector decide.`;
+    doc.font('R').fontSize(6.5).fillColor('#555').text(ctx.t(footer), PAGE.margin, y, { width: width(doc), lineBreak: false, height: 10 });
+  }
+  doc.end();
+  return done;
+}
+
+/** Content and PDF in one step. */
+export async function packetPdf(input: PacketInput, opts: PdfOptions = {}): Promise<Buffer> {
+  return renderPacketPdf(packetContent(input), input.date, opts);
+}
+

@@ -1,0 +1,75 @@
+/**
+ * Routes of the evidence packet and the exports, for a saved revision (GET) or the design on the page (POST,
+ * the workbench form or {design}). `?date=YYYY-MM-DD` fixes the printed date (reproducible packets).
+ * Register with `app.register(packetRoutes, { store?, dataDir? })`.
+ */
+import type { FastifyPluginAsync, FastifyReply } from 'fastify';
+import type { DesignFile, Warning } from '../../core/index.ts';
+import { packetHtml } from '../../views/store-views.ts';
+import { checksCsv, curvesCsv, designJson } from '../export/exports.ts';
+import { evaluateForPacket } from '../packet/build-packet.ts';
+import { packetContent } from '../packet/packet-content.ts';
+import { renderPacketPdf } from '../packet/packet-pdf.ts';
+import { revisionId } from '../store/revision-id.ts';
+import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
+
+const EXPORTS = ['design.json', 'curves.csv', 'checks.csv', 'packet.pdf', 'packet.html'] as const;
+type ExportName = (typeof EXPORTS)[number];
+
+/** File name for a download: the design name reduced to safe characters, plus the short revision. */
+export function downloadName(design: DesignFile, rev: string, ext: string): string {
+  const base = design.name.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'design';
+  return `${base}-${rev.slice(0, 8)}.${ext}`;
+}
+
+function parseDate(q: unknown, now: () => Date): Date {
+  const t = field(q, 'date');
+  if (t === undefined || t === '') return now();
+  const d = new Date(/^\d{4}-\d{2}-\d{2}$/.test(t) ? `${t}T00:00:00Z` : t);
+  if (Number.isNaN(d.getTime())) throw new RequestError('STORE_ERR_DATE_INVALID', `date "${t.slice(0, 40)}" is not a date; use YYYY-MM-DD`, 400);
+  return d;
+}
+
+async function send(reply: FastifyReply, what: ExportName, design: DesignFile, warnings: Warning[], date: Date): Promise<FastifyReply> {
+  const rev = revisionId(design);
+  const disposition = (ext: string) => `attachment; filename="${downloadName(design, rev, ext)}"`;
+  reply.header('x-lockstep-revision', rev);
+  switch (what) {
+    case 'design.json':
+      return reply.type('application/json; charset=utf-8').header('content-disposition', disposition('json')).send(designJson(design));
+    case 'curves.csv':
+      return reply.type('text/csv; charset=utf-8').header('content-disposition', disposition('curves.csv')).send(curvesCsv(evaluateForPacket(design, warnings)));
+    case 'checks.csv':
+      return reply.type('text/csv; charset=utf-8').header('content-disposition', disposition('checks.csv')).send(checksCsv(evaluateForPacket(design, warnings)));
+    case 'packet.html': {
+      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });
+      return reply.type('text/html; charset=utf-8').send(packetHtml(content).html);
+    }
+    case 'packet.pdf': {
+      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });
+      const pdf = await renderPacketPdf(content, date);
+      return reply.type('application/pdf').header('content-disposition', disposition('pdf')).send(pdf);
+    }
+  }
+}
+
+export const packetRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, opts) => {
+  const holder = lazyStore(opts);
+  const now = opts.now ?? (() => new Date());
+  app.addHook('onClose', async () => holder.close());
+  app.setErrorHandler(storeErrorHandler);
+
+  for (const what of EXPORTS) {
+    const path = what.startsWith('packet') ? what : `export/${what}`;
+    // A saved revision (full id or unique prefix).
+    app.get<{ Params: { rev: string } }>(`/revisions/:rev/${path}`, async (req, reply) => {
+      const r = holder.get().revision(req.params.rev);
+      return send(reply, what, r.design, [], parseDate(req.query, now));
+    });
+    // The design on the page, unsaved: the workbench form, design_json or {design}.
+    app.post(`/${path}`, async (req, reply) => {
+      const { design, warnings } = designFromBody(req.body);
+      return send(reply, what, design, warnings, parseDate(req.query, now));
+    });
+  }
+};

@@ -1,0 +1,152 @@
+/**
+ * The workbench: the page (GET /), the recompute endpoint htmx calls on every change
+ * (POST /workbench/update), and the downloads of the current design and its table.
+ *
+ * Status behaviour: a valid design answers 200; invalid input answers 422 with the same kind of fragment
+ * (status block + field messages + "not current" note); htmx is configured to swap 422 (views/layout.ts).
+ */
+import type { FastifyInstance, FastifyRequest } from 'fastify';
+import { type DesignFile, type FieldIssue, type UnitSystem, type Warning, demoDesign, evaluate, readDesign } from '../../core/index.ts';
+import { html, type SafeHtml } from '../../views/html.ts';
+import type { AssetUrls } from '../../views/layout.ts';
+import {
+  fieldMessagesOob,
+  inputsSection,
+  resultsSection,
+  staleNote,
+  statusBlock,
+  type ValidView,
+  workbenchPage,
+} from '../../views/pages/workbench.ts';
+import { panels } from '../../views/panels/index.ts';
+import { resultCsv } from '../../views/panels/table.ts';
+import { AppError, appErrors, UPLOAD_LIMIT } from '../errors.ts';
+import {
+  applyListOp,
+  convertValues,
+  designToValues,
+  type FormValues,
+  parseListOp,
+  readForm,
+} from '../forms/design-form.ts';
+import { sendHtml } from '../html-reply.ts';
+
+/** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
+export function formValues(body: unknown): FormValues {
+  if (body === null || typeof body !== 'object' || Array.isArray(body)) throw appErrors.badRequest('Expected the design form as the request body.');
+  const out: FormValues = {};
+  for (const [k, v] of Object.entries(body as Record<string, unknown>)) {
+    const last = Array.isArray(v) ? v[v.length - 1] : v;
+    if (typeof last === 'string') out[k] = last;
+  }
+  return out;
+}
+
+export const unitsOf = (v: string | null | undefined): UnitSystem => (v === 'us' ? 'us' : 'metric');
+
+export function view(design: DesignFile, warnings: Warning[]): ValidView {
+  return { design, warnings, result: evaluate(design, { curves: true, warnings }) };
+}
+
+/** Control fields of the page; never part of the values that are rendered back. */
+const CONTROL = new Set(['_op', '_shape', '_units', '_upload', '_restore']);
+const withoutControls = (v: FormValues): FormValues => Object.fromEntries(Object.entries(v).filter(([k]) => !CONTROL.has(k)));
+
+export interface UpdateOutcome {
+  status: number;
+  body: SafeHtml;
+}
+
+/** One change of the form: work out what changed, re-render what must be, recompute when valid. */
+export function update(posted: FormValues): UpdateOutcome {
+  const units = unitsOf(posted._units);
+  const shape = new URLSearchParams(posted._shape ?? '');
+  const prevUnits = shape.has('_units') ? unitsOf(shape.get('_units')) : units;
+  let values = withoutControls(posted);
+  let structural = posted._restore === '1';
+
+  if (posted._upload !== undefined) {
+    const text = posted._upload;
+    let parsed: unknown;
+    const fail = (e: AppError, errors: FieldIssue[] = []): UpdateOutcome => ({
+      status: e.statusCode,
+      body: statusBlock('upload-error', { message: e.message, code: e.code, errors }),
+    });
+    if (text.length > UPLOAD_LIMIT) return fail(appErrors.uploadTooLarge());
+    try {
+      parsed = JSON.parse(text);
+    } catch (e) {
+      return fail(appErrors.uploadNotJson(e instanceof Error ? e.message : 'unreadable'));
+    }
+    const r = readDesign(parsed);
+    if (!r.ok) return fail(appErrors.uploadInvalid(r.errors.length), r.errors);
+    // the file is in design-file units; show it in the units the page uses now
+    values = designToValues(r.design, units);
+    structural = true;
+  } else if (posted._op === 'demo') {
+    values = designToValues(demoDesign(), units);
+    structural = true;
+  } else if (posted._op) {
+    const op = parseListOp(posted._op);
+    if (!op) throw appErrors.unknownOperation(posted._op);
+    values = applyListOp(values, op);
+    structural = true;
+  }
+  if (prevUnits !== units) {
+    values = convertValues(values, prevUnits, units);
+    structural = true;
+  }
+  for (const [k, v] of shape) if (k !== '_units' && (values[k] ?? '') !== v) structural = true;
+  if (structural) for (const p of panels) if (p.normalise) values = p.normalise(values, units);
+
+  const reading = readForm(values, units);
+  const errors = reading.ok ? [] : reading.errors;
+  const parts: SafeHtml[] = [];
+  parts.push(statusBlock(reading.ok ? 'current' : 'invalid', { errors }));
+  parts.push(structural ? inputsSection(values, units, errors, true) : fieldMessagesOob(values, units, errors));
+  parts.push(reading.ok ? resultsSection(view(reading.design, reading.warnings), units, true) : staleNote(errors.length, true));
+  return { status: reading.ok ? 200 : 422, body: html`${parts}` };
+}
+
+function slug(name: string): string {
+  return name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'design';
+}
+
+function validFromRequest(req: FastifyRequest): { ok: true; design: DesignFile; units: UnitSystem; warnings: Warning[] } | { ok: false; errors: FieldIssue[] } {
+  const posted = formValues(req.body);
+  const units = unitsOf(posted._units);
+  const r = readForm(withoutControls(posted), units);
+  return r.ok ? { ok: true, design: r.design, units, warnings: r.warnings } : { ok: false, errors: r.errors };
+}
+
+export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
+  app.get<{ Querystring: { units?: string } }>('/', async (req, reply) => {
+    const units = unitsOf(req.query.units);
+    const design = demoDesign();
+    const r = readDesign(design);
+    const valid = r.ok ? view(r.design, r.warnings) : null;
+    reply.header('cache-control', 'no-cache');
+    return sendHtml(reply, workbenchPage(assets, designToValues(design, units), units, valid, r.ok ? [] : r.errors));
+  });
+
+  app.post('/workbench/update', async (req, reply) => {
+    const out = update(formValues(req.body));
+    reply.header('cache-control', 'no-store');
+    return sendHtml(reply, out.body, out.status);
+  });
+
+  app.post('/workbench/design.json', async (req, reply) => {
+    const r = validFromRequest(req);
+    if (!r.ok) return reply.code(422).send({ code: 'APP_ERR_FORM_INVALID', message: 'Fix the marked inputs before downloading.', errors: r.errors });
+    reply.header('content-disposition', `attachment; filename="${slug(r.design.name)}.lockstep.json"`);
+    return reply.type('application/json; charset=utf-8').send(`${JSON.stringify(r.design, null, 2)}\n`);
+  });
+
+  app.post('/workbench/table.csv', async (req, reply) => {
+    const r = validFromRequest(req);
+    if (!r.ok) return reply.code(422).send({ code: 'APP_ERR_FORM_INVALID', message: 'Fix the marked inputs before downloading.', errors: r.errors });
+    const result = evaluate(r.design);
+    reply.header('content-disposition', `attachment; filename="${slug(r.design.name)}-table.csv"`);
+    return reply.type('text/csv; charset=utf-8').send(resultCsv(result, r.units));
+  });
+}

@@ -1,0 +1,111 @@
+// Workbench behaviour that htmx attributes do not cover: keeping the draft in this browser (localStorage),
+// restoring it after a reload, uploading and downloading files. No eval, no inline handlers (CSP).
+(function () {
+  'use strict';
+  var KEY = 'lockstep.draft.v1';
+  var form = document.getElementById('design-form');
+  if (!form || !window.htmx) return;
+
+  function pairs() {
+    var out = [];
+    new FormData(form).forEach(function (v, k) {
+      if (typeof v === 'string') out.push([k, v]);
+    });
+    return out;
+  }
+  function lastValues(list) {
+    var o = {};
+    list.forEach(function (p) { o[p[0]] = p[1]; });
+    return o;
+  }
+  function save() {
+    try {
+      localStorage.setItem(KEY, JSON.stringify({ saved: Date.now(), fields: pairs() }));
+    } catch (e) { /* storage full or disabled: the page still works, the draft is not kept */ }
+  }
+  function fileMessage(text, bad) {
+    var el = document.getElementById('file-msg');
+    if (!el) {
+      el = document.createElement('p');
+      el.id = 'file-msg';
+      el.setAttribute('role', 'status');
+      document.querySelector('.top').appendChild(el);
+    }
+    el.className = bad ? 'file-msg bad' : 'file-msg';
+    el.textContent = text;
+  }
+
+  form.addEventListener('input', save);
+  form.addEventListener('change', save);
+  document.body.addEventListener('htmx:afterSettle', save);
+
+  // restore the draft kept in this browser (unless the page was opened with ?fresh)
+  var stored = null;
+  try { stored = JSON.parse(localStorage.getItem(KEY) || 'null'); } catch (e) { stored = null; }
+  if (stored && Array.isArray(stored.fields) && !/[?&]fresh\b/.test(location.search)) {
+    var values = lastValues(stored.fields);
+    var current = lastValues(pairs());
+    var same = Object.keys(values).length === Object.keys(current).length &&
+      Object.keys(values).every(function (k) { return k === '_shape' || values[k] === current[k]; });
+    if (!same) {
+      values._restore = '1';
+      window.htmx.ajax('POST', '/workbench/update', { target: '#status', swap: 'outerHTML', values: values });
+    }
+  }
+
+  // "Start again from the demo" also forgets the draft
+  document.addEventListener('click', function (ev) {
+    var t = ev.target;
+    if (t && t.closest && t.closest('[data-reset-draft]')) {
+      try { localStorage.removeItem(KEY); } catch (e) { /* ignore */ }
+    }
+  });
+
+  // upload: the file is read here and sent as the _upload field; the server validates it and either
+  // replaces the inputs or lists the problems (the current design stays as it is)
+  var upload = document.getElementById('upload');
+  if (upload) {
+    upload.addEventListener('change', function () {
+      var f = upload.files && upload.files[0];
+      if (!f) return;
+      if (f.size > 512 * 1024) {
+        fileMessage('That file is larger than 512 KiB; a design file is a few kilobytes. Nothing was changed.', true);
+        upload.value = '';
+        return;
+      }
+      f.text().then(function (text) {
+        var units = (form.querySelector('[name="_units"]') || {}).value || 'metric';
+        window.htmx.ajax('POST', '/workbench/update', { target: '#status', swap: 'outerHTML', values: { _upload: text, _units: units } });
+        fileMessage('Loaded ' + f.name + ' – see the status above the results.', false);
+        upload.value = '';
+      });
+    });
+  }
+
+  // downloads: POST the current form, save the answer as a file
+  document.addEventListener('click', function (ev) {
+    var b = ev.target && ev.target.closest ? ev.target.closest('button[data-download]') : null;
+    if (!b) return;
+    ev.preventDefault();
+    var body = new URLSearchParams();
+    pairs().forEach(function (p) { body.append(p[0], p[1]); });
+    fetch(b.getAttribute('data-download'), { method: 'POST', body: body, headers: { 'content-type': 'application/x-www-form-urlencoded' } })
+      .then(function (res) {
+        if (!res.ok) {
+          return res.json().then(function (j) { fileMessage(j.message || 'Download refused.', true); });
+        }
+        var cd = res.headers.get('content-disposition') || '';
+        var m = /filename="([^"]+)"/.exec(cd);
+        return res.blob().then(function (blob) {
+          var a = document.createElement('a');
+          a.href = URL.createObjectURL(blob);
+          a.download = m ? m[1] : b.getAttribute('data-filename') || 'lockstep-download';
+          document.body.appendChild(a);
+          a.click();
+          setTimeout(function () { URL.revokeObjectURL(a.href); a.remove(); }, 1000);
+          fileMessage('Downloaded ' + a.download + '.', false);
+        });
+      })
+      .catch(function () { fileMessage('Download failed: the server did not answer.', true); });
+  });
+})();

@@ -1,0 +1,169 @@
+// Real-browser test of the workbench: Debian's chromium driven by playwright-core (never a browser download),
+// against buildApp() listening on a random loopback port.
+// Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.291 in, 58 in = 1.4732 m);
+// the lock-order expectation for a 70 mm rear piston is hand-checked with core evaluate() before writing
+// this test (rear brake gain (70/48)² = 2.13 times the demo's, so the rear axle is over-braked and locks first).
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { FastifyInstance } from 'fastify';
+import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoDesign } from '../../core/index.ts';
+import { buildApp } from '../../server/app.ts';
+
+const CHROMIUM = '/usr/bin/chromium';
+let app: FastifyInstance;
+let ctx: BrowserContext;
+let page: Page;
+let base = '';
+let profile = '';
+const problems: string[] = [];
+
+beforeAll(async () => {
+  app = buildApp();
+  await app.listen({ host: '127.0.0.1', port: 0 });
+  base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
+  profile = mkdtempSync(join(tmpdir(), 'lockstep-browser-'));
+  ctx = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    viewport: { width: 1366, height: 768 },
+    acceptDownloads: true,
+  });
+  page = await ctx.newPage();
+  // CSP violations and script errors show up here; the page must produce none
+  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
+  page.on('console', (m) => {
+    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
+  });
+  await page.goto(`${base}/?fresh`);
+  await page.waitForSelector('#chart-a .chart[data-drawn]', { timeout: 30000 });
+}, 90000);
+
+afterAll(async () => {
+  await ctx?.close();
+  await app?.close();
+  if (profile) rmSync(profile, { recursive: true, force: true });
+});
+
+const drawn = (id: string) => page.getAttribute(`#${id} .chart`, 'data-drawn');
+const verdictText = () => page.textContent('#verdict-1');
+
+/** Types into a field as a person would (replacing its text) and waits for the answer of the server. */
+async function typeInto(selector: string, text: string): Promise<void> {
+  const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+  await page.fill(selector, '');
+  await page.type(selector, text);
+  await answer;
+  await page.waitForTimeout(150); // settle
+}
+
+describe('workbench in chromium', () => {
+  it('opens on the demo with the verdict, three charts and the caution', async () => {
+    expect(await page.textContent('#verdict-0')).toContain('front axle locks first');
+    for (const id of ['chart-a', 'chart-b', 'chart-c']) expect(await drawn(id)).not.toBeNull();
+    expect(await page.isVisible('.caution')).toBe(true);
+    expect(await page.textContent('.caution')).toContain('physical brake testing');
+  });
+
+  it('a bigger rear piston updates the verdict and the charts', async () => {
+    const before = { verdict: await verdictText(), a: await drawn('chart-a'), b: await drawn('chart-b') };
+    await typeInto('#f-axles-rear-brake-piston_diameters_mm-0-', '70');
+    await page.waitForFunction((prev) => document.querySelector('#chart-a .chart')?.getAttribute('data-drawn') !== prev, before.a);
+    const after = await verdictText();
+    expect(after).not.toBe(before.verdict);
+    expect(after).toContain('rear axle locks first');
+    expect(await drawn('chart-b')).not.toBe(before.b);
+    await typeInto('#f-axles-rear-brake-piston_diameters_mm-0-', '48');
+    await page.waitForFunction(() => document.querySelector('#verdict-1')?.textContent?.includes('front axle locks first on every surface'));
+  });
+
+  it('a field error is marked, results say "not current", and clearing it brings the results back', async () => {
+    await typeInto('#f-hydraulics-pedal_ratio', '3.8x');
+    expect(await page.textContent('#m-hydraulics-pedal_ratio')).toMatch(/not accepted|not a number/);
+    expect(await page.isVisible('#m-hydraulics-pedal_ratio')).toBe(true);
+    expect(await page.textContent('#results-note')).toContain('Not current');
+    expect(await page.textContent('#status')).toContain('need');
+    expect(await page.inputValue('#f-hydraulics-pedal_ratio')).toBe('3.8x'); // typed text kept
+    await typeInto('#f-hydraulics-pedal_ratio', '3.8');
+    expect((await page.textContent('#m-hydraulics-pedal_ratio'))?.trim()).toBe('');
+    expect((await page.textContent('#results-note'))?.trim()).toBe('');
+    expect(await page.textContent('#status')).toContain('Results are current');
+  });
+
+  it('switching to US units converts the shown values (3.665 m = 144.291 in)', async () => {
+    const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.selectOption('#units', 'us');
+    await answer;
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '144.291');
+    expect(await page.textContent('label[for="f-vehicle-wheelbase_m"]')).toContain('in');
+    expect(await page.textContent('#panel-table')).toContain('psi');
+  });
+
+  it('"58 in" typed into the wheelbase is taken as 58 inches (1.4732 m back in metric)', async () => {
+    await typeInto('#f-vehicle-wheelbase_m', '58 in');
+    expect(await page.textContent('#status')).toContain('Results are current');
+    expect(await page.inputValue('#f-vehicle-wheelbase_m')).toBe('58 in');
+    const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.selectOption('#units', 'metric');
+    await answer;
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.4732');
+  });
+
+  it('the draft survives a reload', async () => {
+    await page.goto(`${base}/`); // without ?fresh, the draft kept in localStorage is restored
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.4732', undefined, { timeout: 30000 });
+  });
+
+  it('a malformed file is refused and the design stays; a valid file replaces it', async () => {
+    const nameBefore = await page.inputValue('#f-name');
+    let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.setInputFiles('#upload', { name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"format": "lockstep-design/1",') });
+    await answer;
+    await page.waitForSelector('#status.upload-error');
+    expect(await page.textContent('#status')).toContain('APP_ERR_UPLOAD_NOT_JSON');
+    expect(await page.inputValue('#f-name')).toBe(nameBefore);
+
+    const d = demoDesign();
+    d.name = 'Uploaded in the browser test';
+    d.vehicle.wheelbase_m = 3.2;
+    answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.setInputFiles('#upload', { name: 'good.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(d)) });
+    await answer;
+    await page.waitForFunction(() => (document.querySelector('#f-name') as HTMLInputElement | null)?.value === 'Uploaded in the browser test');
+    expect(await page.inputValue('#f-vehicle-wheelbase_m')).toBe('3.2');
+    expect(await page.textContent('#results')).toContain('Uploaded in the browser test');
+  });
+
+  it('downloads the design as JSON', async () => {
+    const dl = page.waitForEvent('download');
+    await page.click('button[data-download="/workbench/design.json"]');
+    const file = await dl;
+    expect(file.suggestedFilename()).toMatch(/\.lockstep\.json$/);
+  });
+
+  it('adds a load state and switches the rear brake to drum', async () => {
+    let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.click('button[value="add:load_states"]');
+    await answer;
+    await page.waitForSelector('#verdict-2');
+    answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.selectOption('#f-axles-rear-brake-type', 'drum');
+    await answer;
+    await page.waitForSelector('#f-axles-rear-brake-brake_factor');
+  });
+
+  it('fits a 1366×768 screen without sideways scrolling, and produced no script or CSP errors', async () => {
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    mkdirSync('test-results', { recursive: true });
+    await page.screenshot({ path: 'test-results/workbench-1366x768.png', fullPage: true });
+    await page.setViewportSize({ width: 820, height: 1180 }); // tablet, portrait
+    await page.waitForTimeout(400);
+    const tabletOverflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(tabletOverflow).toBeLessThanOrEqual(0);
+    await page.screenshot({ path: 'test-results/workbench-tablet.png' });
+    expect([...new Set(problems)]).toEqual([]);
+  });
+});

@@ -1,0 +1,40 @@
+/**
+ * The real `lockstep` process (bin/lockstep.mjs through tsx), spawned once per case.
+ * Source: design-file spec "Command line" (`npx lockstep demo > x.json && npx lockstep evaluate x.json
+ * --json`, exit codes 0 / 2).
+ */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
+const bin = join(root, 'bin', 'lockstep.mjs');
+const dir = mkdtempSync(join(tmpdir(), 'lockstep-bin-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+const lockstep = (...args: string[]) => spawnSync(process.execPath, [bin, ...args], { cwd: root, encoding: 'utf8', timeout: 60000 });
+
+describe('bin/lockstep.mjs', () => {
+  it('demo > file, then evaluate file --json: a lockstep-result/1 (exit 0/1 by the checks); a broken file: exit 2', () => {
+    const demo = lockstep('demo');
+    expect(demo.status).toBe(0);
+    const p = join(dir, 'demo.json');
+    writeFileSync(p, demo.stdout);
+    const ev = lockstep('evaluate', p, '--json');
+    expect(ev.stderr).toBe('');
+    const res = JSON.parse(ev.stdout);
+    expect(res.format).toBe('lockstep-result/1');
+    // spec: exit 0 when every check passes, 1 when a check fails
+    expect(ev.status).toBe(res.checks.some((c: { passed?: boolean }) => c.passed === false) ? 1 : 0);
+
+    const bad = join(dir, 'bad.json');
+    writeFileSync(bad, demo.stdout.replace('"mass_kg": 3500', '"mass_kg": "heavy"'));
+    const r = lockstep('evaluate', bad);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/load_states\[1\]\.mass_kg: "heavy" is not a number/);
+  }, 120000); // three process starts through tsx on a shared 2-core machine
+});

@@ -1,0 +1,74 @@
+/**
+ * `lockstep evaluate` with the regulation checks, run in process: exit 1 when a selected check fails,
+ * 0 when all pass, 2 for an unknown --rules id; the text report's checks section.
+ * Designs: hand-built fixed splits (test/core/checks/fixed-split.ts). φ = 0.6 fails the M1 lock order
+ * of 71/320/EEC Annex II Appendix point 3.1.1 from z* = (0.6 − 0.5)/0.2 = 0.50 to 0.80; φ = 0.7 passes.
+ */
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { runCli } from '../../cli/main.ts';
+import { splitDesign } from '../core/checks/fixed-split.ts';
+
+const dir = mkdtempSync(join(tmpdir(), 'lockstep-checks-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const file = (name: string, body: unknown) => {
+  const p = join(dir, name);
+  writeFileSync(p, JSON.stringify(body));
+  return p;
+};
+async function run(argv: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const code = await runCli(argv, { stdout: (t) => void (stdout += t), stderr: (t) => void (stderr += t) });
+  return { code, stdout, stderr };
+}
+
+describe('lockstep evaluate: checks decide the exit status', () => {
+  it('a design failing the M1 lock order exits 1; the JSON names the rule, paragraph, range and margin', async () => {
+    const r = await run(['evaluate', file('fail.json', splitDesign({ frontPistons: 3, rearPistons: 2 })), '--json']);
+    expect(r.code).toBe(1);
+    const res = JSON.parse(r.stdout);
+    const lock = res.checks.find((c: any) => c.rule === 'eu-appendix/lock-order' && c.load_state === 'laden');
+    expect(lock.passed).toBe(false);
+    expect(lock.source.paragraph).toMatch(/3\.1\.1/);
+    expect(lock.failing_ranges[0][0]).toBeCloseTo(0.5, 8);
+    expect(lock.worst_margin).toBeLessThan(0);
+  });
+
+  it('a design passing every default check exits 0; the text report shows verdicts, sources and the verify note', async () => {
+    const r = await run(['evaluate', file('pass.json', splitDesign({ frontPistons: 7, rearPistons: 3 }))]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('Regulation checks');
+    expect(r.stdout).toMatch(/PASS\s+eu-appendix\/lock-order/);
+    expect(r.stdout).toContain('71/320/EEC Annex II Appendix, point 3.1.1');
+    // efficiency coefficient 0.85 is [P] in the reference sheet → the verify note
+    expect(r.stdout).toMatch(/point 3\.1\.1 \(coefficient 0\.85\) \[partial: verify against the current official text\]/);
+    expect(r.stdout).toContain('Every applicable check passes.');
+  });
+
+  it('--rules chooses the sets: the failing design passes when only the service check is asked for', async () => {
+    const p = file('fail2.json', splitDesign({ frontPistons: 3, rearPistons: 2 }));
+    const r = await run(['evaluate', p, '--rules', 'performance/service', '--json']);
+    expect(r.code).toBe(0);
+    expect(new Set(JSON.parse(r.stdout).checks.map((c: any) => c.rule))).toEqual(new Set(['performance/service']));
+    const both = await run(['evaluate', p, '--rules', 'eu-appendix,fmvss135']);
+    expect(both.code).toBe(1);
+    expect(both.stdout).toMatch(/FAIL\s+fmvss135\/lock-sequence/);
+  });
+
+  it('ABS on every axle: the lock-order failure is shown for the ABS-failed case but does not fail the run', async () => {
+    const r = await run(['evaluate', file('abs.json', splitDesign({ frontPistons: 3, rearPistons: 2, abs: true })), '--rules', 'eu-appendix']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/n\/a\s+eu-appendix\/lock-order/);
+    expect(r.stdout).toMatch(/fail \(info\)\s+eu-appendix\/lock-order \(ABS failed, as a vehicle without ABS\)/);
+  });
+
+  it('an unknown --rules id exits 2 and lists the known ids', async () => {
+    const r = await run(['evaluate', file('x.json', splitDesign({ frontPistons: 7, rearPistons: 3 })), '--rules', 'eu-appendix,r13']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/--rules: "r13" is not a rule set or rule; use one or more of eu-appendix, performance/);
+    expect(r.stderr).toContain('CLI_ERR_USAGE');
+  });
+});

@@ -1,0 +1,70 @@
+// `lockstep packet` and `lockstep store`, run in process. Exit codes per docs (0 ok, 2 invalid input);
+// the revision id is the SHA-256 of the canonical design JSON (server/store/revision-id.ts).
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../../cli/main.ts';
+import { demoDesign } from '../../core/index.ts';
+import { revisionId } from '../../server/store/revision-id.ts';
+
+const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-cli-store-'));
+let saved: string | undefined;
+beforeAll(() => {
+  saved = process.env.LOCKSTEP_DATA_DIR;
+  process.env.LOCKSTEP_DATA_DIR = path.join(dir, 'data');
+});
+afterAll(() => {
+  if (saved === undefined) delete process.env.LOCKSTEP_DATA_DIR;
+  else process.env.LOCKSTEP_DATA_DIR = saved;
+  rmSync(dir, { recursive: true, force: true });
+});
+
+async function run(...argv: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const code = await runCli(argv, { stdout: (t) => (stdout += `${t}\n`), stderr: (t) => (stderr += `${t}\n`) });
+  return { code, stdout, stderr };
+}
+
+describe('lockstep store and packet', () => {
+  const file = path.join(dir, 'design.json');
+  const d = demoDesign();
+  const rev = revisionId(d);
+  beforeAll(() => writeFileSync(file, JSON.stringify(d)));
+
+  it('saves a file and prints its revision id', async () => {
+    const r = await run('store', 'save', file, '-m', 'first');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain(`saved revision ${rev}`);
+  });
+  it('lists the designs and shows a revision by prefix as a design file', async () => {
+    const list = await run('store', 'list', '--json');
+    expect(JSON.parse(list.stdout)).toEqual([expect.objectContaining({ head_revision: rev, revision_count: 1 })]);
+    const show = await run('store', 'show', rev.slice(0, 8));
+    expect(JSON.parse(show.stdout)).toEqual(d);
+  });
+  it('writes the packet of a saved revision, the same bytes as for the file', async () => {
+    const a = path.join(dir, 'a.pdf');
+    const b = path.join(dir, 'b.pdf');
+    expect((await run('packet', file, '--out', a, '--date', '2026-12-01')).code).toBe(0);
+    const r = await run('packet', '--revision', rev.slice(0, 12), '--out', b, '--date', '2026-12-01');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain(rev);
+    const text = execFileSync('/usr/bin/pdftotext', [b, '-'], { encoding: 'utf8' });
+    expect(text).toContain(rev);
+    expect(execFileSync('cmp', [a, b]).length).toBe(0); // cmp prints nothing and exits 0 when identical
+  });
+  it('refuses bad use with exit 2 and a coded message', async () => {
+    expect((await run('packet', file)).stderr).toContain('CLI_ERR_USAGE');
+    const missing = await run('store', 'show', 'ffffffffffff');
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toContain('STORE_ERR_REVISION_NOT_FOUND');
+    const list = JSON.parse((await run('store', 'list', '--json')).stdout) as { id: string }[];
+    const del = await run('store', 'delete', list[0]!.id);
+    expect(del.code).toBe(2);
+    expect(del.stderr).toContain('STORE_ERR_DELETE_NOT_CONFIRMED');
+    expect((await run('store', 'delete', list[0]!.id, '--confirm', list[0]!.id)).code).toBe(0);
+  });
+});

@@ -1,0 +1,196 @@
+// Sources: hand-derived arithmetic shown beside each check (piston area πd²/4, volume = area × travel,
+// pressure from the design-file spec "Physics": T = G p with G from brake-gain, zP = T1 + T2).
+// Targets: service Type-0 d_m 5.0 m/s² for N1 (71/320 Annex II 2.1.1 [P], reference sheet 5.2);
+// secondary braking 2.2 m/s² for N (R13 Rev.4 Annex 4 2.2 [V], reference sheet 5.3).
+// Tandem master-cylinder model: the one documented in core/fluid-volume.ts (a failed chamber uses up
+// its stroke first) — common practice, no source.
+import { describe, expect, it } from 'vitest';
+import {
+  axleFluid,
+  axleVolume,
+  demoDesign,
+  type DesignFile,
+  pedalTravel,
+  pushrodTravel,
+  readDesign,
+  stateModels,
+} from '../../core/index.ts';
+
+/** A simple system: one 50 mm sliding caliper piston front, 20 mm wheel cylinders rear, 20 mm master cylinder. */
+function simpleDesign(): DesignFile {
+  const input = {
+    format: 'lockstep-design/1',
+    name: 'Simple hand-check system',
+    vehicle: { category: 'N1', wheelbase_m: 3, abs: false, drive: 'rear' },
+    load_states: [{ id: 'laden', label: 'Laden', kind: 'laden', mass_kg: 2000, front_axle_kg: 1000, cg_height_m: 0.6 }],
+    axles: {
+      front: {
+        tyre_radius_m: 0.3,
+        brake: { type: 'disc', caliper: 'sliding', piston_diameters_mm: [50], effective_radius_m: 0.12, pad_friction: 0.4, threshold_pressure_bar: 0 },
+      },
+      rear: {
+        tyre_radius_m: 0.3,
+        brake: { type: 'drum', wheel_cylinder_diameter_mm: 20, drum_radius_m: 0.12, brake_factor: 2, threshold_pressure_bar: 0 },
+      },
+    },
+    hydraulics: { master_cylinder_bore_mm: 20, pedal_ratio: 4, booster_ratio: 1, circuit_split: 'front_rear', rear_valve: { type: 'none' } },
+    hardware: {
+      front: { running_clearance_mm: 0.2, knock_back_mm: 0, expansion_per_bar_mm3: 10, fluid_volume_mm3: 20000 },
+      rear: { shoe_travel_mm: 0.5, expansion_per_bar_mm3: 10, fluid_volume_mm3: 20000 },
+      fluid_bulk_modulus_bar: 10000,
+      master_cylinder: { primary_stroke_mm: 16, secondary_stroke_mm: 14, dead_travel_mm: 1, primary_feeds: 'front' },
+      pedal_travel_available_mm: 150,
+      pedal_travel_warn_pct: 60,
+    },
+  };
+  const r = readDesign(input);
+  if (!r.ok) throw new Error(JSON.stringify(r.errors));
+  return r.design;
+}
+
+describe('axle fluid volume', () => {
+  it('disc: clearance volume = 2 calipers × piston area × (clearance + knock-back)', () => {
+    const d = simpleDesign();
+    const f = axleFluid(d.axles.front.brake, d.hardware!.front, 10000e5);
+    // hand-derived: π/4 · 50² = 1963.495 mm²; 2 · 1963.495 · 0.2 mm = 785.398 mm³
+    expect(f.clearance * 1e9).toBeCloseTo(785.398, 2);
+    // hand-derived: 10 mm³/bar + 20000 mm³ / 10000 bar = 12 mm³/bar = 12e-9 m³ / 1e5 Pa
+    expect(f.compliance).toBeCloseTo(12e-14, 20);
+    // hand-derived: at 50 bar 785.398 + 12 · 50 = 1385.398 mm³
+    expect(axleVolume(f, 50e5) * 1e9).toBeCloseTo(1385.398, 2);
+    expect(axleVolume(f, 0)).toBe(0);
+  });
+  it('drum: clearance volume = 2 wheels × 2 pistons × wheel-cylinder area × shoe travel', () => {
+    const d = simpleDesign();
+    const f = axleFluid(d.axles.rear.brake, d.hardware!.rear, 10000e5);
+    // hand-derived: π/4 · 20² = 314.159 mm²; 4 · 314.159 · 0.5 = 628.319 mm³
+    expect(f.clearance * 1e9).toBeCloseTo(628.319, 2);
+  });
+  it('knock-back adds to the disc piston travel', () => {
+    const d = simpleDesign();
+    const f = axleFluid(d.axles.front.brake, { running_clearance_mm: 0.2, knock_back_mm: 0.1 }, 10000e5);
+    // hand-derived: 2 · 1963.495 · 0.3 = 1178.097 mm³
+    expect(f.clearance * 1e9).toBeCloseTo(1178.097, 2);
+  });
+});
+
+describe('tandem master cylinder', () => {
+  const mc = { area: (Math.PI / 4) * 0.02 ** 2, primaryStroke: 0.016, secondaryStroke: 0.014, deadTravel: 0.001 };
+  const A = mc.area * 1e6; // 314.159 mm²
+  it('both circuits: pushrod travel = both pistons (dead travel + volume / area)', () => {
+    // hand-derived: (1 + 628.319/314.159) + (1 + 314.159/314.159) = 3 + 2 = 5 mm
+    const x = pushrodTravel(mc, 2 * A * 1e-9, A * 1e-9, 'none');
+    expect(x.travel * 1e3).toBeCloseTo(5, 9);
+    expect(x.bottomed).toBe(false);
+  });
+  it('primary lost: its whole stroke is used before the secondary builds pressure', () => {
+    // hand-derived: 16 + 1 + 314.159/314.159 = 18 mm
+    expect(pushrodTravel(mc, 0, A * 1e-9, 'primary').travel * 1e3).toBeCloseTo(18, 9);
+  });
+  it('secondary lost: the floating piston bottoms first, then the primary builds pressure', () => {
+    // hand-derived: 14 + 1 + 2 = 17 mm
+    expect(pushrodTravel(mc, 2 * A * 1e-9, 0, 'secondary').travel * 1e3).toBeCloseTo(17, 9);
+  });
+  it('a piston that needs more than its stroke bottoms', () => {
+    // hand-derived: 1 + 15 · 314.159/314.159 = 16 mm > 14 mm secondary stroke
+    expect(pushrodTravel(mc, 0, 15 * A * 1e-9, 'none').bottomed).toBe(true);
+  });
+});
+
+describe('pedal travel of the simple system', () => {
+  const d = simpleDesign();
+  const r = pedalTravel(d, stateModels(d));
+  const state = r.states[0]!;
+  const service = state.cases.find((c) => c.case === 'service')!.point!;
+
+  it('service case at 5.0 m/s² matches the hand arithmetic', () => {
+    // hand-derived: G1 = 4 · 0.4 · 1963.495e-6 m² · 0.12/0.3 = 125.664 N/bar; G2 = 2 · 2 · 314.159e-6 · 0.12/0.3 = 50.265 N/bar;
+    // z P = 5.0 m/s² · 2000 kg = 10000 N, so p = 10000 / 175.929 = 56.841 bar (no valve: rear at p too)
+    expect(service.master_pressure_bar).toBeCloseTo(56.841, 2);
+    // front 785.398 + 12 · 56.841 = 1467.491 mm³; rear 628.319 + 12 · 56.841 = 1310.411 mm³
+    expect(service.circuit_volume_mm3.front).toBeCloseTo(1467.491, 1);
+    expect(service.circuit_volume_mm3.rear).toBeCloseTo(1310.411, 1);
+    // pushrod (1 + 1467.491/314.159) + (1 + 1310.411/314.159) = 5.6712 + 5.1712 = 10.8423 mm; pedal × 4 = 43.369 mm
+    expect(service.pushrod_travel_mm).toBeCloseTo(10.8423, 3);
+    expect(service.pedal_travel_mm).toBeCloseTo(43.369, 2);
+    // 43.369 / 150 = 28.9 %, margin 106.6 mm
+    expect(service.share_of_available_pct).toBeCloseTo(28.91, 1);
+    expect(service.margin_mm).toBeCloseTo(106.63, 1);
+    expect(r.defaults_used).toEqual([]);
+    expect(r.warnings).toEqual([]);
+  });
+
+  it('front (primary) circuit failed: rear only to 2.2 m/s²', () => {
+    const c = state.cases.find((x) => x.case === 'front_circuit_failed')!;
+    // hand-derived: 2.2 · 2000 = 4400 N = 50.265 N/bar · p, p = 87.535 bar; rear volume 628.319 + 12 · 87.535 = 1678.741 mm³;
+    // pushrod 16 + 1 + 1678.741/314.159 = 22.3436 mm; pedal 89.374 mm
+    expect(c.point!.master_pressure_bar).toBeCloseTo(87.535, 2);
+    expect(c.point!.circuit_volume_mm3.front).toBe(0);
+    expect(c.point!.pushrod_travel_mm).toBeCloseTo(22.3436, 3);
+    expect(c.point!.pedal_travel_mm).toBeCloseTo(89.374, 2);
+  });
+
+  it('rear (secondary) circuit failed: front only to 2.2 m/s²', () => {
+    const c = state.cases.find((x) => x.case === 'rear_circuit_failed')!;
+    // hand-derived: 4400 / 125.664 = 35.014 bar; 785.398 + 12 · 35.014 = 1205.567 mm³; 14 + 1 + 3.8374 = 18.8374 mm; × 4 = 75.350 mm
+    expect(c.point!.master_pressure_bar).toBeCloseTo(35.014, 2);
+    expect(c.point!.pushrod_travel_mm).toBeCloseTo(18.8374, 3);
+    expect(c.point!.pedal_travel_mm).toBeCloseTo(75.35, 2);
+  });
+
+  it('the series rises with braking rate and starts with the pedal at rest', () => {
+    const sv = state.series.find((s) => s.case === 'service')!;
+    expect(sv.braking_rate[0]).toBe(0);
+    expect(sv.pedal_travel_mm[0]).toBe(0);
+    for (let i = 1; i < sv.pedal_travel_mm.length; i++) expect(sv.pedal_travel_mm[i]!).toBeGreaterThan(sv.pedal_travel_mm[i - 1]!);
+  });
+
+  it('warns when the service test takes more than the set share of the travel', () => {
+    const tight = simpleDesign();
+    // hand-derived: 43.369 mm is 62 % of 70 mm, above the 60 % default share (common practice, no source)
+    tight.hardware!.pedal_travel_available_mm = 70;
+    delete tight.hardware!.pedal_travel_warn_pct;
+    const t = pedalTravel(tight, stateModels(tight));
+    expect(t.warn_pct).toBe(60);
+    expect(t.defaults_used).toContain('hardware.pedal_travel_warn_pct');
+    expect(t.warnings.map((w) => w.code)).toContain('WARN_PEDAL_TRAVEL_SHARE');
+    // at 80 mm (54 %) it stays quiet
+    tight.hardware!.pedal_travel_available_mm = 80;
+    expect(pedalTravel(tight, stateModels(tight)).warnings.map((w) => w.code)).not.toContain('WARN_PEDAL_TRAVEL_SHARE');
+  });
+
+  it('flags a master cylinder that runs out of stroke', () => {
+    const short = simpleDesign();
+    // hand-derived: the secondary (rear) piston needs 1 + 1310.411/314.159 = 5.17 mm; a 5 mm stroke bottoms
+    short.hardware!.master_cylinder!.secondary_stroke_mm = 5;
+    const t = pedalTravel(short, stateModels(short));
+    expect(t.states[0]!.cases[0]!.point!.bottomed).toBe(true);
+    expect(t.warnings.map((w) => w.code)).toContain('WARN_PEDAL_TRAVEL_EXHAUSTED');
+  });
+
+  it('diagonal split: each circuit takes half of each axle', () => {
+    const diag = simpleDesign();
+    diag.hydraulics.circuit_split = 'diagonal';
+    const t = pedalTravel(diag, stateModels(diag));
+    const p = t.states[0]!.cases[0]!.point!;
+    // hand-derived: (1467.491 + 1310.411) / 2 = 1388.951 mm³ per circuit
+    expect(p.circuit_volume_mm3.diagonal_1).toBeCloseTo(1388.951, 1);
+    expect(p.circuit_volume_mm3.diagonal_2).toBeCloseTo(1388.951, 1);
+  });
+
+  it('a disc-only key on a drum axle is reported, not silently ignored', () => {
+    const odd = simpleDesign();
+    odd.hardware!.rear!.running_clearance_mm = 0.3;
+    const t = pedalTravel(odd, stateModels(odd));
+    expect(t.warnings.map((w) => w.path)).toContain('hardware.rear.running_clearance_mm');
+  });
+});
+
+describe('the demo', () => {
+  it('lists every default it used and raises no pedal-travel warning', () => {
+    const d = demoDesign();
+    const t = pedalTravel(d, stateModels(d));
+    expect(t.defaults_used).toContain('hardware.pedal_travel_available_mm');
+    expect(t.warnings).toEqual([]);
+  });
+});

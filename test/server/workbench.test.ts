@@ -1,0 +1,317 @@
+// Route tests of the workbench through inject (no network).
+// Sources: OWASP XSS Prevention Cheat Sheet rule #1 (escape & < > " ' in content and quoted attributes) and
+// rule #3.1 (JSON data blocks with < escaped); htmx 2 docs "Response Handling" (4xx not swapped unless
+// configured; we configure 422); NIST SP 811 appendix B.8 (1 in = 0.0254 m, 1 lb = 0.45359237 kg);
+// RFC 9110 (413 Content Too Large, 415 Unsupported Media Type, 422 Unprocessable Content);
+// RFC 4180 (CSV); the design contract /work/shared/spec/design-file.md.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { FastifyInstance } from 'fastify';
+import { CAUTION, demoDesign } from '../../core/index.ts';
+import { buildApp } from '../../server/app.ts';
+import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
+import { HTMX_CONFIG } from '../../views/layout.ts';
+
+let app: FastifyInstance;
+let shape = '';
+const EVIL = `<script>alert("x")</script> & 'q'`;
+const EVIL_ESCAPED = '&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt; &amp; &#39;q&#39;';
+
+const unescapeAttr = (s: string) => s.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+
+beforeAll(async () => {
+  app = buildApp();
+  await app.ready();
+  const page = await app.inject({ method: 'GET', url: '/' });
+  shape = unescapeAttr(/name="_shape" value="([^"]*)"/.exec(page.body)![1]!);
+});
+afterAll(async () => {
+  await app.close();
+});
+
+function form(values: FormValues, extra: FormValues = {}): string {
+  const p = new URLSearchParams();
+  for (const [k, v] of Object.entries({ _units: 'metric', _shape: shape, ...values, ...extra })) p.append(k, v);
+  return p.toString();
+}
+const demoValues = (): FormValues => designToValues(demoDesign(), 'metric');
+async function update(body: string) {
+  return app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: body });
+}
+/** Every <script> in a body is either external (src) or a JSON data block: no inline code (CSP). */
+function inlineScripts(body: string): string[] {
+  return [...body.matchAll(/<script\b([^>]*)>/g)].map((m) => m[1]!).filter((a) => !/\bsrc="/.test(a) && !/type="application\/json"/.test(a));
+}
+
+describe('GET /', () => {
+  it('serves the page on the demo with every section, the caution and no inline script', async () => {
+    const r = await app.inject({ method: 'GET', url: '/' });
+    expect(r.statusCode).toBe(200);
+    expect(r.headers['content-type']).toBe('text/html; charset=utf-8');
+    for (const id of ['design-form', 'design-inputs', 'status', 'results', 'results-note', 'chart-a', 'chart-b', 'chart-c', 'verdict-0', 'verdict-1', 'panel-vehicle', 'panel-load-states', 'panel-brakes', 'panel-hydraulics', 'panel-surfaces', 'panel-table']) {
+      expect(r.body, id).toContain(`id="${id}"`);
+    }
+    expect(r.body).toContain(CAUTION);
+    expect(r.body).toContain('What you are looking at');
+    expect(inlineScripts(r.body)).toEqual([]);
+    expect(r.body).toMatch(/<div class="chart" data-chart="chart-a-data"/);
+  });
+  it('sends a CSP without unsafe-eval and without inline script, and configures htmx to match', async () => {
+    const r = await app.inject({ method: 'GET', url: '/' });
+    const csp = String(r.headers['content-security-policy']);
+    expect(csp).toContain("script-src 'self'");
+    expect(csp).not.toContain('unsafe-eval');
+    expect(/script-src[^;]*unsafe-inline/.test(csp)).toBe(false);
+    expect(csp).toContain("frame-ancestors 'none'");
+    expect(HTMX_CONFIG.allowEval).toBe(false);
+    expect(HTMX_CONFIG.includeIndicatorStyles).toBe(false);
+    expect(r.body).toContain('name="htmx-config"');
+  });
+  it('shows US customary units on request: 3.665 m = 144.291 in (3.665 / 0.0254)', async () => {
+    const r = await app.inject({ method: 'GET', url: '/?units=us' });
+    expect(r.body).toMatch(/name="vehicle.wheelbase_m" value="144.291"/);
+  });
+});
+
+describe('static assets', () => {
+  it('serves htmx and plotly from node_modules under versioned URLs, cached for a year, compressed', async () => {
+    const page = (await app.inject({ method: 'GET', url: '/' })).body;
+    const htmx = /src="(\/vendor\/htmx-2\.0\.11\/htmx\.min\.js)"/.exec(page)![1]!;
+    const plotly = /src="(\/vendor\/plotly-[\d.]+\/plotly\.min\.js)"/.exec(page)![1]!;
+    for (const url of [htmx, plotly]) {
+      const r = await app.inject({ method: 'GET', url, headers: { 'accept-encoding': 'br, gzip' } });
+      expect(r.statusCode, url).toBe(200);
+      expect(r.headers['content-type']).toMatch(/javascript/);
+      expect(String(r.headers['cache-control'])).toMatch(/max-age=31536000/);
+      expect(String(r.headers['cache-control'])).toMatch(/immutable/);
+      expect(r.headers['content-encoding']).toBe('br');
+    }
+    const css = /href="(\/static\/[0-9a-f]{10}\/css\/workbench\.css)"/.exec(page)![1]!;
+    const c = await app.inject({ method: 'GET', url: css });
+    expect(c.statusCode).toBe(200);
+    expect(c.headers['content-type']).toMatch(/text\/css/);
+  });
+  it('serves nothing else from node_modules', async () => {
+    const r = await app.inject({ method: 'GET', url: '/vendor/htmx-2.0.11/htmx.js' });
+    expect(r.statusCode).toBe(404);
+  });
+});
+
+describe('errors', () => {
+  it('unknown routes get a 404 page for browsers and coded JSON otherwise', async () => {
+    const h = await app.inject({ method: 'GET', url: '/no/such/page', headers: { accept: 'text/html' } });
+    expect(h.statusCode).toBe(404);
+    expect(h.headers['content-type']).toBe('text/html; charset=utf-8');
+    expect(h.body).toContain('APP_ERR_NOT_FOUND');
+    const j = await app.inject({ method: 'GET', url: '/no/such/page' });
+    expect(j.statusCode).toBe(404);
+    expect(j.json()).toMatchObject({ code: 'APP_ERR_NOT_FOUND' });
+  });
+  it('escapes the URL in the 404 page', async () => {
+    const h = await app.inject({ method: 'GET', url: '/%3Cscript%3Ex', headers: { accept: 'text/html' } });
+    expect(h.body).not.toContain('<script>x');
+  });
+  it('refuses a body over the limit with 413 APP_ERR_BODY_TOO_LARGE', async () => {
+    const r = await app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: `name=${'x'.repeat(1_100_000)}` });
+    expect(r.statusCode).toBe(413);
+    expect(r.json()).toMatchObject({ code: 'APP_ERR_BODY_TOO_LARGE' });
+  });
+  it('refuses a content type it does not read with 415 APP_ERR_UNSUPPORTED_MEDIA_TYPE', async () => {
+    const r = await app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'text/csv' }, payload: 'a,b' });
+    expect(r.statusCode).toBe(415);
+    expect(r.json()).toMatchObject({ code: 'APP_ERR_UNSUPPORTED_MEDIA_TYPE' });
+  });
+  it('refuses an unknown list operation with 400 APP_ERR_UNKNOWN_OPERATION as a status fragment', async () => {
+    const r = await update(form(demoValues(), { _op: 'explode:load_states[0]' }));
+    expect(r.statusCode).toBe(400);
+    expect(r.body).toContain('APP_ERR_UNKNOWN_OPERATION');
+    expect(r.body).toContain('id="status"');
+  });
+});
+
+describe('POST /workbench/update', () => {
+  it('a valid design: 200, status current, results out of band, field messages emptied, inputs left alone', async () => {
+    const r = await update(form(demoValues()));
+    expect(r.statusCode).toBe(200);
+    expect(r.headers['content-type']).toBe('text/html; charset=utf-8');
+    expect(r.body.startsWith('<div id="status"')).toBe(true);
+    expect(r.body).toContain('Results are current');
+    expect(r.body).toMatch(/<div id="results" hx-swap-oob="true">/);
+    expect(r.body).toMatch(/<p class="msg" id="m-vehicle-wheelbase_m" data-field="vehicle.wheelbase_m" hx-swap-oob="true"><\/p>/);
+    expect(r.body).not.toContain('id="design-inputs"');
+    expect(inlineScripts(r.body)).toEqual([]);
+  });
+  it('invalid values: 422, the field is marked with what is allowed, results marked not current, typed text kept', async () => {
+    const v = demoValues();
+    v['vehicle.wheelbase_m'] = '0.2'; // schema: 0.5 … 10 m
+    v['load_states[1].front_axle_kg'] = '3600'; // must be below the laden mass 3500 kg
+    v['axles.front.brake.pad_friction'] = 'lots';
+    const r = await update(form(v));
+    expect(r.statusCode).toBe(422);
+    expect(r.body).toMatch(/id="m-vehicle-wheelbase_m"[^>]*hx-swap-oob="true">[^<]*0\.5[^<]*10[^<]*<\/p>/);
+    expect(r.body).toMatch(/id="m-axles-front-brake-pad_friction"[^>]*>[^<]*not a number/);
+    expect(r.body).toContain('href="#f-vehicle-wheelbase_m"');
+    expect(r.body).toMatch(/<div id="results-note" class="stale-note on" hx-swap-oob="true"><strong>Not current\.<\/strong>/);
+    expect(r.body).not.toMatch(/<div id="results" hx-swap-oob/);
+    expect(r.body).not.toContain('id="design-inputs"'); // the inputs (and what was typed) stay in the page
+    // htmx swaps 422 because the page configures it (htmx 2 default: no swap for 4xx)
+    expect(HTMX_CONFIG.responseHandling.find((h) => h.code === '422')).toMatchObject({ swap: true });
+  });
+  it('the cross-field rule lands on the front axle load of the laden state', async () => {
+    const v = demoValues();
+    v['vehicle.wheelbase_m'] = '3.665';
+    v['load_states[1].front_axle_kg'] = '3600';
+    const r = await update(form(v));
+    expect(r.statusCode).toBe(422);
+    expect(r.body).toMatch(/id="m-load_states-1-front_axle_kg"[^>]*>[^<]*3600[^<]*3500/);
+  });
+  it('a typed unit is converted: "58 in" wheelbase is read as 1.4732 m (58 × 0.0254)', async () => {
+    const v = demoValues();
+    v['vehicle.wheelbase_m'] = '58 in';
+    v['load_states[0].cg_height_m'] = '0.5';
+    v['load_states[1].cg_height_m'] = '0.6';
+    const r = await update(form(v));
+    expect(r.statusCode).toBe(200);
+    const j = await app.inject({ method: 'POST', url: '/workbench/design.json', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(v) });
+    expect(j.json().vehicle.wheelbase_m).toBeCloseTo(1.4732, 9);
+  });
+  it('switching units re-renders the inputs converted: 2720 kg -> 5996.57 lb (2720 / 0.45359237)', async () => {
+    const r = await update(form(demoValues(), { _units: 'us' }));
+    expect(r.statusCode).toBe(200);
+    expect(r.body).toContain('<div id="design-inputs" hx-swap-oob="true">');
+    expect(r.body).toMatch(/name="load_states\[0\]\.mass_kg" value="5996.57"/);
+    expect(r.body).toMatch(/name="vehicle.wheelbase_m" value="144.291"/);
+  });
+  it('switching the rear brake to drum shows the drum fields and drops the disc ones', async () => {
+    const r = await update(form(demoValues(), { 'axles.rear.brake.type': 'drum' }));
+    expect(r.statusCode).toBe(200);
+    expect(r.body).toContain('name="axles.rear.brake.wheel_cylinder_diameter_mm"');
+    expect(r.body).toContain('name="axles.rear.brake.brake_factor"');
+    expect(r.body).not.toContain('name="axles.rear.brake.piston_diameters_mm[0]"');
+  });
+  it('switching the valve to proportioning shows knee and ratio; load-sensing shows its table', async () => {
+    const r = await update(form(demoValues(), { 'hydraulics.rear_valve.type': 'proportioning' }));
+    expect(r.statusCode).toBe(200);
+    expect(r.body).toContain('name="hydraulics.rear_valve.knee_bar"');
+    expect(r.body).not.toContain('knee_bar_at_rear_axle_kg');
+    const t = await update(form(demoValues()));
+    expect(t.statusCode).toBe(200);
+    const page = await app.inject({ method: 'GET', url: '/' });
+    expect(page.body).toContain('name="hydraulics.rear_valve.knee_bar_at_rear_axle_kg[1][1]"');
+  });
+  it('add, duplicate and remove load states', async () => {
+    const d = await update(form(demoValues(), { _op: 'dup:load_states[0]' }));
+    expect(d.statusCode).toBe(200);
+    expect(d.body).toMatch(/name="load_states\[1\]\.id"[^>]*value="unladen-2"/);
+    expect(d.body).toMatch(/name="load_states\[2\]\.id"[^>]*value="laden"/);
+    expect(d.body).toContain('id="verdict-2"');
+    const rm = await update(form(demoValues(), { _op: 'remove:load_states[0]' }));
+    expect(rm.body).toMatch(/name="load_states\[0\]\.id"[^>]*value="laden"/);
+    expect(rm.body).not.toContain('name="load_states[1].id"');
+  });
+});
+
+describe('user text is escaped in every fragment', () => {
+  const evil = (): FormValues => {
+    const v = demoValues();
+    v.name = EVIL;
+    v['load_states[0].label'] = EVIL;
+    v['load_states[1].label'] = `${EVIL} laden`;
+    return v;
+  };
+  function noRawEvil(body: string) {
+    expect(body).not.toContain('<script>alert');
+    expect(body).not.toContain(`"x")`);
+    expect(inlineScripts(body)).toEqual([]);
+  }
+  it('status + results + field messages (plain update)', async () => {
+    const r = await update(form(evil()));
+    expect(r.statusCode).toBe(200);
+    noRawEvil(r.body);
+    expect(r.body).toContain(`Results for <strong>${EVIL_ESCAPED}</strong>`);
+    expect(r.body).toContain(EVIL_ESCAPED); // verdict headings
+    // in chart data the label travels as JSON with < written \u003c (and is entity-escaped for plotly labels)
+    expect(r.body).toContain('\\u0026lt;script\\u0026gt;');
+  });
+  it('re-rendered inputs (structural change) keep the text as an escaped attribute value', async () => {
+    const r = await update(form(evil(), { _op: 'dup:load_states[0]' }));
+    noRawEvil(r.body);
+    expect(r.body).toContain(`name="name" maxlength="200" aria-describedby="m-name" class="w-l" value="${EVIL_ESCAPED}"`);
+    expect(r.body).toContain(`value="${EVIL_ESCAPED} (copy)"`);
+  });
+  it('invalid fragment (422) with the evil text typed into a number field', async () => {
+    const v = evil();
+    v['vehicle.wheelbase_m'] = EVIL;
+    const r = await update(form(v));
+    expect(r.statusCode).toBe(422);
+    noRawEvil(r.body);
+    expect(r.body).toContain('&lt;script&gt;');
+  });
+  it('upload fragment with an evil name and labels', async () => {
+    const d = demoDesign();
+    d.name = EVIL;
+    d.load_states[0]!.label = EVIL;
+    const r = await update(form({}, { _upload: JSON.stringify(d) }));
+    expect(r.statusCode).toBe(200);
+    noRawEvil(r.body);
+    expect(r.body).toContain(EVIL_ESCAPED);
+  });
+  it('CSV quotes text and defuses spreadsheet formulas', async () => {
+    const v = demoValues();
+    v['load_states[0].label'] = '=HYPERLINK("x") & "q"';
+    const r = await app.inject({ method: 'POST', url: '/workbench/table.csv', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(v) });
+    expect(r.statusCode).toBe(200);
+    expect(r.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(r.headers['content-disposition']).toMatch(/attachment; filename=".*-table\.csv"/);
+    const lines = r.body.trimEnd().split('\r\n');
+    expect(lines).toHaveLength(1 + 2 * 10); // header + z = 0.1 … 1.0 for two load states
+    expect(lines[1]).toContain(`"'=HYPERLINK(""x"") & ""q"""`);
+    expect(lines[0]).toContain('"Pedal force (N)"');
+  });
+});
+
+describe('upload', () => {
+  it('malformed JSON: 422 APP_ERR_UPLOAD_NOT_JSON, and nothing of the design is replaced', async () => {
+    const r = await update(form({}, { _upload: '{"format": "lockstep-design/1", ' }));
+    expect(r.statusCode).toBe(422);
+    expect(r.body).toContain('APP_ERR_UPLOAD_NOT_JSON');
+    expect(r.body).toContain('unchanged');
+    expect(r.body).not.toContain('id="design-inputs"');
+    expect(r.body).not.toContain('id="results"');
+    expect(r.body).not.toContain('hx-swap-oob');
+  });
+  it('a JSON file that is not a valid design: 422 APP_ERR_UPLOAD_INVALID with every problem by field', async () => {
+    const d = demoDesign() as unknown as Record<string, unknown>;
+    (d.vehicle as Record<string, unknown>).wheelbase_m = 40;
+    const r = await update(form({}, { _upload: JSON.stringify(d) }));
+    expect(r.statusCode).toBe(422);
+    expect(r.body).toContain('APP_ERR_UPLOAD_INVALID');
+    expect(r.body).toContain('vehicle.wheelbase_m');
+    expect(r.body).not.toContain('hx-swap-oob');
+  });
+  it('a valid file replaces the inputs and the results', async () => {
+    const d = demoDesign();
+    d.name = 'Uploaded test design';
+    const r = await update(form({}, { _upload: JSON.stringify(d) }));
+    expect(r.statusCode).toBe(200);
+    expect(r.body).toContain('<div id="design-inputs" hx-swap-oob="true">');
+    expect(r.body).toContain('value="Uploaded test design"');
+    expect(r.body).toMatch(/<div id="results" hx-swap-oob="true">/);
+  });
+});
+
+describe('downloads', () => {
+  it('design.json is the current design as lockstep-design/1, provenance kept', async () => {
+    const r = await app.inject({ method: 'POST', url: '/workbench/design.json', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(demoValues()) });
+    expect(r.statusCode).toBe(200);
+    expect(r.headers['content-type']).toBe('application/json; charset=utf-8');
+    expect(r.headers['content-disposition']).toMatch(/^attachment; filename="demo-long-wheelbase-panel-van/);
+    expect(r.json()).toEqual(demoDesign());
+  });
+  it('an invalid design is not downloaded: 422 with the field list', async () => {
+    const v = demoValues();
+    v['hydraulics.pedal_ratio'] = '0';
+    const r = await app.inject({ method: 'POST', url: '/workbench/design.json', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(v) });
+    expect(r.statusCode).toBe(422);
+    expect(r.json().errors[0].path).toBe('hydraulics.pedal_ratio');
+  });
+});

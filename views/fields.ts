@@ -1,0 +1,108 @@
+/**
+ * Small input components for the workbench form. Each takes the field's design path as its name and shows
+ * the value as typed, the unit of the user's unit system and the field's messages (see server/forms/design-form.ts).
+ */
+import type { UnitSystem } from '../core/index.ts';
+import { displayUnitOf, type FormValues, unitLabel } from '../server/forms/design-form.ts';
+import { html, type SafeHtml } from './html.ts';
+
+export interface InputContext {
+  values: FormValues;
+  units: UnitSystem;
+  /** Messages per field name (design path). */
+  errors: ReadonlyMap<string, readonly string[]>;
+  /** Names of fields whose change re-renders the inputs (filled while rendering). */
+  structural: Set<string>;
+  /** Names of the fields rendered so far; any other value is carried along as a hidden input. */
+  rendered: Set<string>;
+}
+
+export function fieldId(name: string): string {
+  return `f-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
+}
+export function messageId(name: string): string {
+  return `m-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
+}
+
+/** The message slot under a field; the server fills it (or empties it) with out-of-band swaps. */
+export function fieldMessage(name: string, messages: readonly string[] | undefined, oob = false): SafeHtml {
+  return html`<p class="msg" id="${messageId(name)}" data-field="${name}"${oob ? html` hx-swap-oob="true"` : ''}>${(messages ?? []).join('; ')}</p>`;
+}
+
+export interface FieldOptions {
+  hint?: string;
+  /** Leave empty to omit the key (optional values). */
+  optional?: boolean;
+  /** Visually hidden label (tables). */
+  compact?: boolean;
+  /** Unit shown for a plain number, e.g. "–" for ratios. */
+  unitText?: string;
+  width?: 's' | 'm' | 'l';
+}
+
+function labelFor(name: string, label: string, unit: string, o: FieldOptions): SafeHtml {
+  return html`<label for="${fieldId(name)}"${o.compact ? html` class="sr"` : ''}>${label}${unit ? html` <span class="unit">(${unit})</span>` : ''}${o.optional ? html` <span class="opt">optional</span>` : ''}</label>`;
+}
+
+/** A number field; accepts a typed unit ("58 in"). */
+export function numberField(ctx: InputContext, name: string, label: string, o: FieldOptions = {}): SafeHtml {
+  ctx.rendered.add(name);
+  const unit = o.unitText ?? unitLabel(displayUnitOf(name, ctx.units));
+  const errs = ctx.errors.get(name);
+  return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
+${labelFor(name, label, unit, o)}<span class="in"><input id="${fieldId(name)}" name="${name}" value="${ctx.values[name] ?? ''}" inputmode="decimal" autocomplete="off" class="w-${o.width ?? 'm'}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}${unit ? ` (${unit})` : ''}"` : ''}>${unit && !o.compact ? html`<span class="u" aria-hidden="true">${unit}</span>` : ''}</span>
+${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
+}
+
+export function textField(ctx: InputContext, name: string, label: string, o: FieldOptions & { maxLength?: number; multiline?: boolean } = {}): SafeHtml {
+  ctx.rendered.add(name);
+  const errs = ctx.errors.get(name);
+  const v = ctx.values[name] ?? '';
+  const attrs = html`id="${fieldId(name)}" name="${name}" maxlength="${o.maxLength ?? 200}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}"` : ''} class="w-${o.width ?? 'l'}"`;
+  return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
+${labelFor(name, label, '', o)}${o.multiline ? html`<textarea ${attrs} rows="2">${v}</textarea>` : html`<input ${attrs} value="${v}" autocomplete="off">`}
+${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
+}
+
+/** A choice from a fixed list. `structural` re-renders the inputs when it changes (type switches). */
+export function selectField(
+  ctx: InputContext,
+  name: string,
+  label: string,
+  options: ReadonlyArray<readonly [value: string, text: string]>,
+  o: FieldOptions & { structural?: boolean } = {},
+): SafeHtml {
+  ctx.rendered.add(name);
+  if (o.structural) ctx.structural.add(name);
+  const v = ctx.values[name] ?? options[0]?.[0] ?? '';
+  const errs = ctx.errors.get(name);
+  return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
+${labelFor(name, label, '', o)}<select id="${fieldId(name)}" name="${name}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}"` : ''}>${options.map(([value, text]) => html`<option value="${value}"${value === v ? html` selected` : ''}>${text}</option>`)}${options.some(([value]) => value === v) ? '' : html`<option value="${v}" selected>${v} (not allowed)</option>`}</select>
+${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
+}
+
+/** A yes/no value: hidden "false" then the checkbox "true" (the last value sent wins). */
+export function checkField(ctx: InputContext, name: string, label: string, o: FieldOptions = {}): SafeHtml {
+  ctx.rendered.add(name);
+  const on = ['true', 'on', '1', 'yes'].includes((ctx.values[name] ?? '').toLowerCase());
+  const errs = ctx.errors.get(name);
+  return html`<div class="field check${errs?.length ? ' bad' : ''}"><input type="hidden" name="${name}" value="false">
+<label><input type="checkbox" id="${fieldId(name)}" name="${name}" value="true"${on ? html` checked` : ''} aria-describedby="${messageId(name)}"> ${label}</label>
+${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
+}
+
+/** A button that changes the structure of a list ("add:path", "dup:path[i]", "remove:path[i]"). */
+export function listButton(op: string, text: string, title: string, disabled = false): SafeHtml {
+  return html`<button type="button" class="op" name="_op" value="${op}" title="${title}" hx-post="/workbench/update" hx-target="#status" hx-swap="outerHTML"${disabled ? html` disabled` : ''}>${text}</button>`;
+}
+
+/** Names of the fields currently present under a list path, by index. */
+export function listIndicesOf(values: FormValues, listPath: string): number[] {
+  const set = new Set<number>();
+  for (const n of Object.keys(values)) {
+    if (!n.startsWith(`${listPath}[`)) continue;
+    const m = /^\[(\d+)\]/.exec(n.slice(listPath.length));
+    if (m) set.add(Number(m[1]));
+  }
+  return [...set].sort((a, b) => a - b);
+}

@@ -1,0 +1,79 @@
+/**
+ * HTML built by construction: every interpolated value is escaped unless it is already SafeHtml.
+ * `raw()` is the only way to mark a string as safe; use it only for markup the program generated itself,
+ * never for anything a person typed or uploaded. `jsonScript()` is the only way to put data in a <script>.
+ */
+
+const SAFE: unique symbol = Symbol('lockstep.safe-html');
+
+/** HTML that is safe to send. Only `html`, `raw` and `jsonScript` make one (the brand is a private symbol). */
+export interface SafeHtml {
+  readonly [SAFE]: true;
+  readonly html: string;
+  toString(): string;
+}
+
+/** Values allowed inside html``: null, undefined and false render nothing; arrays are joined. */
+export type HtmlValue = SafeHtml | string | number | boolean | null | undefined | readonly HtmlValue[];
+
+const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+
+/** Escapes text for element content and quoted attribute values. */
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
+}
+
+function make(markup: string): SafeHtml {
+  return Object.freeze({ [SAFE]: true as const, html: markup, toString: () => markup });
+}
+
+export function isSafeHtml(v: unknown): v is SafeHtml {
+  return typeof v === 'object' && v !== null && SAFE in v;
+}
+
+/** Marks trusted, program-generated markup as safe. Never pass user text. */
+export function raw(markup: string): SafeHtml {
+  return make(markup);
+}
+
+function render(v: HtmlValue, out: string[]): void {
+  if (v === null || v === undefined || v === false || v === true) return;
+  if (isSafeHtml(v)) out.push(v.html);
+  else if (Array.isArray(v)) for (const x of v as readonly HtmlValue[]) render(x, out);
+  else if (typeof v === 'number') out.push(Number.isFinite(v) ? String(v) : '');
+  else out.push(escapeHtml(String(v)));
+}
+
+/** Tagged template: `html\`<p>${userText}</p>\`` escapes userText. */
+export function html(strings: TemplateStringsArray, ...values: HtmlValue[]): SafeHtml {
+  const out: string[] = [strings[0]!];
+  for (let i = 0; i < values.length; i++) {
+    render(values[i], out);
+    out.push(strings[i + 1]!);
+  }
+  return make(out.join(''));
+}
+
+/** Joins fragments with an optional separator (itself escaped unless SafeHtml). */
+export function join(parts: readonly HtmlValue[], sep: HtmlValue = ''): SafeHtml {
+  const out: string[] = [];
+  parts.forEach((p, i) => {
+    if (i > 0) render(sep, out);
+    render(p, out);
+  });
+  return make(out.join(''));
+}
+
+/**
+ * Data for the browser as `<script type="application/json">`: never executed, and `<`, `>`, `&`, U+2028/9
+ * are written as \u escapes so that no value can close the element or open a comment.
+ */
+export function jsonScript(id: string, value: unknown): SafeHtml {
+  const json = JSON.stringify(value)
+    .replace(/</g, '\\u003c')
+    .replace(/>/g, '\\u003e')
+    .replace(/&/g, '\\u0026')
+    .replace(/\u2028/g, '\\u2028')
+    .replace(/\u2029/g, '\\u2029');
+  return make(`<script type="application/json" id="${escapeHtml(id)}">${json}</script>`);
+}

@@ -1,0 +1,34 @@
+/**
+ * What a workbench panel is. A panel renders inputs (into the design form) and/or results (beside the
+ * verdict); the list in views/panels/index.ts decides the order. See DEVELOPERS.md, "Workbench panels".
+ */
+import type { DesignFile, EvaluationResult, UnitSystem, Warning } from '../../core/index.ts';
+import type { FormValues } from '../../server/forms/design-form.ts';
+import type { InputContext } from '../fields.ts';
+import type { SafeHtml } from '../html.ts';
+
+export type { InputContext };
+
+export interface ResultContext {
+  /** The last valid design (SI / design-file units). */
+  design: DesignFile;
+  /** evaluate(design, { curves: true }). */
+  result: EvaluationResult;
+  units: UnitSystem;
+  warnings: Warning[];
+}
+
+export interface Panel {
+  /** Stable id; the panel's section gets id="panel-<id>". */
+  id: string;
+  title: string;
+  /** Inputs, inside the design form. Field names are design paths (server/forms/design-form.ts). */
+  inputs?: (ctx: InputContext) => SafeHtml;
+  /** Results, rendered only for a valid design. */
+  results?: (ctx: ResultContext) => SafeHtml;
+  /**
+   * Called when a structural field changed (a type switch, a list operation, the unit system): drop the fields
+   * that no longer apply and fill new ones with starting values, in the user's units.
+   */
+  normalise?: (values: FormValues, units: UnitSystem) => FormValues;
+}

@@ -1,0 +1,52 @@
+/** The verdict per load state: lock order on every surface, critical braking rate, lowest efficiency, warnings. */
+import type { LoadStateResult, LockResult } from '../../core/index.ts';
+import { fixed } from '../format.ts';
+import { html, type SafeHtml } from '../html.ts';
+import type { Panel, ResultContext } from './panel.ts';
+
+const AXLE_TEXT: Record<LockResult['first_axle'], string> = { front: 'front', rear: 'REAR', both: 'both', none: 'lift-off' };
+
+/** One sentence on the lock order of a load state. */
+export function lockSummary(s: LoadStateResult): { tone: 'ok' | 'warn'; text: string } {
+  const rear = s.lock.filter((l) => l.first_axle === 'rear');
+  const none = s.lock.filter((l) => l.first_axle === 'none');
+  const ks = (ls: LockResult[]) => ls.map((l) => l.adhesion).join(', ');
+  if (rear.length === 0 && none.length === 0) {
+    const both = s.lock.filter((l) => l.first_axle === 'both');
+    return { tone: 'ok', text: `The front axle locks first on every surface analysed${both.length ? ` (both together on k = ${ks(both)})` : ''}.` };
+  }
+  const parts: string[] = [];
+  if (rear.length) parts.push(`the rear axle locks first on k = ${ks(rear)}`);
+  if (none.length) parts.push(`the rear wheels lift off before any lock on k = ${ks(none)}`);
+  return { tone: 'warn', text: `Attention: ${parts.join('; ')}.` };
+}
+
+function stateVerdict(s: LoadStateResult, i: number): SafeHtml {
+  const sum = lockSummary(s);
+  const crit = s.critical_braking_rate;
+  return html`<article class="verdict ${sum.tone}" id="verdict-${i}" aria-labelledby="verdict-${i}-h">
+<h3 id="verdict-${i}-h"><span class="swatch s${i % 8}" aria-hidden="true"></span>${s.label} <small>(${s.kind}, id ${s.id})</small></h3>
+<p class="sum"><strong>${sum.tone === 'ok' ? 'Front first' : 'Check'}</strong> ${sum.text}</p>
+<dl class="facts">
+<div><dt>Critical braking rate</dt><dd>${crit === null ? 'none' : `z = ${fixed(crit, 3)}`}</dd></div>
+<div><dt>Lowest braking efficiency</dt><dd>${s.lowest_efficiency ? `${fixed(s.lowest_efficiency.efficiency * 100, 1)} % on k = ${s.lowest_efficiency.adhesion}` : '–'}</dd></div>
+<div><dt>Rear lift-off at</dt><dd>z = ${fixed(s.rear_lift_off_braking_rate, 2)}</dd></div>
+</dl>
+<div class="scroll"><table class="lock">
+<caption class="sr">First axle to lock per surface, ${s.label}</caption>
+<tr><th scope="row">Adhesion k</th>${s.lock.map((l) => html`<td>${l.adhesion}</td>`)}</tr>
+<tr><th scope="row">Locks first</th>${s.lock.map((l) => html`<td class="ax-${l.first_axle}">${AXLE_TEXT[l.first_axle]}</td>`)}</tr>
+<tr><th scope="row">at z</th>${s.lock.map((l) => html`<td>${fixed(l.braking_rate, 3)}</td>`)}</tr>
+<tr><th scope="row">Efficiency</th>${s.lock.map((l) => html`<td>${fixed(l.efficiency * 100, 0)} %</td>`)}</tr>
+</table></div>
+${s.critical_braking_rates.length > 1 ? html`<p class="hint">The installed curve crosses the ideal at z = ${s.critical_braking_rates.map((z) => fixed(z, 3)).join(', ')}.</p>` : ''}
+${s.warnings.length ? html`<ul class="warnings">${s.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
+</article>`;
+}
+
+export function verdicts(ctx: ResultContext): SafeHtml {
+  return html`<div class="verdicts">${ctx.result.load_states.map((s, i) => stateVerdict(s, i))}</div>
+${ctx.warnings.length ? html`<ul class="warnings design-warnings">${ctx.warnings.map((w) => html`<li><code>${w.code}</code> ${w.path ? html`<span class="path">${w.path}</span>: ` : ''}${w.message}</li>`)}</ul>` : ''}`;
+}
+
+export const verdictPanel: Panel = { id: 'verdict', title: 'Verdict', results: verdicts };

@@ -8,6 +8,7 @@ type Benchmark = { summary: string; load: () => Promise<{ run: () => void | Prom
 
 const benchmarks: Record<string, Benchmark> = {
   engine: { summary: 'evaluate() on the demo design against a closed-form floor', load: () => import('./engine.ts') },
+  http: { summary: 'recompute endpoint under autocannon (64 connections, 10 s) and page weight', load: () => import('./http.ts') },
 };
 
 async function main(argv: string[]): Promise<number> {

@@ -129,11 +129,12 @@ function regenLines(r: EvaluationResult): string[] {
       ),
     );
     const F = st.max_force_passing_checks_n;
+    const failing = st.failing_without_regen.length ? ` (${st.failing_without_regen.join(', ')} fails without regeneration already and is left out)` : '';
     out.push(
-      `${IND}Largest regenerative force with every curve check passing: ` +
-        (F === null
-          ? `the full ${fmt(g.max_force_n, 0)} N`
-          : `${fmt(F, 0)} N (${fmt((F * g.tyre_radius_m) / g.gear_ratio, 1)} N m at the motor)`),
+      st.max_force_basis === 'no_rule_to_keep'
+        ? `${IND}Every curve check fails without regeneration already: no regenerative force to find.`
+        : `${IND}Largest regenerative force keeping the passing curve checks passing${failing}: ` +
+            (F === null ? `the full ${fmt(g.max_force_n, 0)} N` : `${fmt(F, 0)} N (${fmt((F * g.tyre_radius_m) / g.gear_ratio, 1)} N m at the motor)`),
     );
   }
   const surface = g.flags.filter((f) => f.kind === 'surface_lock');

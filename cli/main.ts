@@ -6,6 +6,7 @@ import { CAUTION } from '../core/index.ts';
 import { demoCommand } from './commands/demo.ts';
 import { cgLiftCommand } from './commands/cg-lift.ts';
 import { evaluateCommand } from './commands/evaluate.ts';
+import { sizeCommand } from './commands/size.ts';
 import { packetCommand } from './commands/packet.ts';
 import { storeCommand } from './commands/store.ts';
 import { CliError } from './errors.ts';
@@ -22,6 +23,7 @@ const commands: Record<string, { run: Command; summary: string }> = {
   'cg-lift': { run: cgLiftCommand, summary: 'cg-lift FILE [--json]                                  CG height from axle-lift weighings, with uncertainty' },
   packet: { run: packetCommand, summary: 'packet FILE --out packet.pdf [--date D] | packet --revision ID --out packet.pdf   evidence packet PDF' },
   store: { run: storeCommand, summary: 'store list|save|show|history|diff|rename|duplicate|delete ...   saved designs (LOCKSTEP_DATA_DIR)' },
+  size: { run: sizeCommand, summary: 'size FILE [--json] [--samples N] [--seed S]                 split band, parts, valve, robustness (sizing assistant)' },
   demo: { run: demoCommand, summary: 'demo                                                   print the demo design file' },
 };
 

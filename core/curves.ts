@@ -3,7 +3,6 @@
  * exact event points (distribution breakpoints such as thresholds and the valve knee, the crossings
  * of the ideal, rear lift-off): f1, f2 and the installed and ideal axle forces divided by the weight.
  */
-import { frontAxleLoad, rearAxleLoad } from './axle-loads.ts';
 import { CURVE_STEP, PA_PER_BAR } from './constants.ts';
 import { lerpAt } from './distribution.ts';
 import { pedalForce } from './pedal-force.ts';
@@ -48,13 +47,15 @@ function cachedGrid(zMax: number): readonly number[] {
 
 /** Two ascending lists merged into one, exact repeats dropped. */
 function mergeAscending(a: readonly number[], b: readonly number[]): number[] {
-  const out: number[] = [];
+  const out: number[] = new Array(a.length + b.length); // final length set below (growing by push is slower)
   let i = 0;
   let k = 0;
+  let m = 0;
   while (i < a.length || k < b.length) {
     const v = k >= b.length || (i < a.length && a[i]! <= b[k]!) ? a[i++]! : b[k++]!;
-    if (out.length === 0 || out[out.length - 1] !== v) out.push(v);
+    if (m === 0 || out[m - 1] !== v) out[m++] = v;
   }
+  out.length = m;
   return out;
 }
 
@@ -68,52 +69,71 @@ export function curves(s: StateModel, crossingRates: number[], critical: number 
   events.sort((a, b) => a.braking_rate - b.braking_rate);
   const zs = mergeAscending(cachedGrid(zMax), events.map((e) => e.braking_rate));
   const n = zs.length;
-  const c: Curves = {
-    braking_rate: zs,
-    front_utilisation: new Array<number | null>(n),
-    rear_utilisation: new Array<number | null>(n),
-    front_force_per_weight: new Array<number>(n),
-    rear_force_per_weight: new Array<number>(n),
-    ideal_front_per_weight: new Array<number>(n),
-    ideal_rear_per_weight: new Array<number>(n),
-    front_pressure_bar: new Array<number>(n),
-    rear_pressure_bar: new Array<number>(n),
-    pedal_force_n: new Array<number>(n),
-    events,
-  };
-  const P = s.loads.P;
-  // The breakpoints are walked once along the ascending grid; the segment choice and the arithmetic
-  // are those of forcesAt (see forcesAlong), so every value equals forcesAt(s.dist, z).
+  // Plain local arrays of the final length, filled in one pass (the plotting series are the hot path).
+  const fu: (number | null)[] = new Array(n);
+  const ru: (number | null)[] = new Array(n);
+  const ff: number[] = new Array(n);
+  const rf: number[] = new Array(n);
+  const fi: number[] = new Array(n);
+  const ri: number[] = new Array(n);
+  const fp: number[] = new Array(n);
+  const rp: number[] = new Array(n);
+  const pf: number[] = new Array(n);
+  const loads = s.loads;
+  const P = loads.P;
+  const P1 = loads.P1;
+  const P2 = loads.P2;
+  const chi = loads.chi;
+  const pedal = s.pedal;
   const d = s.dist;
   const bz = d.z;
+  const t1 = d.t1;
+  const t2 = d.t2;
+  const pz = d.p;
+  const p2z = d.p2;
   const last = bz.length - 2;
+  // The breakpoints are walked once along the ascending grid; the segment choice and the arithmetic
+  // are those of forcesAt (see forcesAlong), so every value equals forcesAt(s.dist, z).
   let j = 0;
   for (let i = 0; i < n; i++) {
     const z = zs[i]!;
-    const n1 = frontAxleLoad(s.loads, z);
-    const n2 = rearAxleLoad(s.loads, z);
+    // N1, N2 exactly as frontAxleLoad / rearAxleLoad compute them (same operation order)
+    const n1 = P1 + z * chi * P;
+    const n2 = P2 - z * chi * P;
     let front = 0;
     let rear = 0;
-    let p = d.p ? 0 : NaN;
-    let p2 = d.p2 ? 0 : NaN;
+    let p = pz ? 0 : NaN;
+    let p2 = p2z ? 0 : NaN;
     if (z > 0) {
       while (j < last && bz[j + 1]! <= z) j++;
       const frac = (z - bz[j]!) / (bz[j + 1]! - bz[j]!);
-      front = lerpAt(d.t1, j, frac);
-      rear = lerpAt(d.t2, j, frac);
-      if (d.p) p = lerpAt(d.p, j, frac);
-      if (d.p2) p2 = lerpAt(d.p2, j, frac);
+      front = lerpAt(t1, j, frac);
+      rear = lerpAt(t2, j, frac);
+      if (pz) p = lerpAt(pz, j, frac);
+      if (p2z) p2 = lerpAt(p2z, j, frac);
     }
-    const up = n2 > 0 && z > 0;
-    c.front_utilisation[i] = n2 > 0 ? (z > 0 ? front / n1 : 0) : null;
-    c.rear_utilisation[i] = up ? rear / n2 : n2 > 0 ? 0 : null;
-    c.front_force_per_weight[i] = front / P;
-    c.rear_force_per_weight[i] = rear / P;
-    c.ideal_front_per_weight[i] = (z * n1) / P;
-    c.ideal_rear_per_weight[i] = (z * n2) / P;
-    c.front_pressure_bar[i] = p / PA_PER_BAR;
-    c.rear_pressure_bar[i] = p2 / PA_PER_BAR;
-    c.pedal_force_n[i] = pedalForce(s.pedal, p);
+    fu[i] = n2 > 0 ? (z > 0 ? front / n1 : 0) : null;
+    ru[i] = n2 > 0 ? (z > 0 ? rear / n2 : 0) : null;
+    ff[i] = front / P;
+    rf[i] = rear / P;
+    fi[i] = (z * n1) / P;
+    ri[i] = (z * n2) / P;
+    fp[i] = p / PA_PER_BAR;
+    rp[i] = p2 / PA_PER_BAR;
+    pf[i] = pedalForce(pedal, p);
   }
+  const c: Curves = {
+    braking_rate: zs,
+    front_utilisation: fu,
+    rear_utilisation: ru,
+    front_force_per_weight: ff,
+    rear_force_per_weight: rf,
+    ideal_front_per_weight: fi,
+    ideal_rear_per_weight: ri,
+    front_pressure_bar: fp,
+    rear_pressure_bar: rp,
+    pedal_force_n: pf,
+    events,
+  };
   return c;
 }

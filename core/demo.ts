@@ -49,7 +49,7 @@ export function demoDesign(): DesignFile {
       circuit_split: 'front_rear',
       rear_valve: {
         type: 'load_sensing',
-        ratio: 0.3,
+        ratio: 0.45,
         knee_bar_at_rear_axle_kg: [
           [1200, 20],
           [1900, 48],

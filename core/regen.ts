@@ -208,11 +208,14 @@ export interface RegenStateResult {
   /** The selected curve rules (lock order, efficiency) with zero regeneration and at each speed. */
   checks: RegenCurveCheck[];
   /**
-   * Largest regenerative force (N) with which every selected curve rule still passes, found by bisection
-   * up to the system's constant-torque force; null when the full force passes, 0 when a rule fails
-   * without regeneration already or no curve rule is selected for this load state.
+   * Largest regenerative force (N) with which every selected curve rule that passes without regeneration
+   * still passes, found by bisection up to the system's constant-torque force; null when the full force
+   * passes or when there is no such rule (see `max_force_basis`).
    */
   max_force_passing_checks_n: number | null;
+  /** Rules left out of that search because they fail without regeneration already. */
+  failing_without_regen: string[];
+  max_force_basis: 'full_force_passes' | 'bisection' | 'no_rule_to_keep';
 }
 
 export interface RegenFlag {
@@ -277,20 +280,24 @@ function curveChecks(rules: readonly CurveRule[], loads: AxleLoadModel, d: Distr
   });
 }
 
-function maxForcePassing(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup): number | null {
-  if (rules.length === 0) return 0;
+function maxForcePassing(
+  rules: readonly CurveRule[],
+  loads: AxleLoadModel,
+  friction: Distribution,
+  setup: RegenSetup,
+): { force: number | null; basis: RegenStateResult['max_force_basis'] } {
+  if (rules.length === 0) return { force: null, basis: 'no_rule_to_keep' };
   const ok = (R: number) =>
     rules.every((rule) => checkCurveRule(rule, loads, regenDistribution(friction, R, setup.frontShare, setup.blending)).passed);
-  if (!ok(0)) return 0;
-  if (ok(setup.maxForce)) return null;
+  if (ok(setup.maxForce)) return { force: null, basis: 'full_force_passes' };
   let lo = 0;
   let up = setup.maxForce;
-  for (let i = 0; i < 40 && up - lo > 1e-6 * setup.maxForce; i++) {
+  for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
     const mid = (lo + up) / 2;
     if (ok(mid)) lo = mid;
     else up = mid;
   }
-  return lo;
+  return { force: lo, basis: 'bisection' };
 }
 
 function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange): RegenLock {
@@ -322,13 +329,16 @@ export function maxAllowedRegenForce(
   if (ok(hi)) return null;
   let lo = 0;
   let up = hi;
-  for (let i = 0; i < 60 && up - lo > 1e-9 * hi; i++) {
+  for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
     const mid = (lo + up) / 2;
     if (ok(mid)) lo = mid;
     else up = mid;
   }
   return lo;
 }
+
+/** Bisections for the largest allowed regenerative force stop within this, N (far below what a controller resolves). */
+export const REGEN_FORCE_TOLERANCE_N = 0.5;
 
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);
 
@@ -411,13 +421,17 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
         share_of_capability: F === null ? null : F / setup.maxForce,
       };
     });
+    const keep = rules.filter((rl) => zeroPassed.get(rl.id));
+    const best = maxForcePassing(keep, m.loads, m.dist, setup);
     return {
       id: m.state.id,
       zero_regen: { lock: zero, utilisation: utilisationSeries(m.loads, m.dist) },
       at_speeds: atSpeeds,
       limits,
       checks,
-      max_force_passing_checks_n: maxForcePassing(rules, m.loads, m.dist, setup),
+      max_force_passing_checks_n: best.force,
+      failing_without_regen: rules.filter((rl) => !zeroPassed.get(rl.id)).map((rl) => rl.id),
+      max_force_basis: best.basis,
     };
   });
   const speeds: number[] = [];
@@ -444,6 +458,9 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
     load_states: states,
     flags,
     notes: [
+      ...(design.vehicle.abs
+        ? ['ABS is fitted: where ABS controls every axle the lock-order rules may not apply; the figures here are for ABS not intervening (failed or not yet active).']
+        : []),
       `Lock order judged against ${rule.source} [${rule.status}]: ${rule.note}.`,
       'Zero regeneration stands for a full battery, a cold battery or a fault; the regenerative force is the largest the motor may give at that speed.',
       'Driveline losses, the speed change during the stop and any ABS/EBD intervention are not modelled.',

@@ -19,6 +19,7 @@ import { messagePage, statusBlock } from '../views/pages/workbench.ts';
 import { AppError, appErrors, BODY_LIMIT } from './errors.ts';
 import { sendHtml } from './html-reply.ts';
 import { workbenchRoutes } from './routes/workbench.ts';
+import { cgLiftRoutes } from './routes/cg-lift.ts';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
 const STATIC_DIR = join(ROOT, 'static');
@@ -111,6 +112,7 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
   });
 
   app.register(async (scope) => workbenchRoutes(scope, assets));
+  app.register(async (scope) => cgLiftRoutes(scope));
 
   app.setNotFoundHandler((req, reply) => sendError(req, reply, appErrors.notFound(req.url.split('?')[0]!.slice(0, 200)), assets));
   app.setErrorHandler((err: FastifyError | AppError, req, reply) => {

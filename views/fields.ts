@@ -93,7 +93,7 @@ ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name,
 
 /** A button that changes the structure of a list ("add:path", "dup:path[i]", "remove:path[i]"). */
 export function listButton(op: string, text: string, title: string, disabled = false): SafeHtml {
-  return html`<button type="button" class="op" name="_op" value="${op}" title="${title}" hx-post="/workbench/update" hx-target="#status" hx-swap="outerHTML"${disabled ? html` disabled` : ''}>${text}</button>`;
+  return html`<button type="button" class="op" name="_op" value="${op}" title="${title}" hx-post="/workbench/update" hx-target="#status" hx-swap="outerHTML" hx-sync="closest form:replace"${disabled ? html` disabled` : ''}>${text}</button>`;
 }
 
 /** Names of the fields currently present under a list path, by index. */
@@ -105,4 +105,10 @@ export function listIndicesOf(values: FormValues, listPath: string): number[] {
     if (m) set.add(Number(m[1]));
   }
   return [...set].sort((a, b) => a - b);
+}
+
+/** A message slot for a whole list or block (e.g. "load_states"), kept up to date like a field's. */
+export function blockMessage(ctx: InputContext, path: string): SafeHtml {
+  ctx.rendered.add(path);
+  return fieldMessage(path, ctx.errors.get(path));
 }

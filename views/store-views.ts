@@ -20,9 +20,18 @@ ${list.map(
   (d) => html`<tr id="design-${d.id}"><td>${d.name}</td><td>${d.revision_count}</td><td><code title="${d.head_revision}">${short(d.head_revision)}</code></td><td>${d.updated_at}</td>
 <td><a href="/designs/${d.id}/history" hx-get="/designs/${d.id}/history" hx-target="#designs" hx-swap="outerHTML">history</a>
 · <a href="/api/designs/${d.id}">JSON</a>
-· <a href="/revisions/${d.head_revision}/packet.pdf">packet PDF</a></td></tr>`,
+· <a href="/revisions/${d.head_revision}/packet.pdf">packet PDF</a>
+<form class="inline" hx-post="/designs/${d.id}/rename" hx-target="#designs" hx-swap="outerHTML"><label class="sr" for="rename-${d.id}">New name</label><input id="rename-${d.id}" name="name" value="${d.name}" maxlength="200" required><button type="submit" class="secondary">rename</button></form>
+<button type="button" class="secondary" hx-post="/designs/${d.id}/duplicate" hx-target="#designs" hx-swap="outerHTML">duplicate</button>
+<form class="inline" hx-post="/designs/${d.id}/delete" hx-target="#designs" hx-swap="outerHTML" hx-confirm="Delete this design and its whole history? This cannot be undone."><input type="hidden" name="confirm" value="${d.id}"><button type="submit" class="danger">delete</button></form></td></tr>`,
 )}
-</tbody></table></section>`;
+</tbody></table>
+${list.length > 1 ? html`<form class="compare-pick" action="/compare" method="get" hx-get="/compare" hx-target="#compare-result">
+<label for="cmp-a">Before</label> <select id="cmp-a" name="a">${list.map((d, i) => html`<option value="${d.id}"${i === 1 ? raw(' selected') : ''}>${d.name}</option>`)}</select>
+<label for="cmp-b">After</label> <select id="cmp-b" name="b">${list.map((d, i) => html`<option value="${d.id}"${i === 0 ? raw(' selected') : ''}>${d.name}</option>`)}</select>
+<button type="submit">Compare</button></form>
+<div id="compare-result" aria-live="polite"></div>` : ''}
+</section>`;
 }
 
 /**
@@ -43,7 +52,7 @@ ${latestFirst.map(
 )}
 </tbody></table>
 <button type="submit">Show changes</button>
-<button type="submit" formaction="/compare" hx-get="/compare" hx-target="#diff-result">Compare before/after</button>
+<button type="submit" formaction="/compare" hx-get="/compare" hx-include="closest form" hx-target="#diff-result">Compare before/after</button>
 </form>
 <div id="diff-result" aria-live="polite"></div>
 ${openForms.map((f) => html`<form id="open-${f.seq}" hx-post="/workbench/update" hx-include="#units" hx-target="#status" hx-swap="outerHTML" hidden><input type="hidden" name="_upload" value="${f.json}"></form>`)}

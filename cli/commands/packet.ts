@@ -1,5 +1,5 @@
 /**
- * `lockstep packet FILE --out packet.pdf [--date ISO]` or `lockstep packet --revision ID --out packet.pdf`:
+ * `lockstep packet FILE --out packet.pdf [--date ISO] [--rules id,...]` (rules as for `lockstep evaluate`) or `lockstep packet --revision ID --out packet.pdf`:
  * writes the evidence packet PDF of a design file or of a saved revision (see docs/evidence-packet.md).
  */
 import { writeFileSync } from 'node:fs';
@@ -10,9 +10,10 @@ import { openStore } from '../../server/store/design-store.ts';
 import { CliError, cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
 import type { CommandOutput } from '../main.ts';
+import { parseRuleSelection } from './evaluate.ts';
 import { runStore } from './store.ts';
 
-const USAGE = 'usage: lockstep packet FILE --out packet.pdf [--date YYYY-MM-DD]  or  lockstep packet --revision ID --out packet.pdf';
+const USAGE = 'usage: lockstep packet FILE --out packet.pdf [--date YYYY-MM-DD] [--rules id,...]  or  lockstep packet --revision ID --out packet.pdf';
 
 export function parseDate(text: string | undefined): Date {
   if (text === undefined) return new Date();
@@ -24,13 +25,14 @@ export function parseDate(text: string | undefined): Date {
 export async function packetCommand(argv: string[], out: CommandOutput): Promise<number> {
   const { values, positionals } = parseArgs({
     args: argv,
-    options: { out: { type: 'string', short: 'o' }, date: { type: 'string' }, revision: { type: 'string' } },
+    options: { out: { type: 'string', short: 'o' }, date: { type: 'string' }, revision: { type: 'string' }, rules: { type: 'string' } },
     allowPositionals: true,
     strict: true,
   });
   if (!values.out) throw cliErrors.usage(`--out is required. ${USAGE}`);
   if ((values.revision === undefined) === (positionals.length !== 1) || positionals.length > 1) throw cliErrors.usage(USAGE);
   const date = parseDate(values.date);
+  const rules = values.rules === undefined ? undefined : parseRuleSelection(values.rules);
   let input: unknown;
   let label: string;
   if (values.revision !== undefined) {
@@ -43,7 +45,7 @@ export async function packetCommand(argv: string[], out: CommandOutput): Promise
   }
   const reading = readDesign(input);
   if (!reading.ok) throw cliErrors.invalid(label, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
-  const { pdf, revisionId } = await buildPacket(reading.design, { date, warnings: reading.warnings });
+  const { pdf, revisionId } = await buildPacket(reading.design, { date, warnings: reading.warnings, ...(rules ? { rules } : {}) });
   try {
     writeFileSync(values.out, pdf);
   } catch (e) {

@@ -95,7 +95,10 @@ export function checkDeceleration(design: DesignFile, s: StateModel, rule: Decel
   const margin = a - req.required_ms2;
   const passed = margin >= -DECELERATION_TOLERANCE;
   const notes = [`${a.toFixed(2)} m/s² reached at ${f.max_pedal_force_n} N, limited by ${LIMIT_WORDS[limitedBy]} (adhesion ${k})`];
-  if (forceReq === null) notes.push(`the required ${req.required_ms2.toFixed(2)} m/s² is not reachable before ${absWorking ? 'the adhesion limit' : 'a wheel locks'}`);
+  if (forceReq === null) {
+    const why = zReq > cap ? `before ${absWorking ? 'the adhesion limit' : 'a wheel locks'}` : 'with these brakes at any pedal force';
+    notes.push(`the required ${req.required_ms2.toFixed(2)} m/s² is not reachable ${why}`);
+  }
   else notes.push(`${forceReq.toFixed(0)} N needed for ${req.required_ms2.toFixed(2)} m/s²`);
   if (forceReq !== null && f.min_pedal_force_n !== undefined && forceReq < f.min_pedal_force_n) {
     notes.push(`that is below the ${f.min_pedal_force_n} N lower end of the test pedal-force range`);

@@ -48,6 +48,7 @@ export interface BoreSizing {
   /** Window of bores that meet both conditions, mm (null edges when none). */
   max_bore_mm: number | null;
   min_bore_mm: number | null;
+  /** Every catalogue bore, evaluated; `meets` marks the ones inside the window. */
   candidates: BoreCandidate[];
   /** Why no bore works, or what to know. */
   notes: string[];
@@ -131,8 +132,7 @@ export function masterCylinderBore(design: DesignFile, opts: BoreOptions = {}): 
         pressure_at_limit_bar: pl,
         meets: maxBore !== null && c.diameter_mm <= maxBore * (1 + 1e-12) && (minBore === null ? false : c.diameter_mm >= minBore),
       };
-    })
-    .filter((c) => c.meets || (maxBore !== null && Math.abs(c.bore_mm - maxBore) < 4));
+    });
   if (maxBore !== null && minBore !== null && maxBore < minBore) notes.push(`no bore meets both: the pedal-force target needs at most ${maxBore.toFixed(1)} mm, the ${pMaxBar} bar limit at least ${minBore.toFixed(1)} mm`);
   return {
     rule: rule.id,

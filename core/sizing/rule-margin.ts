@@ -79,25 +79,13 @@ export function geometryOf(m: AxleLoadModel): Geometry {
   return { P1: m.P1, P2: m.P2, cP: m.chi * m.P, zLift: m.zLift };
 }
 
-function formValue(f: MarginForm, s: Segment, g: Geometry, z: number): number {
-  let v = f.alpha + f.beta * z;
-  if (f.g1 !== 0) v += (f.g1 * (s.a1 + s.b1 * z)) / (g.P1 + g.cP * z);
-  if (f.g2 !== 0) v += (f.g2 * (s.a2 + s.b2 * z)) / (g.P2 - g.cP * z);
-  return v;
-}
-
-/** Candidate buffer (reused: the searches call this millions of times). */
-let cand = new Float64Array(64);
+/** Candidate buffer (reused: the searches call this millions of times; a piece has at most a few dozen). */
+const CAND_MAX = 256;
+const cand = new Float64Array(CAND_MAX);
 let nCand = 0;
 
 function push(z: number, lo: number, up: number): void {
-  if (!(z >= lo && z <= up)) return;
-  if (nCand === cand.length) {
-    const bigger = new Float64Array(cand.length * 2);
-    bigger.set(cand);
-    cand = bigger;
-  }
-  cand[nCand++] = z;
+  if (z >= lo && z <= up && nCand < CAND_MAX) cand[nCand++] = z;
 }
 
 /** Real roots of c0 + c1 z + c2 z² inside [lo, up]. */
@@ -200,10 +188,17 @@ function zeroPoints(f: MarginForm, s: Segment, g: Geometry, lo: number, up: numb
 
 function composite(p: CompiledPiece, s: Segment, g: Geometry, z: number): number {
   let m = Infinity;
-  for (const c of p.clauses) {
+  const cl = p.clauses;
+  const n1 = g.P1 + g.cP * z;
+  const n2 = g.P2 - g.cP * z;
+  const f1 = (s.a1 + s.b1 * z) / n1;
+  const f2 = (s.a2 + s.b2 * z) / n2;
+  for (let i = 0; i < cl.length; i++) {
+    const c = cl[i]!;
     let best = -Infinity;
-    for (const f of c) {
-      const v = formValue(f, s, g, z);
+    for (let j = 0; j < c.length; j++) {
+      const f = c[j]!;
+      const v = f.alpha + f.beta * z + f.g1 * f1 + f.g2 * f2;
       if (v > best) best = v;
     }
     if (best < m) m = best;
@@ -224,8 +219,10 @@ export function branchMargin(b: CompiledBranch, g: Geometry, segs: readonly Segm
       nCand = 0;
       push(lo, lo, up);
       push(up, lo, up);
-      for (const f of p.forms) stationaryPoints(f, s, g, lo, up);
-      for (const f of p.crossings) zeroPoints(f, s, g, lo, up);
+      const forms = p.forms;
+      for (let k = 0; k < forms.length; k++) stationaryPoints(forms[k]!, s, g, lo, up);
+      const cr = p.crossings;
+      for (let k = 0; k < cr.length; k++) zeroPoints(cr[k]!, s, g, lo, up);
       for (let i = 0; i < nCand; i++) {
         const v = composite(p, s, g, cand[i]!);
         if (v < worst) worst = v;

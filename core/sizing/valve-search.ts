@@ -14,7 +14,7 @@ import { PA_PER_BAR } from '../constants.ts';
 import type { DesignFile, RearValve } from '../design.ts';
 import { segments } from '../distribution.ts';
 import { installedDistribution } from '../installed-distribution.ts';
-import { type ValveLaw, valveLaw } from '../rear-valve.ts';
+import type { ValveLaw } from '../rear-valve.ts';
 import { stateModel } from '../state-model.ts';
 import { designMargins, type RuleMargin } from './design-margins.ts';
 import { type Geometry, geometryOf, ruleMargin } from './rule-margin.ts';
@@ -195,4 +195,4 @@ export function searchValve(design: DesignFile, rules: readonly SizingRule[]): V
   };
 }
 
-export { valveLaw };
+

@@ -140,9 +140,23 @@ function leafAt(schema: unknown, path: readonly PathKey[]): Def | null {
 export type FieldKind = 'number' | 'boolean' | 'text';
 
 /** Kind of a field from its key suffix and the design schema (designShape, including blocks added later). */
+const kindCache = new Map<string, FieldKind>();
+let designSchema: unknown = null;
+
 export function kindOfField(name: string): FieldKind {
+  const key = name.replace(/\[\d+\]/g, '[0]');
+  let k = kindCache.get(key);
+  if (k === undefined) {
+    k = findKind(key);
+    if (kindCache.size < 5000) kindCache.set(key, k);
+  }
+  return k;
+}
+
+function findKind(name: string): FieldKind {
   if (unitOfField(name)) return 'number';
-  const leaf = leafAt(z.object(designShape), parseFieldPath(name));
+  designSchema ??= z.object(designShape);
+  const leaf = leafAt(designSchema, parseFieldPath(name));
   if (!leaf) return 'text';
   if (leaf.type === 'number' || leaf.type === 'int' || leaf.type === 'float') return 'number';
   if (leaf.type === 'boolean') return 'boolean';
@@ -277,8 +291,20 @@ export function readForm(values: FormValues, units: UnitSystem): FormReading {
   const r = readDesign(input);
   if (r.ok && errors.length === 0) return r;
   const seen = new Set(errors.map((e) => e.path));
-  const schemaErrors = r.ok ? [] : r.errors.filter((e) => !seen.has(e.path));
+  const schemaErrors = r.ok ? [] : r.errors.filter((e) => !seen.has(e.path)).map((e) => withShownRange(e, units));
   return { ok: false, errors: [...errors, ...schemaErrors] };
+}
+
+/** Adds the allowed range in the unit the user sees when it differs from the design-file unit. */
+function withShownRange(e: FieldIssue, units: UnitSystem): FieldIssue {
+  const u = unitOfField(e.path);
+  if (!u) return e;
+  const shown = DISPLAY_UNITS[u.quantity][units];
+  if (shown === u.fileUnit) return e;
+  const m = /(?:from|above) (-?[\d.]+) (?:to|and at most) (-?[\d.]+)/.exec(e.message);
+  if (!m) return e;
+  const conv = (x: string) => String(Number(((Number(x) * TO_SI[u.fileUnit]) / TO_SI[shown]).toPrecision(4)));
+  return { path: e.path, message: `${e.message} (${conv(m[1]!)} to ${conv(m[2]!)} ${unitLabel(shown)})` };
 }
 
 /** Re-expresses every numeric field in another unit system; text that cannot be read is kept as typed. */

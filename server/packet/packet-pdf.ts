@@ -111,8 +111,8 @@ function table(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]
     });
     return h + 2 * pad;
   };
-  const drawRow = (cells: string[], font: 'R' | 'B', shade: boolean) => {
-    const h = Math.max(rowHeight(cells, font), font === 'R' && cells.every((c) => c === '') ? 16 : 0);
+  const drawRow = (cells: string[], font: 'R' | 'B', shade: boolean, knownHeight?: number) => {
+    const h = knownHeight ?? Math.max(rowHeight(cells, font), font === 'R' && cells.every((c) => c === '') ? 16 : 0);
     const y = doc.y;
     let x = PAGE.margin;
     if (shade) doc.save().rect(x, y, width(doc), h).fill('#eeeeee').restore();
@@ -135,7 +135,7 @@ function table(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]
       doc.addPage();
       header();
     }
-    drawRow(cells, 'R', false);
+    drawRow(cells, 'R', false, h);
   }
   doc.moveDown(0.6);
 }

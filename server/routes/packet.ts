@@ -7,7 +7,7 @@ import type { FastifyPluginAsync, FastifyReply } from 'fastify';
 import type { DesignFile, Warning } from '../../core/index.ts';
 import { packetHtml } from '../../views/store-views.ts';
 import { checksCsv, curvesCsv, designJson } from '../export/exports.ts';
-import { evaluateForPacket } from '../packet/build-packet.ts';
+import { evaluateForPacket, warningsOf } from '../packet/build-packet.ts';
 import { packetContent } from '../packet/packet-content.ts';
 import { renderPacketPdf } from '../packet/packet-pdf.ts';
 import { revisionId } from '../store/revision-id.ts';
@@ -64,7 +64,7 @@ export const packetRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, o
     // A saved revision (full id or unique prefix).
     app.get<{ Params: { rev: string } }>(`/revisions/:rev/${path}`, async (req, reply) => {
       const r = holder.get().revision(req.params.rev);
-      return send(reply, what, r.design, [], parseDate(req.query, now));
+      return send(reply, what, r.design, warningsOf(r.design), parseDate(req.query, now));
     });
     // The design on the page, unsaved: the workbench form, design_json or {design}.
     app.post(`/${path}`, async (req, reply) => {

@@ -1,13 +1,13 @@
 /**
  * Routes of the design store: JSON under /api (list, save, open, rename, duplicate, delete with confirmation,
  * history, diff, compare) and HTML fragments for the page (/designs, /designs/:id/history, /diff, /compare,
- * /designs/save). Register with `app.register(storeRoutes, { store? , dataDir? })`.
+ * /designs/save, /designs/:id/rename|duplicate|delete). Register with `app.register(storeRoutes, { store? , dataDir? })`.
  */
 import type { FastifyPluginAsync } from 'fastify';
 import type { EvaluationResult } from '../../core/index.ts';
 import { compareView, designsListView, diffView, historyView, saveResultView } from '../../views/store-views.ts';
 import { type CompareSide, compare } from '../packet/compare.ts';
-import { evaluateForPacket } from '../packet/build-packet.ts';
+import { evaluateForPacket, warningsOf } from '../packet/build-packet.ts';
 import type { DesignStore } from '../store/design-store.ts';
 import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
 
@@ -23,7 +23,7 @@ export function compareSide(store: DesignStore, ref: string, label: string): Com
     isDesign = false;
   }
   const rev = isDesign ? store.open(ref).revision : store.revision(ref);
-  const result: EvaluationResult = evaluateForPacket(rev.design);
+  const result: EvaluationResult = evaluateForPacket(rev.design, warningsOf(rev.design));
   return { label, revision: rev.id, design: rev.design, result };
 }
 
@@ -110,6 +110,16 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
     const designId = field(req.body, '_design_id') || undefined;
     const r = store().save(design, { designId, message: field(req.body, '_message') ?? null });
     return reply.type(HTML).send(saveResultView(r).html);
+  });
+
+  app.post<{ Params: { id: string } }>('/designs/:id/rename', async (req, reply) => {
+    store().rename(req.params.id, field(req.body, 'name') ?? '');
+    return reply.type(HTML).send(designsListView(store().list()).html);
+  });
+
+  app.post<{ Params: { id: string } }>('/designs/:id/duplicate', async (req, reply) => {
+    store().duplicate(req.params.id, field(req.body, 'name'));
+    return reply.type(HTML).send(designsListView(store().list()).html);
   });
 
   app.post<{ Params: { id: string } }>('/designs/:id/delete', async (req, reply) => {

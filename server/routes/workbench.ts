@@ -104,8 +104,27 @@ export function update(posted: FormValues): UpdateOutcome {
   const parts: SafeHtml[] = [];
   parts.push(statusBlock(reading.ok ? 'current' : 'invalid', { errors }));
   parts.push(structural ? inputsSection(values, units, errors, true) : fieldMessagesOob(values, units, errors));
-  parts.push(reading.ok ? resultsSection(view(reading.design, reading.warnings), units, true) : staleNote(errors.length, true));
+  parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : staleNote(errors.length, true));
   return { status: reading.ok ? 200 : 422, body: html`${parts}` };
+}
+
+/**
+ * Rendered results of the last few designs. A form often comes back unchanged (focus moves, a value is typed and
+ * typed back, a unit switch and back), and the engine is pure, so the same design gives the same fragment.
+ */
+const RESULTS_CACHE_SIZE = 32;
+const resultsCache = new Map<string, SafeHtml>();
+export function cachedResults(design: DesignFile, warnings: Warning[], units: UnitSystem): SafeHtml {
+  const key = `${units}|${JSON.stringify(design)}`;
+  let out = resultsCache.get(key);
+  if (out) {
+    resultsCache.delete(key); // most recently used goes last
+  } else {
+    out = resultsSection(view(design, warnings), units, true);
+    if (resultsCache.size >= RESULTS_CACHE_SIZE) resultsCache.delete(resultsCache.keys().next().value!);
+  }
+  resultsCache.set(key, out);
+  return out;
 }
 
 function slug(name: string): string {

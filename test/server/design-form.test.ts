@@ -126,3 +126,13 @@ describe('list operations', () => {
     expect(parseListOp('drop:load_states[0]')).toBeNull();
   });
 });
+
+describe('messages in the user units', () => {
+  it('a range error in US units also names the range in inches (0.5 m = 19.69 in, 10 m = 393.7 in)', () => {
+    const v = designToValues(demoDesign(), 'us');
+    v['vehicle.wheelbase_m'] = '8'; // 8 in = 0.2032 m, below 0.5 m
+    const r = readForm(v, 'us');
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.errors.find((e) => e.path === 'vehicle.wheelbase_m')!.message).toMatch(/\(19\.69 to 393\.7 in\)/);
+  });
+});

@@ -123,6 +123,21 @@ describe('HTML fragments', () => {
     expect(r.body).toContain(revisionId(d).slice(0, 12));
     expect(r.body).toMatch(/id="store-design-id" name="_design_id" value="[0-9a-f]{10}" hx-swap-oob="true"/);
   });
+  it('rename, duplicate and delete (with the confirmation field) from the list', async () => {
+    const s = await saveNew(demoDesign());
+    const id = s.design.id;
+    const form = { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' };
+    const renamed = await app.inject({ method: 'POST', url: `/designs/${id}/rename`, payload: `name=${encodeURIComponent(EVIL)}`, headers: form });
+    expect(renamed.statusCode).toBe(200);
+    expect(renamed.body).toContain('&lt;img src=x');
+    const dup = await app.inject({ method: 'POST', url: `/designs/${id}/duplicate`, payload: '', headers: form });
+    expect(dup.body.match(/<tr id="design-/g)).toHaveLength(2);
+    const refused = await app.inject({ method: 'POST', url: `/designs/${id}/delete`, payload: 'confirm=', headers: form });
+    expect(refused.statusCode).toBe(409);
+    expect(refused.body).toContain('STORE_ERR_DELETE_NOT_CONFIRMED');
+    const deleted = await app.inject({ method: 'POST', url: `/designs/${id}/delete`, payload: `confirm=${id}`, headers: form });
+    expect(deleted.body.match(/<tr id="design-/g)).toHaveLength(1);
+  });
   it('show a diff and a before/after comparison fragment', async () => {
     const a = demoDesign();
     const s1 = await saveNew(a);

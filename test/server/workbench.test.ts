@@ -315,3 +315,13 @@ describe('downloads', () => {
     expect(r.json().errors[0].path).toBe('hydraulics.pedal_ratio');
   });
 });
+
+describe('field message slots', () => {
+  it('every out-of-band message in an update has its slot in the page (no orphan swaps)', async () => {
+    const page = (await app.inject({ method: 'GET', url: '/' })).body;
+    const r = await update(form(demoValues()));
+    const oobIds = [...r.body.matchAll(/<p class="msg" id="([^"]+)"[^>]*hx-swap-oob="true"/g)].map((m) => m[1]!);
+    expect(oobIds.length).toBeGreaterThan(20);
+    for (const id of oobIds) expect(page, id).toContain(`id="${id}"`);
+  });
+});

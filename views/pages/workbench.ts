@@ -46,9 +46,19 @@ function renderInputs(values: FormValues, units: UnitSystem, errors: readonly Fi
 }
 
 /** Names of the fields the input panels render with a message slot, for these values. */
-export function fieldsWithMessages(values: FormValues, units: UnitSystem): Set<string> {
-  return renderInputs(values, units, []).ctx.rendered;
+export function fieldsWithMessages(values: FormValues, units: UnitSystem): ReadonlySet<string> {
+  // which fields exist depends on the names present and the type switches, not on the numbers: cache by those
+  const names = Object.keys(values).sort();
+  const key = `${units}|${names.join(',')}|${names.filter((n) => /(^|\.)type$/.test(n)).map((n) => values[n]).join(',')}`;
+  let set = slotCache.get(key);
+  if (!set) {
+    set = renderInputs(values, units, []).ctx.rendered;
+    if (slotCache.size >= 64) slotCache.delete(slotCache.keys().next().value!);
+    slotCache.set(key, set);
+  }
+  return set;
 }
+const slotCache = new Map<string, ReadonlySet<string>>();
 
 export function inputsSection(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[], oob = false): SafeHtml {
   const { ctx, sections } = renderInputs(values, units, errors);

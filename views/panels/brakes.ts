@@ -1,7 +1,7 @@
 /** Front and rear brakes: tyre radius, disc or drum, and that type's figures. */
 import type { UnitSystem } from '../../core/index.ts';
 import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
-import { type InputContext, fieldMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
+import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -40,7 +40,7 @@ function axleInputs(ctx: InputContext, axle: 'front' | 'rear'): SafeHtml {
 <fieldset class="pistons"><legend>Piston diameters, one caliper</legend>
 ${pistons.map((i) => html`<span class="piston">${numberField(ctx, `${p}.piston_diameters_mm[${i}]`, `${axle} piston ${i + 1} diameter`, { compact: true, width: 's' })}${listButton(`remove:${p}.piston_diameters_mm[${i}]`, '×', 'Remove this piston', pistons.length <= 1)}</span>`)}
 ${listButton(`add:${p}.piston_diameters_mm`, '+ piston', 'Add a piston', pistons.length >= 8)}
-${fieldMessage(`${p}.piston_diameters_mm`, ctx.errors.get(`${p}.piston_diameters_mm`))}</fieldset>
+${blockMessage(ctx, `${p}.piston_diameters_mm`)}</fieldset>
 ${numberField(ctx, `${p}.effective_radius_m`, 'Effective disc radius', { hint: 'disc centre to pad centroid' })}
 ${numberField(ctx, `${p}.pad_friction`, 'Pad friction coefficient', { unitText: '–' })}`;
   } else {
@@ -53,7 +53,7 @@ ${numberField(ctx, `axles.${axle}.tyre_radius_m`, 'Tyre rolling radius', { hint:
 ${selectField(ctx, `${p}.type`, 'Brake type', [['disc', 'disc'], ['drum', 'drum']], { structural: true })}
 ${fields}
 ${numberField(ctx, `${p}.threshold_pressure_bar`, 'Threshold pressure', { hint: 'line pressure before the brake makes torque' })}
-${fieldMessage(p, ctx.errors.get(p))}
+${blockMessage(ctx, p)}
 </fieldset>`;
 }
 

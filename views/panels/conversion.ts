@@ -3,6 +3,7 @@
  * against the ratings per load state, and where each CG height comes from (axle lift, build-up, entered).
  */
 import { buildUp, type BuildUpResult, type MassTotals } from '../../core/index.ts';
+import { axleLiftForm } from '../axle-lift-view.ts';
 import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
@@ -81,7 +82,8 @@ function cgSourcesBlock(ctx: ResultContext): SafeHtml {
     (s) => html`<tr><th scope="row">${s.label}</th><td>${SOURCE_WORDS[s.derived_from ?? 'entered'] ?? s.derived_from}</td><td>${fixed(len.from(s.cg_height_m), ld)}</td><td>${s.cg_height_uncertainty_m === null || s.cg_height_uncertainty_m === undefined ? '–' : fixed(len.from(s.cg_height_uncertainty_m), ld)}</td><td>${SOURCE_WORDS[s.cg_height_derived_from ?? 'entered'] ?? s.cg_height_derived_from}</td></tr>`,
   )}</tbody></table></div>
 <h3>Measuring the CG height by axle lift</h3>
-<p class="hint">Weigh the vehicle level, then raise one axle in steps (at least about 600 mm in all, suspension locked, brakes off) and read the scales under the axle that stays down; repeat with the other axle raised. Enter the readings in a <code>lockstep-axle-lift/1</code> file and run <code>npx lockstep cg-lift FILE</code>: it gives the CG height, its standard uncertainty and the budget of what limits it (docs/axle-lift.md). Apply the result to a load state with <code>cg_height_m</code>, <code>cg_height_uncertainty_m</code>, <code>cg_height_derived_from: "measured"</code> and <code>overrides: ["cg_height_m"]</code>.</p>`;
+<p class="hint">Weigh the vehicle level, then raise one axle in steps (at least about 600 mm in all, suspension locked, brakes off) and read the scales under the axle that stays down; repeat with the other axle raised. Enter the readings in a <code>lockstep-axle-lift/1</code> file and run <code>npx lockstep cg-lift FILE</code>: it gives the CG height, its standard uncertainty and the budget of what limits it (docs/axle-lift.md). Apply the result to a load state with <code>cg_height_m</code>, <code>cg_height_uncertainty_m</code>, <code>cg_height_derived_from: "measured"</code> and <code>overrides: ["cg_height_m"]</code>. The same computation runs here:</p>
+${axleLiftForm()}`;
 }
 
 export function conversionResults(ctx: ResultContext): SafeHtml {

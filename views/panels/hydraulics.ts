@@ -1,7 +1,7 @@
 /** Master cylinder, pedal, booster, circuit split and the rear pressure valve (with the load-sensing table). */
 import type { UnitSystem } from '../../core/index.ts';
 import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
-import { type InputContext, fieldMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
+import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -48,21 +48,21 @@ function normalise(values: FormValues, units: UnitSystem): FormValues {
 
 function valveInputs(ctx: InputContext): SafeHtml {
   const type = valveType(ctx.values);
-  const knee = numberField(ctx, `${V}.knee_bar`, 'Knee pressure', { hint: 'master-cylinder pressure where the valve starts to act' });
-  const ratio = numberField(ctx, `${V}.ratio`, 'Ratio above the knee', { unitText: '–', hint: 'rise of rear pressure per unit rise of master-cylinder pressure' });
-  if (type === 'limiting') return knee;
-  if (type === 'proportioning') return html`${knee}${ratio}`;
+  const knee = () => numberField(ctx, `${V}.knee_bar`, 'Knee pressure', { hint: 'master-cylinder pressure where the valve starts to act' });
+  const ratio = () => numberField(ctx, `${V}.ratio`, 'Ratio above the knee', { unitText: '–', hint: 'rise of rear pressure per unit rise of master-cylinder pressure' });
+  if (type === 'limiting') return knee();
+  if (type === 'proportioning') return html`${knee()}${ratio()}`;
   if (type !== 'load_sensing') return html``;
   const rows = listIndicesOf(ctx.values, `${V}.knee_bar_at_rear_axle_kg`);
   const t = `${V}.knee_bar_at_rear_axle_kg`;
-  return html`${ratio}
+  return html`${ratio()}
 <fieldset class="table-field"><legend>Knee pressure by static rear axle load</legend>
 <p class="hint">Read from the valve's setting chart; linear between rows, held flat outside. Rows ascending by load.</p>
 <table class="inputs-table"><thead><tr><th scope="col">Rear axle load</th><th scope="col">Knee pressure</th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>
 ${rows.map((i) => html`<tr><td>${numberField(ctx, `${t}[${i}][0]`, `Row ${i + 1}: rear axle load`, { compact: true, width: 's' })}</td><td>${numberField(ctx, `${t}[${i}][1]`, `Row ${i + 1}: knee pressure`, { compact: true, width: 's' })}</td><td>${listButton(`remove:${t}[${i}]`, '×', 'Remove this row', rows.length <= 1)}</td></tr>`)}
 </tbody></table>
 ${listButton(`add:${t}`, '+ row', 'Add a row (copy of the last)', rows.length >= 20)}
-${fieldMessage(t, ctx.errors.get(t))}</fieldset>`;
+${blockMessage(ctx, t)}</fieldset>`;
 }
 
 export const hydraulicsPanel: Panel = {
@@ -78,7 +78,7 @@ ${selectField(ctx, 'hydraulics.circuit_split', 'Circuit split', [['front_rear', 
 <fieldset class="valve"><legend>Rear pressure valve</legend>
 ${selectField(ctx, `${V}.type`, 'Valve type', VALVE_TYPES, { structural: true })}
 ${valveInputs(ctx)}
-${fieldMessage(V, ctx.errors.get(V))}
+${blockMessage(ctx, V)}
 </fieldset>`,
   normalise,
 };

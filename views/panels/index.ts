@@ -9,6 +9,7 @@ import { chartsPanel } from './charts.ts';
 import { conversionPanel } from './conversion.ts';
 import { hardwarePanel, pitfallsPanel } from './hardware.ts';
 import { hydraulicsPanel } from './hydraulics.ts';
+import { limitsInputsPanel, limitsPanel } from './limits.ts';
 import { loadStatesPanel } from './load-states.ts';
 import type { Panel } from './panel.ts';
 import { surfacesPanel } from './surfaces.ts';
@@ -25,10 +26,12 @@ export const panels: Panel[] = [
   hydraulicsPanel,
   surfacesPanel,
   verdictPanel,
+  chartsPanel,
   checksPanel,
   pitfallsPanel,
-  chartsPanel,
   tablePanel,
   conversionPanel,
   hardwarePanel,
+  limitsInputsPanel,
+  limitsPanel,
 ];

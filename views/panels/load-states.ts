@@ -1,5 +1,5 @@
 /** Load states: one row each (mass, front axle load, CG height); add, duplicate, remove. */
-import { fieldMessage, listButton, listIndicesOf, numberField, selectField, textField } from '../fields.ts';
+import { blockMessage, listButton, listIndicesOf, numberField, selectField, textField } from '../fields.ts';
 import { html } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -27,7 +27,7 @@ ${numberField(ctx, `${p}.cg_height_m`, 'CG height', { width: 's', hint: 'above t
     });
     return html`<p class="hint">Weigh each axle on a weighbridge for every load state you want checked. The regulation checks need one <em>unladen</em> and one <em>laden</em> state.</p>
 ${rows}
-${fieldMessage('load_states', ctx.errors.get('load_states'))}
+${blockMessage(ctx, 'load_states')}
 ${listButton('add:load_states', '+ Add load state', 'Add a load state (copy of the last one)', idx.length >= MAX_STATES)}`;
   },
 };

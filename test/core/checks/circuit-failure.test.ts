@@ -36,3 +36,22 @@ describe('failed circuits', () => {
     expect(brakingRateAtPressure(st.dist, 12e5)).toBeCloseTo((gainOf(5) * 10e5) / st.loads.P, 12);
   });
 });
+
+describe('a limiting valve with the front circuit failed', () => {
+  it('the rear force stops at the knee: z never exceeds G2·knee/P, and the needed pedal force is reported as unreachable', async () => {
+    const { runChecks } = await import('../../../core/checks/run-checks.ts');
+    const { stateModels } = await import('../../../core/evaluate.ts');
+    // 2 rear pistons, knee 10 bar: z_max = G2·10e5/P = gainOf(2)·1e6/(1000 g) ≈ 0.164 → 1.61 m/s² < 2.9 (M1 secondary)
+    const d = splitDesign({ frontPistons: 3, rearPistons: 2 });
+    d.hydraulics.rear_valve = { type: 'limiting', knee_bar: 10 };
+    const zMax = (gainOf(2) * 10e5) / (1000 * 9.80665);
+    const rear = failedCircuitDistribution(stateModel(d, d.load_states[0]!), 'rear_circuit_only');
+    expect(brakingRateAtPressure(rear, 200e5)).toBeCloseTo(zMax, 12);
+    expect(Number.isNaN(pressureAtBrakingRate(rear, zMax + 0.01))).toBe(true);
+    const c = runChecks(d, stateModels(d), { rules: ['performance/secondary'] }).find((x) => x.scenario === 'rear_circuit_only')!;
+    expect(c.passed).toBe(false);
+    expect(c.worst_margin!).toBeCloseTo(zMax * 9.80665 - 2.9, 9);
+    expect(c.details!.pedal_force_for_required_n).toBeNull();
+    expect(c.note).toContain('not reachable with these brakes at any pedal force');
+  });
+});

@@ -8,7 +8,8 @@ import { describe, expect, it } from 'vitest';
 import { checkCurveRule } from '../../../core/checks/curve-check.ts';
 import { euAppendix } from '../../../core/rules/eu-appendix.ts';
 import type { Category, CurveRule } from '../../../core/rules/rule-types.ts';
-import { CHI, crossBack, f1, f2, fixedSplit, loads, PSI, scanMin } from '../checks/fixed-split.ts';
+import type { Distribution } from '../../../core/distribution.ts';
+import { CHI, crossBack, f1, f2, fixedSplit, loads, P, PSI, scanMin } from '../checks/fixed-split.ts';
 
 function rule(id: string, category: Category): CurveRule {
   const r = euAppendix.rules.find((x) => x.id === id && x.categories.includes(category));
@@ -58,6 +59,23 @@ describe('eu-appendix/efficiency (71/320 Annex II Appendix point 3.1.1, coeffici
   });
 });
 
+describe('eu-appendix/efficiency, range end z = 0.61 where the line reaches k = 0.80', () => {
+  it('f2(0.61) exactly 0.80 passes with margin 0; a little more rear braking fails just below 0.61', () => {
+    // (1 − φ)·0.61/(0.5 − 0.2·0.61) = 0.8 → 1 − φ = 0.8·0.378/0.61; f2 rises faster than the line there
+    // (f2' = (1 − φ)·0.5/0.378² = 1.73 > 1/0.85), so f2 < L below 0.61
+    const phi = 1 - (0.8 * 0.378) / 0.61;
+    const edge = checkCurveRule(efficiency, loads, fixedSplit(phi));
+    expect(edge.passed).toBe(true);
+    expect(edge.worst_margin!).toBeCloseTo(0, 12);
+    expect(edge.worst_at_braking_rate!).toBeCloseTo(0.61, 12);
+    const over = checkCurveRule(efficiency, loads, fixedSplit(phi - 0.01));
+    expect(over.passed).toBe(false);
+    expect(over.failing_ranges[0]![1]).toBeCloseTo(0.61, 12);
+    // margin at 0.61: 0.8 − (1 − φ + 0.01)·0.61/0.378
+    expect(over.worst_margin!).toBeCloseTo(0.8 - ((1 - phi + 0.01) * 0.61) / 0.378, 10);
+  });
+});
+
 describe('eu-appendix/lock-order, M1 (point 3.1.1, M1 requirement, diagram 1A [V])', () => {
   it('passes φ = 0.7 (z* = 1.0 > 0.80) on the main branch, worst at z = 0.15', () => {
     // f1 − f2 has its maximum inside [0.15, 0.80] (slope + at 0.15, − at 0.80), so the minimum is an end:
@@ -95,6 +113,26 @@ describe('eu-appendix/lock-order, M1 (point 3.1.1, M1 requirement, diagram 1A [V
     // allowance branch: lowest at the piece end z = 0.30 where only f1 − f2 = 0.171/0.56 − 0.129/0.44 applies
     expect(v.worst_margin!).toBeCloseTo(0.171 / 0.56 - 0.129 / 0.44, 10);
     expect(v.worst_at_braking_rate!).toBeCloseTo(0.3, 10);
+  });
+
+  it('inversion edge: f2 peaking exactly at z + 0.05 (z = 0.35) passes; 0.001 P more rear force fails there', () => {
+    // pieces: φ = 0.56 up to 0.30 (T1 = 0.168 P, T2 = 0.132 P: f1 = f2 = 0.30 there), then to z = 0.35 with
+    // T2 = 0.172 P = 0.40·N2(0.35)/P·P (f2 = z + 0.05), then the rear force held (T1 = zP − T2)
+    const edge: Distribution = { P, z: [0, 0.3, 0.35, 1], t1: [0, 0.168 * P, 0.178 * P, (1 - 0.172) * P], t2: [0, 0.132 * P, 0.172 * P, 0.172 * P] };
+    const ok = checkCurveRule(lockM1, loads, edge);
+    expect(ok.passed).toBe(true);
+    expect(ok.branch).toBe('inversion-allowance');
+    expect(ok.worst_margin!).toBeCloseTo(0, 10);
+    // T2(0.35) = 0.173 P: f2 = 0.173/0.43 = 0.40233, 0.00233 above z + 0.05 at its peak z = 0.35
+    const over: Distribution = { P, z: [0, 0.3, 0.35, 1], t1: [0, 0.168 * P, 0.177 * P, (1 - 0.173) * P], t2: [0, 0.132 * P, 0.173 * P, 0.173 * P] };
+    const bad = checkCurveRule(lockM1, loads, over);
+    expect(bad.passed).toBe(false);
+    const allowance = bad.branches[1]!;
+    expect(allowance.worst_margin!).toBeCloseTo(0.4 - 0.173 / 0.43, 10);
+    expect(allowance.worst_at_braking_rate!).toBeCloseTo(0.35, 10);
+    expect(allowance.failing_ranges.length).toBe(1);
+    expect(allowance.failing_ranges[0]![0]).toBeLessThan(0.35);
+    expect(allowance.failing_ranges[0]![1]).toBeGreaterThan(0.35);
   });
 
   it('range end: a crossing exactly at z* = 0.30 fails the main branch from 0.30 and the allowance from 0.45', () => {

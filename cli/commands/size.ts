@@ -1,0 +1,126 @@
+/**
+ * `lockstep size FILE [--json] [--samples N] [--seed S] [--rules id,...] [--max-line-pressure-bar P]`:
+ * the sizing assistant (core/sizing). Exit 0 when the design passes as it is or a proposed change
+ * passes every selected rule in every load state, 1 when nothing proposed passes, 2 invalid input.
+ */
+import { parseArgs } from 'node:util';
+import { readDesign } from '../../core/index.ts';
+import { sizeDesign, type SizingResult } from '../../core/sizing/sizing.ts';
+import { cliErrors } from '../errors.ts';
+import { readJsonFile } from '../read-json.ts';
+import { fmt, textTable } from '../table.ts';
+import type { CommandOutput } from '../main.ts';
+import { parseRuleSelection } from './evaluate.ts';
+
+const USAGE = 'usage: lockstep size FILE [--json] [--samples N] [--seed S] [--rules id,...] [--max-line-pressure-bar P]';
+
+function integer(name: string, text: string, min: number, max: number): number {
+  const v = Number(text);
+  if (!/^\d+$/.test(text.trim()) || !Number.isSafeInteger(v) || v < min || v > max) {
+    throw cliErrors.usage(`${name}: "${text}" is not allowed; give a whole number from ${min} to ${max}`);
+  }
+  return v;
+}
+
+function positive(name: string, text: string, min: number, max: number, unit: string): number {
+  const v = Number(text);
+  if (text.trim() === '' || !Number.isFinite(v) || v < min || v > max) throw cliErrors.usage(`${name}: "${text}" is not allowed; give a number from ${min} to ${max} ${unit}`);
+  return v;
+}
+
+/** True when the design as it is, or some proposal, passes every selected rule in every load state. */
+export function sizingFindsPass(r: SizingResult): boolean {
+  return r.current.passes || r.options.some((o) => o.passes) || (r.valve?.passes ?? false) || (r.balance_bar?.with_recommended.passes ?? false);
+}
+
+const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(1)} %`);
+
+export function sizingText(r: SizingResult): string {
+  const out: string[] = [];
+  out.push(`Sizing assistant: ${r.design_name}`);
+  out.push(`Rules: ${r.rules.join(', ') || 'none'}`);
+  out.push('');
+  out.push('Fixed front/rear split (front share of the braking force, thresholds and valves left out):');
+  out.push(
+    textTable(
+      ['rule', 'load state', 'passing front share'],
+      r.per_rule.map((p) => [p.rule, p.load_state, p.intervals.length ? p.intervals.map(([a, b]) => `${pct(a)} – ${pct(b)}`).join(', ') : 'none']),
+    ),
+  );
+  out.push('');
+  if (r.band) out.push(`Band that passes everything: ${pct(r.band.min_front_share)} – ${pct(r.band.max_front_share)}${r.band_intervals.length > 1 ? ` (and ${r.band_intervals.length - 1} more interval(s))` : ''}`);
+  else out.push('Band that passes everything: EMPTY — no fixed split passes every rule in every load state.');
+  out.push(`Current design: front share ${pct(r.current_front_share)} at low pressure; smallest margin ${fmt(r.current.smallest_margin, 4)} (${r.current.passes ? 'passes' : 'FAILS'} with the full model)`);
+  out.push(`Recommended front share: ${pct(r.recommended_front_share)} (smallest margin of that fixed split ${fmt(r.recommended_split_margin, 4)})`);
+  out.push('');
+  if (r.options.length) {
+    out.push('Parts that move the split there (each checked with the full model):');
+    out.push(
+      textTable(
+        ['change', 'series', 'front share', 'smallest margin', 'verdict'],
+        r.options.map((o) => [o.change, o.series, pct(o.front_share), fmt(o.smallest_margin, 4), o.passes ? 'passes' : 'fails']),
+      ),
+    );
+    out.push('  Catalogue sizes: common practice, no source.');
+    out.push('');
+  }
+  const mc = r.master_cylinder;
+  if (mc) {
+    out.push(`Master cylinder (${mc.rule}): ${mc.required_deceleration_ms2.toFixed(2)} m/s² needs ${mc.pressure_for_required_bar.toFixed(1)} bar; pedal-force target ${mc.pedal_force_target_n.toFixed(0)} N (limit ${mc.pedal_force_limit_n} N); line pressure at the limit ≤ ${mc.max_line_pressure_bar} bar (common practice)`);
+    out.push(`  bore window: ${fmt(mc.min_bore_mm, 1)} – ${fmt(mc.max_bore_mm, 1)} mm (now ${mc.current_bore_mm} mm)`);
+    const ok = mc.candidates.filter((c) => c.meets);
+    if (ok.length) out.push(textTable(['bore', 'pedal force N', 'bar at limit'], ok.map((c) => [c.label, c.pedal_force_n.toFixed(0), c.pressure_at_limit_bar.toFixed(1)])));
+    for (const n of mc.notes) out.push(`  note: ${n}`);
+    out.push('');
+  }
+  if (r.valve) {
+    const v = r.valve.valve;
+    const desc =
+      v.type === 'limiting' ? `limiting, knee ${v.knee_bar} bar` : v.type === 'proportioning' ? `proportioning, knee ${v.knee_bar} bar, ratio ${v.ratio}` : v.type === 'load_sensing' ? `load-sensing, ratio ${v.ratio}, knee ${v.knee_bar_at_rear_axle_kg.map(([kg, b]) => `${b} bar at ${kg} kg`).join(', ')}` : 'none';
+    out.push(`Rear valve: ${desc}; smallest margin ${fmt(r.valve.smallest_margin, 4)} (${r.valve.passes ? 'passes' : 'fails'})`);
+    if (r.valve_search) out.push(`  proportioning map: ${r.valve_search.map.feasible_cells} of ${r.valve_search.map.knee_bar.length * r.valve_search.map.ratio.length} knee × ratio cells pass`);
+    out.push('');
+  }
+  if (r.balance_bar) {
+    const b = r.balance_bar;
+    out.push(`Balance bar: lock at ${pct(b.recommended_setting_front_share)} of the pushrod force to the front (now ${pct(b.current_setting_front_share)}); band of settings ${b.setting_range ? `${pct(b.setting_range.min)} – ${pct(b.setting_range.max)}` : 'none'}`);
+    out.push(`  ${b.warning}`);
+    out.push('');
+  }
+  const rb = r.robustness;
+  out.push(`Robustness (${rb.samples} samples, seed ${rb.seed}, ${rb.distribution}; tolerances: pad friction ±${rb.tolerances.pad_friction_front_pct} % front / ±${rb.tolerances.pad_friction_rear_pct} % rear, CG height ±${rb.tolerances.cg_height_m} m, front axle ±${rb.tolerances.front_axle_kg} kg, tyre radius ±${rb.tolerances.tyre_radius_pct} %):`);
+  out.push(`  probability that a rule fails in some load state: ${(100 * rb.probability_of_failure).toFixed(2)} % (± ${(100 * rb.probability_standard_error).toFixed(2)} %)`);
+  out.push(`  5th-percentile smallest margin: ${fmt(rb.p05_margin, 4)}; worst corner: ${fmt(rb.worst_corner.smallest_margin, 4)} (${rb.failing_corners} of ${rb.corners} corners fail)`);
+  out.push(`  matters most: ${rb.most_influential ?? '—'} (${rb.sensitivity.map((s) => `${s.input} ${s.effect.toFixed(4)}`).join(', ')})`);
+  out.push('');
+  for (const m of r.messages) out.push(`Note: ${m}`);
+  if (r.verify_note) out.push(`Rules marked partly verified or from memory: ${r.verify_note}.`);
+  out.push(`Caution: ${r.caution}`);
+  return out.join('\n');
+}
+
+export function sizeCommand(argv: string[], out: CommandOutput): number {
+  const { values, positionals } = parseArgs({
+    args: argv,
+    options: {
+      json: { type: 'boolean', default: false },
+      samples: { type: 'string' },
+      seed: { type: 'string' },
+      rules: { type: 'string' },
+      'max-line-pressure-bar': { type: 'string' },
+    },
+    allowPositionals: true,
+    strict: true,
+  });
+  if (positionals.length !== 1) throw cliErrors.usage(USAGE);
+  const file = positionals[0]!;
+  const samples = values.samples === undefined ? undefined : integer('--samples', values.samples, 1, 10_000_000);
+  const seed = values.seed === undefined ? undefined : integer('--seed', values.seed, 0, 4294967295);
+  const rules = values.rules === undefined ? undefined : parseRuleSelection(values.rules);
+  const pMax = values['max-line-pressure-bar'] === undefined ? undefined : positive('--max-line-pressure-bar', values['max-line-pressure-bar'], 10, 400, 'bar');
+  const reading = readDesign(readJsonFile(file));
+  if (!reading.ok) throw cliErrors.invalid(file, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
+  const result = sizeDesign(reading.design, { samples, seed, rules, max_line_pressure_bar: pMax });
+  out.stdout(values.json ? JSON.stringify(result, null, 2) : sizingText(result));
+  return sizingFindsPass(result) ? 0 : 1;
+}

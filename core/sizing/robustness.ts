@@ -1,0 +1,388 @@
+/**
+ * Robustness of a design to what nobody knows exactly: pad friction (front and rear), CG height and
+ * front axle load (per load state), dynamic tyre radius. For each perturbed vehicle the selected curve
+ * rules are evaluated exactly (core/sizing/rule-margin.ts on the installed distribution, thresholds,
+ * valve and balance bar included) and the smallest margin over every rule and load state kept.
+ *  - worst-case corners: every input at its ± limit. Pad friction and tyre radius are shared by all
+ *    load states, CG height and axle load belong to each state, so the worst corner is the lowest,
+ *    over the 8 shared corners, of the sum over states of each state's own 4 corners (exact, 8 + 4·S·8
+ *    evaluations instead of 2^(3+2S));
+ *  - Monte Carlo, seeded (core/sizing/prng.ts): each ± limit read as 2 standard deviations of a normal
+ *    distribution (a state's cg_height_uncertainty_m, a standard uncertainty, is used as is), or as the
+ *    bounds of a uniform one. Probability of failure = share of samples whose smallest margin is below
+ *    −MARGIN_TOLERANCE; 5th percentile of the smallest margin; histogram;
+ *  - sensitivity: each input alone to its − and + limit, ranked by the largest change of the smallest
+ *    margin.
+ * Pad friction scales the brake gain in proportion (disc: G ∝ μ; drum: the brake factor is taken to
+ * scale with the lining friction, a simplification: a leading shoe's factor rises faster than μ). A
+ * change of tyre radius scales both gains by R0/R. Mass is held; what the front axle gains the rear
+ * loses.
+ */
+import { G_N } from '../constants.ts';
+import { MARGIN_TOLERANCE } from '../checks/curve-check.ts';
+import type { DesignFile } from '../design.ts';
+import type { Segment } from '../distribution.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from '../rear-valve.ts';
+import { PA_PER_BAR } from '../constants.ts';
+import { stateModel } from '../state-model.ts';
+import { mulberry32 } from './prng.ts';
+import { ruleMargin } from './rule-margin.ts';
+import type { Geometry } from './rule-margin.ts';
+import { balanceBarPressureRatio, DEFAULT_TOLERANCES, type Tolerances } from './sizing-schema.ts';
+import type { SizingRule } from './sizing-rules.ts';
+
+export const DEFAULT_SAMPLES = 100000;
+export const DEFAULT_SEED = 1;
+
+export type InputName = 'pad_friction_front' | 'pad_friction_rear' | 'tyre_radius' | 'cg_height' | 'front_axle_load';
+
+export interface Perturbation {
+  /** Relative changes (0.1 = +10 %). */
+  mu1: number;
+  mu2: number;
+  radius: number;
+  /** Per load state: CG height change, m, and front axle load change, kg. */
+  dh: ArrayLike<number>;
+  dfront: ArrayLike<number>;
+}
+
+interface NominalState {
+  massKg: number;
+  frontKg: number;
+  h: number;
+  E: number;
+  G1: number;
+  G2: number;
+  threshold1: number;
+  threshold2: number;
+  /** ± limits of this state's CG height, m. */
+  hTol: number;
+  /** Valve law referred to the front line pressure (fixed valves; load-sensing is read per sample). */
+  knee: number;
+  ratio: number;
+}
+
+export interface RobustnessModel {
+  design: DesignFile;
+  rules: readonly SizingRule[];
+  states: NominalState[];
+  lambda: number;
+  tol: Required<Tolerances>;
+  /** Rules per state (indices into rules). */
+  rulesOf: number[][];
+}
+
+export function resolvedTolerances(design: DesignFile): Required<Tolerances> {
+  return { ...DEFAULT_TOLERANCES, ...(design.tolerances ?? {}) };
+}
+
+export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]): RobustnessModel {
+  const tol = resolvedTolerances(design);
+  const h = design.hydraulics;
+  const lambda = h.balance_bar ? balanceBarPressureRatio(h.master_cylinder_bore_mm, h.balance_bar) : 1;
+  const states = design.load_states.map((st) => {
+    const s = stateModel(design, st);
+    const u = st.cg_height_uncertainty_m;
+    return {
+      massKg: st.mass_kg,
+      frontKg: st.front_axle_kg,
+      h: st.cg_height_m,
+      E: design.vehicle.wheelbase_m,
+      G1: s.G1,
+      G2: s.G2,
+      threshold1: s.threshold1,
+      threshold2: s.threshold2,
+      hTol: u !== undefined && design.tolerances?.cg_height_m === undefined ? 2 * u : tol.cg_height_m,
+      knee: s.valve.knee,
+      ratio: s.valve.ratio,
+    };
+  });
+  const rulesOf = states.map((_, i) => rules.flatMap((r, j) => (r.states.includes(i) ? [j] : [])));
+  return { design, rules, states, lambda, tol, rulesOf };
+}
+
+// ---- the per-sample evaluation: no allocation in the loop ----
+
+const segBuf: Segment[] = Array.from({ length: 6 }, () => ({ zFrom: 0, zTo: 0, a1: 0, b1: 0, a2: 0, b2: 0 }));
+const segView: Segment[] = [];
+const ps = new Float64Array(6);
+const zs = new Float64Array(6);
+const t1s = new Float64Array(6);
+const t2s = new Float64Array(6);
+const geo: Geometry = { P1: 0, P2: 0, cP: 0, zLift: 0 };
+const law: ValveLaw = { knee: 0, ratio: 0 };
+
+let nPs = 0;
+function addPressure(p: number): void {
+  if (!(Number.isFinite(p) && p >= 0)) return;
+  for (let i = 0; i < nPs; i++) if (ps[i] === p) return;
+  let j = nPs++;
+  while (j > 0 && ps[j - 1]! > p) {
+    ps[j] = ps[j - 1]!;
+    j--;
+  }
+  ps[j] = p;
+}
+
+/** installedDistribution + segments (core/installed-distribution.ts, core/distribution.ts), into buffers. */
+function fillSegments(P: number, G1: number, G2: number, th1: number, th2: number, law: ValveLaw): Segment[] {
+  nPs = 0;
+  addPressure(0);
+  addPressure(th1);
+  addPressure(masterPressureForRear(law, th2));
+  addPressure(law.knee);
+  let n = nPs;
+  ps[n] = ps[n - 1]! + 1e6;
+  n++;
+  for (let i = 0; i < n; i++) {
+    const p = ps[i]!;
+    const p2 = rearPressure(law, p);
+    const a = G1 * Math.max(0, p - th1);
+    const b = G2 * Math.max(0, p2 - th2);
+    zs[i] = (a + b) / P;
+    t1s[i] = a;
+    t2s[i] = b;
+  }
+  segView.length = 0;
+  for (let j = 0; j < n - 1; j++) {
+    const z0 = zs[j]!;
+    const z1 = zs[j + 1]!;
+    if (!(z1 > z0)) continue;
+    const s = segBuf[segView.length]!;
+    const b1 = (t1s[j + 1]! - t1s[j]!) / (z1 - z0);
+    const b2 = (t2s[j + 1]! - t2s[j]!) / (z1 - z0);
+    s.zFrom = z0;
+    s.zTo = j === n - 2 ? Infinity : z1;
+    s.a1 = t1s[j]! - b1 * z0;
+    s.b1 = b1;
+    s.a2 = t2s[j]! - b2 * z0;
+    s.b2 = b2;
+    segView.push(s);
+  }
+  return segView;
+}
+
+/** Smallest margin of one load state under a perturbation. */
+export function stateMargin(m: RobustnessModel, i: number, mu1: number, mu2: number, radius: number, dh: number, dfront: number): number {
+  const s = m.states[i]!;
+  const rules = m.rulesOf[i]!;
+  if (rules.length === 0) return Infinity;
+  const P = s.massKg * G_N;
+  const frontKg = s.frontKg + dfront;
+  const h = s.h + dh;
+  const P1 = frontKg * G_N;
+  const P2 = P - P1;
+  if (!(P1 > 0 && P2 > 0 && h > 0)) return -Infinity;
+  const chi = h / s.E;
+  geo.P1 = P1;
+  geo.P2 = P2;
+  geo.cP = chi * P;
+  geo.zLift = P2 / (chi * P);
+  const rf = 1 / (1 + radius);
+  const v = m.design.hydraulics.rear_valve;
+  if (v.type === 'load_sensing') {
+    law.knee = (loadSensingKneeBar(v.knee_bar_at_rear_axle_kg, s.massKg - frontKg) * PA_PER_BAR) / m.lambda;
+    law.ratio = v.ratio;
+  } else {
+    law.knee = s.knee;
+    law.ratio = s.ratio;
+  }
+  const segs = fillSegments(P, s.G1 * (1 + mu1) * rf, s.G2 * (1 + mu2) * rf, s.threshold1, s.threshold2, law);
+  let worst = Infinity;
+  for (const j of rules) {
+    const v = ruleMargin(m.rules[j]!.compiled, geo, segs);
+    if (v < worst) worst = v;
+  }
+  return worst;
+}
+
+export function smallestMargin(m: RobustnessModel, p: Perturbation): number {
+  let worst = Infinity;
+  for (let i = 0; i < m.states.length; i++) {
+    const v = stateMargin(m, i, p.mu1, p.mu2, p.radius, p.dh[i] ?? 0, p.dfront[i] ?? 0);
+    if (v < worst) worst = v;
+  }
+  return worst;
+}
+
+export interface Corner {
+  smallest_margin: number | null;
+  pad_friction_front_pct: number;
+  pad_friction_rear_pct: number;
+  tyre_radius_pct: number;
+  /** Per load state. */
+  cg_height_change_m: number[];
+  front_axle_change_kg: number[];
+}
+
+export function worstCorner(m: RobustnessModel): { worst: Corner; failing_corners: number; corners: number } {
+  const t = m.tol;
+  const signs = [-1, 1];
+  let worst: Corner | null = null;
+  let failing = 0;
+  let corners = 0;
+  for (const a of signs) {
+    for (const b of signs) {
+      for (const c of signs) {
+        const mu1 = (a * t.pad_friction_front_pct) / 100;
+        const mu2 = (b * t.pad_friction_rear_pct) / 100;
+        const radius = (c * t.tyre_radius_pct) / 100;
+        let total = Infinity;
+        const dh: number[] = [];
+        const df: number[] = [];
+        let combos = 1;
+        let passingCombos = 1;
+        m.states.forEach((s, i) => {
+          let w = { v: Infinity, dh: 0, df: 0 };
+          let passing = 0;
+          for (const sh of signs) {
+            for (const sf of signs) {
+              const v = stateMargin(m, i, mu1, mu2, radius, sh * s.hTol, sf * t.front_axle_kg);
+              if (v >= -MARGIN_TOLERANCE) passing++;
+              if (v < w.v) w = { v, dh: sh * s.hTol, df: sf * t.front_axle_kg };
+            }
+          }
+          combos *= 4;
+          passingCombos *= passing;
+          dh.push(w.dh);
+          df.push(w.df);
+          total = Math.min(total, w.v);
+        });
+        corners += combos;
+        failing += combos - passingCombos;
+        if (!worst || total < (worst.smallest_margin ?? -Infinity)) {
+          worst = {
+            smallest_margin: Number.isFinite(total) ? total : null,
+            pad_friction_front_pct: a * t.pad_friction_front_pct,
+            pad_friction_rear_pct: b * t.pad_friction_rear_pct,
+            tyre_radius_pct: c * t.tyre_radius_pct,
+            cg_height_change_m: dh,
+            front_axle_change_kg: df,
+          };
+        }
+      }
+    }
+  }
+  return { worst: worst!, failing_corners: failing, corners };
+}
+
+export interface Histogram {
+  /** Bin edges, adhesion units (bins + 1 values); margins below the first edge (lift-off) fall in the first bin. */
+  edges: number[];
+  counts: number[];
+}
+
+export interface MonteCarlo {
+  samples: number;
+  seed: number;
+  distribution: 'normal' | 'uniform';
+  probability_of_failure: number;
+  /** Standard error of that estimate, √(p(1 − p)/n). */
+  probability_standard_error: number;
+  p05_margin: number | null;
+  median_margin: number | null;
+  histogram: Histogram;
+}
+
+/** The Monte Carlo smallest margins (exposed for tests and the benchmark). */
+export function sampleMargins(m: RobustnessModel, samples: number, seed: number): Float64Array {
+  const rng = mulberry32(seed);
+  const t = m.tol;
+  const normal = t.distribution === 'normal';
+  // a ± limit is 2 standard deviations (normal) or the bound (uniform)
+  const draw = normal ? (lim: number) => (lim === 0 ? 0 : 0.5 * lim * rng.normal()) : (lim: number) => (lim === 0 ? 0 : lim * (2 * rng.uniform() - 1));
+  const out = new Float64Array(samples);
+  const n = m.states.length;
+  for (let k = 0; k < samples; k++) {
+    const mu1 = draw(t.pad_friction_front_pct / 100);
+    const mu2 = draw(t.pad_friction_rear_pct / 100);
+    const radius = draw(t.tyre_radius_pct / 100);
+    let worst = Infinity;
+    for (let i = 0; i < n; i++) {
+      const dh = draw(m.states[i]!.hTol);
+      const df = draw(t.front_axle_kg);
+      const v = stateMargin(m, i, mu1, mu2, radius, dh, df);
+      if (v < worst) worst = v;
+    }
+    out[k] = worst;
+  }
+  return out;
+}
+
+function quantile(sorted: Float64Array, q: number): number {
+  const pos = q * (sorted.length - 1);
+  const i = Math.floor(pos);
+  const f = pos - i;
+  const a = sorted[i]!;
+  return i + 1 < sorted.length ? a + (sorted[i + 1]! - a) * f : a;
+}
+
+export function monteCarlo(m: RobustnessModel, samples = DEFAULT_SAMPLES, seed = DEFAULT_SEED, bins = 40): MonteCarlo {
+  const margins = sampleMargins(m, samples, seed);
+  let fails = 0;
+  for (let k = 0; k < samples; k++) if (!(margins[k]! >= -MARGIN_TOLERANCE)) fails++;
+  const sorted = Float64Array.from(margins).sort();
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of sorted) {
+    if (!Number.isFinite(v)) continue;
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  const edges: number[] = [];
+  const counts = new Array<number>(bins).fill(0);
+  if (lo <= hi) {
+    const width = hi > lo ? (hi - lo) / bins : 1e-6;
+    for (let b = 0; b <= bins; b++) edges.push(lo + b * width);
+    for (const v of sorted) {
+      const b = Number.isFinite(v) ? Math.min(bins - 1, Math.floor((v - lo) / width)) : v < 0 ? 0 : bins - 1;
+      counts[b]!++;
+    }
+  }
+  const p = fails / samples;
+  const fin = (x: number) => (Number.isFinite(x) ? x : null);
+  return {
+    samples,
+    seed,
+    distribution: m.tol.distribution,
+    probability_of_failure: p,
+    probability_standard_error: Math.sqrt((p * (1 - p)) / samples),
+    p05_margin: samples > 0 ? fin(quantile(sorted, 0.05)) : null,
+    median_margin: samples > 0 ? fin(quantile(sorted, 0.5)) : null,
+    histogram: { edges, counts },
+  };
+}
+
+export interface Sensitivity {
+  input: InputName;
+  /** The ± limit used, with its unit. */
+  tolerance: string;
+  margin_at_minus: number | null;
+  margin_at_plus: number | null;
+  /** Largest change of the smallest margin from the nominal one, adhesion units. */
+  effect: number;
+}
+
+export function sensitivity(m: RobustnessModel): { nominal: number | null; ranking: Sensitivity[] } {
+  const n = m.states.length;
+  const zero = new Array<number>(n).fill(0);
+  const t = m.tol;
+  const base: Perturbation = { mu1: 0, mu2: 0, radius: 0, dh: zero, dfront: zero };
+  const nominal = smallestMargin(m, base);
+  const cases: { input: InputName; tolerance: string; at: (sign: number) => Perturbation }[] = [
+    { input: 'pad_friction_front', tolerance: `±${t.pad_friction_front_pct} %`, at: (s) => ({ ...base, mu1: (s * t.pad_friction_front_pct) / 100 }) },
+    { input: 'pad_friction_rear', tolerance: `±${t.pad_friction_rear_pct} %`, at: (s) => ({ ...base, mu2: (s * t.pad_friction_rear_pct) / 100 }) },
+    { input: 'tyre_radius', tolerance: `±${t.tyre_radius_pct} %`, at: (s) => ({ ...base, radius: (s * t.tyre_radius_pct) / 100 }) },
+    { input: 'cg_height', tolerance: m.states.some((x) => x.hTol !== t.cg_height_m) ? `±${m.states.map((x) => x.hTol.toFixed(3)).join(' / ')} m` : `±${t.cg_height_m} m`, at: (s) => ({ ...base, dh: m.states.map((x) => s * x.hTol) }) },
+    { input: 'front_axle_load', tolerance: `±${t.front_axle_kg} kg`, at: (s) => ({ ...base, dfront: m.states.map(() => s * t.front_axle_kg) }) },
+  ];
+  const fin = (x: number) => (Number.isFinite(x) ? x : null);
+  const ranking = cases.map((c) => {
+    const lo = smallestMargin(m, c.at(-1));
+    const hi = smallestMargin(m, c.at(1));
+    const eff = Math.max(Math.abs(lo - nominal), Math.abs(hi - nominal));
+    return { input: c.input, tolerance: c.tolerance, margin_at_minus: fin(lo), margin_at_plus: fin(hi), effect: Number.isFinite(eff) ? eff : Number.MAX_VALUE };
+  });
+  ranking.sort((a, b) => b.effect - a.effect);
+  return { nominal: fin(nominal), ranking };
+}

@@ -7,7 +7,8 @@
 type Benchmark = { summary: string; load: () => Promise<{ run: () => void | Promise<void> }> };
 
 const benchmarks: Record<string, Benchmark> = {
-  engine: { summary: 'evaluate() on the demo design against a closed-form floor', load: () => import('./engine.ts') },
+  engine: { summary: 'engine evaluation of the demo design against a closed-form floor (issue 2)', load: () => import('./engine.ts') },
+  sizing: { summary: 'exact split band vs brute-force scan; Monte Carlo samples/s (issue 5)', load: () => import('./sizing.ts') },
   http: { summary: 'recompute endpoint under autocannon (64 connections, 10 s) and page weight', load: () => import('./http.ts') },
 };
 

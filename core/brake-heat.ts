@@ -245,7 +245,7 @@ export function heatAnalysis(design: DesignFile, models: readonly StateModel[]):
   if (h.base_vehicle_mass_kg !== undefined) {
     const mass = h.base_vehicle_mass_kg;
     const front = h.base_vehicle_front_axle_kg ?? mass * (st.front_axle_kg / st.mass_kg);
-    base = { mass, dist: baseDistribution(design, ref, mass, Math.min(front, mass * 0.999)) };
+    base = { mass, dist: baseDistribution(design, ref, mass, front) };
   }
   const rows = models.map((m) => stopHeat(m.state.id, m.state.mass_kg, m.dist, stopKmh / 3.6, 0, zStop, s));
   if (base) rows.push(stopHeat('base_vehicle', base.mass, base.dist, stopKmh / 3.6, 0, zStop, s));

@@ -112,8 +112,14 @@ export function curves(s: StateModel, crossingRates: number[], critical: number 
       if (pz) p = lerpAt(pz, j, frac);
       if (p2z) p2 = lerpAt(p2z, j, frac);
     }
-    fu[i] = n2 > 0 ? (z > 0 ? front / n1 : 0) : null;
-    ru[i] = n2 > 0 ? (z > 0 ? rear / n2 : 0) : null;
+    // Two stores rather than one `number | null` expression: the mixed value would be boxed first.
+    if (n2 > 0) {
+      fu[i] = z > 0 ? front / n1 : 0;
+      ru[i] = z > 0 ? rear / n2 : 0;
+    } else {
+      fu[i] = null;
+      ru[i] = null;
+    }
     ff[i] = front / P;
     rf[i] = rear / P;
     fi[i] = (z * n1) / P;

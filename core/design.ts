@@ -176,6 +176,19 @@ export const HeatOptions = z.strictObject({
   stop_speed_kmh: numAbove(0, 300).optional(),
   base_vehicle_mass_kg: num(50, 60000).optional(),
   base_vehicle_front_axle_kg: numAbove(0, 60000).optional(),
+}).superRefine((h, ctx) => {
+  const m = h.base_vehicle_mass_kg;
+  const f = h.base_vehicle_front_axle_kg;
+  if (f !== undefined && (m === undefined || f >= m)) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['base_vehicle_front_axle_kg'],
+      message:
+        m === undefined
+          ? `${f} needs base_vehicle_mass_kg beside it (the base vehicle's mass)`
+          : `${f} is not below base_vehicle_mass_kg ${m} (the front axle load must be between 0 and the mass)`,
+    });
+  }
 });
 
 export const TesterOptions = z.strictObject({

@@ -53,3 +53,4 @@ export * from './checks/performance-check.ts';
 export * from './checks/run-checks.ts';
 export * from './checks/limit-series.ts';
 export * from './checks/polynomial.ts';
+export * from './sizing/index.ts';

@@ -101,6 +101,10 @@ export function parseQuantity(text: string, quantity: Quantity, fallback: Unit):
   if (s === '') return { ok: false, reason: 'is empty' };
   const m = /^([-+]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(s);
   if (!m) return { ok: false, reason: `"${text.trim()}" is not a number` };
+  // "1,450" could be 1.45 (decimal comma) or 1450 (thousands separator): refuse rather than guess.
+  if (/^[-+]?\d{1,3},\d{3}$/.test(m[1]!)) {
+    return { ok: false, reason: `"${m[1]}" is ambiguous: write 1450 or 1.45 (no thousands separators)` };
+  }
   const num = Number(m[1]!.replace(',', '.'));
   if (!Number.isFinite(num)) return { ok: false, reason: `"${text.trim()}" is not a finite number` };
   const unitText = (m[2] ?? '').trim();

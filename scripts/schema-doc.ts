@@ -80,6 +80,7 @@ function docUnit(path: (string | number)[]): string {
   for (let i = path.length - 1; i >= 0; i--) {
     const k = path[i];
     if (typeof k !== 'string') continue;
+    if (/_(share|ratio)$/.test(k)) return ''; // a dimensionless ratio inside a block whose name ends in a unit suffix (balance_bar)
     if (PAIR_UNITS[k] && typeof path[path.length - 1] === 'number' && i === path.length - 3) return PAIR_UNITS[k]![path[path.length - 1] as number]!;
     const u = suffixUnit(k);
     if (u) return u;

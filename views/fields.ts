@@ -15,6 +15,8 @@ export interface InputContext {
   structural: Set<string>;
   /** Names of the fields rendered so far; any other value is carried along as a hidden input. */
   rendered: Set<string>;
+  /** Label of each rendered field, for the problem list in the status block (optional). */
+  labels?: Map<string, string>;
 }
 
 export function fieldId(name: string): string {
@@ -47,6 +49,7 @@ function labelFor(name: string, label: string, unit: string, o: FieldOptions): S
 /** A number field; accepts a typed unit ("58 in"). */
 export function numberField(ctx: InputContext, name: string, label: string, o: FieldOptions = {}): SafeHtml {
   ctx.rendered.add(name);
+  ctx.labels?.set(name, label);
   const unit = o.unitText ?? unitLabel(displayUnitOf(name, ctx.units));
   const errs = ctx.errors.get(name);
   return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
@@ -56,6 +59,7 @@ ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name,
 
 export function textField(ctx: InputContext, name: string, label: string, o: FieldOptions & { maxLength?: number; multiline?: boolean } = {}): SafeHtml {
   ctx.rendered.add(name);
+  ctx.labels?.set(name, label);
   const errs = ctx.errors.get(name);
   const v = ctx.values[name] ?? '';
   const attrs = html`id="${fieldId(name)}" name="${name}" maxlength="${o.maxLength ?? 200}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}"` : ''} class="w-${o.width ?? 'l'}"`;
@@ -73,6 +77,7 @@ export function selectField(
   o: FieldOptions & { structural?: boolean } = {},
 ): SafeHtml {
   ctx.rendered.add(name);
+  ctx.labels?.set(name, label);
   if (o.structural) ctx.structural.add(name);
   const v = ctx.values[name] ?? options[0]?.[0] ?? '';
   const errs = ctx.errors.get(name);
@@ -84,6 +89,7 @@ ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name,
 /** A yes/no value: hidden "false" then the checkbox "true" (the last value sent wins). */
 export function checkField(ctx: InputContext, name: string, label: string, o: FieldOptions = {}): SafeHtml {
   ctx.rendered.add(name);
+  ctx.labels?.set(name, label);
   const on = ['true', 'on', '1', 'yes'].includes((ctx.values[name] ?? '').toLowerCase());
   const errs = ctx.errors.get(name);
   return html`<div class="field check${errs?.length ? ' bad' : ''}"><input type="hidden" name="${name}" value="false">

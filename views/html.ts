@@ -23,12 +23,20 @@ export function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
 }
 
+class Safe {
+  readonly [SAFE] = true as const;
+  constructor(readonly html: string) {}
+  toString(): string {
+    return this.html;
+  }
+}
+
 function make(markup: string): SafeHtml {
-  return Object.freeze({ [SAFE]: true as const, html: markup, toString: () => markup });
+  return new Safe(markup);
 }
 
 export function isSafeHtml(v: unknown): v is SafeHtml {
-  return typeof v === 'object' && v !== null && SAFE in v;
+  return v instanceof Safe;
 }
 
 /** Marks trusted, program-generated markup as safe. Never pass user text. */

@@ -43,5 +43,7 @@ export function evaluateCommand(argv: string[], out: CommandOutput): number {
   if (!reading.ok) throw cliErrors.invalid(file, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
   const result = evaluate(reading.design, { at, curves: values.curves, rules, warnings: reading.warnings });
   out.stdout(values.json ? JSON.stringify(result, null, 2) : textReport(result));
-  return failedChecks(result.checks).length > 0 ? 1 : 0;
+  // A failed distribution device (71/320 Annex II Appendix point 6) is a check like the others.
+  const failedModes = result.failure_modes.filter((f) => !f.passed).length;
+  return failedChecks(result.checks).length > 0 || failedModes > 0 ? 1 : 0;
 }

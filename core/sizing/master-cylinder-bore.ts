@@ -81,7 +81,7 @@ export function masterCylinderBore(design: DesignFile, opts: BoreOptions = {}): 
     if (!design.vehicle.abs) {
       const lock = firstLock(s.loads, s.dist, k);
       if (lock.first_axle !== 'none' && lock.braking_rate < zReq) {
-        notes.push(`${st.id}: a wheel locks at braking rate ${lock.braking_rate.toFixed(3)} on the ${k} test surface, below the required ${zReq.toFixed(3)}; no bore changes that`);
+        notes.push(`${st.id}: a wheel locks at braking rate ${lock.braking_rate.toFixed(4)} on the ${k} test surface, below the required ${zReq.toFixed(4)}; no bore changes that`);
         continue;
       }
     }

@@ -15,7 +15,7 @@ export interface SizingRule {
   states: number[];
 }
 
-export function ruleSelection(design: DesignFile, override?: readonly string[]): string[] {
+export function sizingRuleSelection(design: DesignFile, override?: readonly string[]): string[] {
   return [...(override ?? design.rules ?? defaultRuleSelection(design.vehicle.category, design.vehicle.abs))];
 }
 
@@ -30,7 +30,7 @@ function withinMass(rule: CurveRule | DecelerationRule, design: DesignFile): boo
 
 export function sizingCurveRules(design: DesignFile, selection?: readonly string[]): SizingRule[] {
   const out: SizingRule[] = [];
-  for (const { rule, covers_category } of selectRules(ruleSelection(design, selection), design.vehicle.category)) {
+  for (const { rule, covers_category } of selectRules(sizingRuleSelection(design, selection), design.vehicle.category)) {
     if (rule.kind !== 'curve' || !covers_category || !withinMass(rule, design)) continue;
     const states = design.load_states.flatMap((s, i) => (coversState(rule, s) ? [i] : []));
     if (states.length > 0) out.push({ compiled: compileRule(rule), states });
@@ -40,7 +40,7 @@ export function sizingCurveRules(design: DesignFile, selection?: readonly string
 
 /** The service-braking rule of the selection for the design's category (the pedal-force target), or null. */
 export function serviceRule(design: DesignFile, selection?: readonly string[]): DecelerationRule | null {
-  for (const { rule, covers_category } of selectRules(ruleSelection(design, selection), design.vehicle.category)) {
+  for (const { rule, covers_category } of selectRules(sizingRuleSelection(design, selection), design.vehicle.category)) {
     if (rule.kind === 'service' && covers_category && withinMass(rule, design)) return rule;
   }
   return null;

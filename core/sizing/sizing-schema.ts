@@ -5,7 +5,7 @@
  * Defaults are stated here and marked "common practice, no source" unless a reference is named.
  */
 import { z } from 'zod';
-import { boundedNumber as num, boundedNumberAbove as numAbove } from '../bounded-number.ts';
+import { boundedNumber as num } from '../bounded-number.ts';
 
 /**
  * Tolerances as ± limits. In the Monte Carlo a ± limit is read as two standard deviations (about
@@ -52,7 +52,10 @@ export const DEFAULT_TOLERANCES = {
  */
 export const BalanceBar = z.strictObject({
   rear_bore_mm: num(10, 60),
-  setting_front_share: numAbove(0, 1).refine((s) => s < 1, { error: 'must be below 1 (the rear master cylinder gets 1 − setting_front_share of the pushrod force)' }),
+  setting_front_share: z
+    .number({ error: (iss) => (iss.input === undefined ? 'is required: a number above 0 and below 1' : 'is not a number; allowed: above 0 and below 1') })
+    .gt(0, { error: (iss) => `${String(iss.input)} is not above 0 and below 1 (the share of the pushrod force sent to the front master cylinder)` })
+    .lt(1, { error: (iss) => `${String(iss.input)} is not above 0 and below 1 (the rear master cylinder gets 1 − setting_front_share of the pushrod force)` }),
   /** True when the driver can reach the adjuster (cockpit knob or cable). Some inspection regimes refuse that. */
   driver_adjustable: z.boolean().optional(),
 });

@@ -8,6 +8,7 @@ import { CAUTION, VERIFY_NOTE } from '../caution.ts';
 import type { DesignFile } from '../design.ts';
 import { stateModel } from '../state-model.ts';
 import { frontShareAtLowPressure } from '../distribution.ts';
+import { applySizingChange } from './apply-change.ts';
 import { designMargins, type DesignMargins } from './design-margins.ts';
 import { type BoreSizing, masterCylinderBore } from './master-cylinder-bore.ts';
 import { monteCarlo, type MonteCarlo, robustnessModel, sensitivity, type Sensitivity, worstCorner, type Corner, DEFAULT_SAMPLES, DEFAULT_SEED } from './robustness.ts';
@@ -55,6 +56,8 @@ export interface SizingResult {
   valve_search: ValveSearch | null;
   balance_bar: BalanceBarSizing | null;
   robustness: {
+    /** Which design the robustness figures are for: the design as it is when it passes, else the recommended proposal. */
+    applies_to: string;
     samples: number;
     seed: number;
     distribution: 'normal' | 'uniform';
@@ -134,7 +137,24 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
   const valve_search = band.intervals.length === 0 && rules.length > 0 ? searchValve(design, rules) : null;
   const valveRec = valve_search?.recommended ?? null;
   if (valve_search && valveRec && !valveRec.passes) messages.push('No rear-valve setting searched passes every rule in every load state; the best one found is shown.');
-  const rm = robustnessModel(design, rules);
+  // robustness of the answer: the design as it is when it passes, else the proposal the assistant recommends
+  const recOption = options.find((o) => o.passes && o.series !== 'exact') ?? options.find((o) => o.passes) ?? null;
+  const barRec = balanceBarSizing(design, rules, band.intervals, phi);
+  let assessed = design;
+  let appliesTo = 'the design as it is';
+  if (!current.passes) {
+    if (recOption) {
+      assessed = applySizingChange(design, recOption.path, recOption.value);
+      appliesTo = `the design with the recommended change: ${recOption.change}`;
+    } else if (valveRec?.passes) {
+      assessed = applySizingChange(design, 'hydraulics.rear_valve', valveRec.valve);
+      appliesTo = `the design with the recommended rear valve (${valveRec.valve.type})`;
+    } else if (barRec?.with_recommended.passes) {
+      assessed = applySizingChange(design, barRec.path, barRec.recommended_setting_front_share);
+      appliesTo = 'the design with the balance bar locked at the recommended setting';
+    } else appliesTo = 'the design as it is (no proposal passes)';
+  }
+  const rm = robustnessModel(assessed, rules);
   const mc = monteCarlo(rm, opts.samples ?? DEFAULT_SAMPLES, opts.seed ?? DEFAULT_SEED);
   const corners = worstCorner(rm);
   const sens = sensitivity(rm);
@@ -143,8 +163,8 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
     format: 'lockstep-sizing/1',
     design_name: design.name,
     rules: selection,
-    band: holding ? { min_front_share: holding[0], max_front_share: holding[1] } : null,
-    band_intervals: band.intervals,
+    band: holding && rules.length > 0 ? { min_front_share: holding[0], max_front_share: holding[1] } : null,
+    band_intervals: rules.length > 0 ? band.intervals : [],
     per_rule: band.per_rule,
     current_front_share: shares[0]?.front_share ?? null,
     current_front_share_per_state: shares,
@@ -152,12 +172,13 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
     recommended_split_margin: rec && Number.isFinite(rec.margin) ? rec.margin : null,
     current,
     options,
-    recommended_option: options.find((o) => o.passes && o.series !== 'exact') ?? options.find((o) => o.passes) ?? null,
+    recommended_option: recOption,
     master_cylinder: masterCylinderBore(design, { rules: opts.rules, max_line_pressure_bar: opts.max_line_pressure_bar }),
     valve: valveRec ? { ...valveRec, kind: valveRec.valve.type } : null,
     valve_search,
-    balance_bar: balanceBarSizing(design, rules, band.intervals, phi),
+    balance_bar: barRec,
     robustness: {
+      applies_to: appliesTo,
       samples: mc.samples,
       seed: mc.seed,
       distribution: mc.distribution,

@@ -185,10 +185,39 @@ export function parseFieldNumber(name: string, text: string, units: UnitSystem):
   const shown = DISPLAY_UNITS[u.quantity][units];
   const r = parseQuantity(text, u.quantity, shown);
   if (!r.ok) return { ok: false, reason: `${r.reason}; enter a number in ${unitLabel(shown)}` };
+  if ((r.unit === null && shown === u.fileUnit) || r.unit === u.fileUnit) {
+    // no conversion: keep the number exactly as typed
+    const plain = Number(text.trim().replace(/\s*[^\d.,eE+-]+$/, '').replace(',', '.'));
+    if (Number.isFinite(plain)) return { ok: true, value: plain };
+  }
   return { ok: true, value: Number((r.value / TO_SI[u.fileUnit]).toPrecision(12)) };
 }
 
 // ---- design -> form ------------------------------------------------------------------------------
+
+/**
+ * Values shown rounded after a unit conversion, with the exact design-file number behind each text
+ * (hidden field `_exact`): a value nobody retyped goes back into the design unchanged, so switching
+ * units back and forth never alters a design.
+ */
+type ExactValues = Record<string, [shown: string, exact: number]>;
+
+function exactOf(values: FormValues): ExactValues {
+  if (!values._exact) return {};
+  try {
+    const e = JSON.parse(values._exact) as unknown;
+    return e && typeof e === 'object' && !Array.isArray(e) ? (e as ExactValues) : {};
+  } catch {
+    return {};
+  }
+}
+
+/** A numeric field's text -> design-file number, using the exact value when the text is the one shown. */
+function readNumber(name: string, text: string, units: UnitSystem, exact: ExactValues): ReturnType<typeof parseFieldNumber> {
+  const e = exact[name];
+  if (e && e[0] === text.trim() && typeof e[1] === 'number' && Number.isFinite(e[1])) return { ok: true, value: e[1] };
+  return parseFieldNumber(name, text, units);
+}
 
 /** Every leaf of a design as form values in the given unit system. */
 export function designToValues(design: unknown, units: UnitSystem): FormValues {
@@ -202,9 +231,12 @@ export function designToValues(design: unknown, units: UnitSystem): FormValues {
     } else {
       const name = fieldPath(path);
       out[name] = typeof v === 'number' ? formatFieldNumber(name, v, units) : String(v);
+      if (typeof v === 'number' && out[name] !== String(v)) exact[name] = [out[name]!, v];
     }
   };
+  const exact: ExactValues = {};
   walk(design, []);
+  if (Object.keys(exact).length > 0) out._exact = JSON.stringify(exact);
   const prov = (design as { provenance?: unknown }).provenance;
   if (prov !== undefined) out._provenance = JSON.stringify(prov);
   return out;
@@ -252,6 +284,7 @@ const TRUE_WORDS = new Set(['true', 'on', '1', 'yes']);
 export function valuesToInput(values: FormValues, units: UnitSystem): { input: Record<string, unknown>; errors: FieldIssue[] } {
   const input: Record<string, unknown> = {};
   const errors: FieldIssue[] = [];
+  const exact = exactOf(values);
   for (const [name, text] of Object.entries(values)) {
     if (name.startsWith('_')) continue;
     const path = parseFieldPath(name);
@@ -262,7 +295,7 @@ export function valuesToInput(values: FormValues, units: UnitSystem): { input: R
     else if (kind === 'number') {
       if (t === '') setAt(input, path, undefined);
       else {
-        const r = parseFieldNumber(name, t, units);
+        const r = readNumber(name, t, units, exact);
         if (r.ok) setAt(input, path, r.value);
         else {
           errors.push({ path: fieldPath(path), message: r.reason });
@@ -311,12 +344,18 @@ function withShownRange(e: FieldIssue, units: UnitSystem): FieldIssue {
 export function convertValues(values: FormValues, from: UnitSystem, to: UnitSystem): FormValues {
   if (from === to) return { ...values };
   const out: FormValues = {};
+  const before = exactOf(values);
+  const exact: ExactValues = {};
   for (const [name, text] of Object.entries(values)) {
+    if (name === '_exact') continue;
     out[name] = text;
     if (name.startsWith('_') || !unitOfField(name) || text.trim() === '') continue;
-    const r = parseFieldNumber(name, text, from);
-    if (r.ok) out[name] = formatFieldNumber(name, r.value, to);
+    const r = readNumber(name, text, from, before);
+    if (!r.ok) continue;
+    out[name] = formatFieldNumber(name, r.value, to);
+    if (out[name] !== String(r.value)) exact[name] = [out[name]!, r.value];
   }
+  if (Object.keys(exact).length > 0) out._exact = JSON.stringify(exact);
   return out;
 }
 
@@ -363,6 +402,14 @@ export function parseListOp(text: string): ListOp | null {
 
 /** Applies a list operation. A copied entry with an `id` gets a fresh one; its `label` is marked as a copy. */
 export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): FormValues {
+  // remembered exact numbers of the list's entries are dropped (their names change); the shown text is read
+  const exact = exactOf(values);
+  const kept = Object.fromEntries(Object.entries(exact).filter(([n]) => !n.startsWith(`${op.list}[`)));
+  if (Object.keys(kept).length !== Object.keys(exact).length) {
+    values = { ...values };
+    if (Object.keys(kept).length > 0) values._exact = JSON.stringify(kept);
+    else delete values._exact;
+  }
   const idx = listIndices(values, op.list);
   const entries = idx.map((i) => entryOf(values, op.list, i));
   const from = [...idx];

@@ -1,7 +1,7 @@
 /**
  * Renders the evidence packet (packet-content.ts) as a PDF with pdfkit; charts are SVG placed as vector
  * graphics with svg-to-pdfkit. User text is written as text, literally (no markup is interpreted).
- * Font: DejaVu Sans when found (full Unicode: →, ≤, ², μ, non-Latin names); otherwise the built-in
+ * Font: DejaVu Sans when found (full Unicode: →, ≤, ², μ, non-Latin names), else Liberation Sans; otherwise the built-in
  * Helvetica, which covers Latin-1 only — characters outside it are then printed as "?".
  * The path can be set with LOCKSTEP_PDF_FONT (regular) and LOCKSTEP_PDF_FONT_BOLD.
  */
@@ -28,6 +28,12 @@ export function findFonts(env: NodeJS.ProcessEnv = process.env): PacketFonts {
   for (const d of FONT_DIRS) {
     const r = `${d}/DejaVuSans.ttf`;
     const b = `${d}/DejaVuSans-Bold.ttf`;
+    if (existsSync(r)) return { regular: r, bold: existsSync(b) ? b : r, unicode: true };
+  }
+  // Liberation Sans (installed with Chromium on Debian) as the second choice
+  for (const d of ['/usr/share/fonts/truetype/liberation', '/usr/share/fonts/truetype/liberation2']) {
+    const r = `${d}/LiberationSans-Regular.ttf`;
+    const b = `${d}/LiberationSans-Bold.ttf`;
     if (existsSync(r)) return { regular: r, bold: existsSync(b) ? b : r, unicode: true };
   }
   return { regular: 'Helvetica', bold: 'Helvetica-Bold', unicode: false };

@@ -11,6 +11,7 @@ import { html, type SafeHtml } from '../../views/html.ts';
 import type { AssetUrls } from '../../views/layout.ts';
 import {
   fieldMessagesOob,
+  fieldsWithMessages,
   inputsSection,
   resultsSection,
   staleNote,
@@ -30,6 +31,7 @@ import {
   readForm,
 } from '../forms/design-form.ts';
 import { sendHtml } from '../html-reply.ts';
+import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
@@ -86,6 +88,9 @@ export function update(posted: FormValues): UpdateOutcome {
   } else if (posted._op === 'demo') {
     values = designToValues(demoDesign(), units);
     structural = true;
+  } else if (posted._op?.startsWith(SIZING_OP)) {
+    values = applySizingOp(values, posted._op, units); // the sizing panel's apply / undo (server/forms/sizing-apply.ts)
+    structural = true;
   } else if (posted._op) {
     const op = parseListOp(posted._op);
     if (!op) throw appErrors.unknownOperation(posted._op);
@@ -102,7 +107,7 @@ export function update(posted: FormValues): UpdateOutcome {
   const reading = readForm(values, units);
   const errors = reading.ok ? [] : reading.errors;
   const parts: SafeHtml[] = [];
-  parts.push(statusBlock(reading.ok ? 'current' : 'invalid', { errors }));
+  parts.push(statusBlock(reading.ok ? 'current' : 'invalid', { errors, labels: errors.length ? fieldsWithMessages(values, units).labels : undefined }));
   parts.push(structural ? inputsSection(values, units, errors, true) : fieldMessagesOob(values, units, errors));
   parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : staleNote(errors.length, true));
   return { status: reading.ok ? 200 : 422, body: html`${parts}` };

@@ -72,3 +72,22 @@ describe('lockstep evaluate: checks decide the exit status', () => {
     expect(r.stderr).toContain('CLI_ERR_USAGE');
   });
 });
+
+describe('lockstep evaluate: a failed distribution device also decides the exit status', () => {
+  it('exits 1 when a failed load-sensing valve leaves the vehicle short of the secondary figure, though the selected curve rule passes', async () => {
+    // 71/320/EEC Annex II Appendix point 6 (reference sheet 2.3, partial): with the device failed the vehicle must
+    // still stop as required for secondary braking (N1: 2.2 m/s², UN R13 Rev.4 Annex 4 para 2.2).
+    // The demo's hydraulics made weak on purpose (no booster, 38 mm bore): at 700 N the pedal gives
+    // p = 700 · 3.8 / (π/4 · 0.038²) ≈ 23.4 bar, far below what 2.2 m/s² needs, while the split (and so the
+    // lock order) is unchanged.
+    const { demoDesign } = await import('../../core/index.ts');
+    const d = demoDesign();
+    d.hydraulics = { ...d.hydraulics, booster_ratio: 1, master_cylinder_bore_mm: 38 };
+    delete d.hydraulics.booster_runout_bar;
+    const r = await run(['evaluate', file('weak.json', d), '--rules', 'fmvss135/lock-sequence', '--json']);
+    const res = JSON.parse(r.stdout);
+    expect(res.checks.every((c: any) => c.passed !== false)).toBe(true);
+    expect(res.failure_modes.some((f: any) => f.passed === false)).toBe(true);
+    expect(r.code).toBe(1);
+  });
+});

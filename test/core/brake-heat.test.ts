@@ -74,3 +74,14 @@ describe('Type-I-like repeated stops', () => {
     expect((peaks[0]! - 20) / series(1)).toBeGreaterThan(0.985);
   });
 });
+
+describe('heat block validation', () => {
+  it('a base-vehicle front axle load not below its mass is refused, naming the field', async () => {
+    const { demoDesign, readDesign } = await import('../../core/index.ts');
+    const d = demoDesign();
+    d.heat = { ...d.heat!, base_vehicle_mass_kg: 1500, base_vehicle_front_axle_kg: 1500 };
+    const r = readDesign(d);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.errors.map((e) => e.path)).toContain('heat.base_vehicle_front_axle_kg');
+  });
+});

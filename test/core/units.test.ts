@@ -78,4 +78,11 @@ describe('parseQuantity', () => {
     if (!r.ok) expect(r.reason).toContain('is not a number');
     expect(parseQuantity('1e400 kg', 'mass', 'kg').ok).toBe(false); // not finite
   });
+  it('a decimal comma is read, but "1,450" is refused as ambiguous (decimal comma or thousands separator)', () => {
+    // common practice, no source: European users type decimal commas, US users thousands separators
+    expect(parseQuantity('3,4 m', 'length', 'm')).toEqual({ ok: true, value: 3.4, unit: 'm' });
+    const r = parseQuantity('1,450 lb', 'mass', 'kg');
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.reason).toContain('ambiguous');
+  });
 });

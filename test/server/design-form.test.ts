@@ -136,3 +136,39 @@ describe('messages in the user units', () => {
     if (!r.ok) expect(r.errors.find((e) => e.path === 'vehicle.wheelbase_m')!.message).toMatch(/\(19\.69 to 393\.7 in\)/);
   });
 });
+
+describe('unit switching never alters a design', () => {
+  it('metric -> US -> metric gives back the exact numbers; an untouched US form reads back exactly', () => {
+    const d = demoDesign();
+    const us = convertValues(designToValues(d, 'metric'), 'metric', 'us');
+    expect(us['vehicle.wheelbase_m']).toBe('144.291'); // shown rounded: 3.665 / 0.0254 = 144.2913…
+    const a = readForm(us, 'us');
+    expect(a.ok && a.design).toEqual(d);
+    const back = convertValues(us, 'us', 'metric');
+    expect(back['vehicle.wheelbase_m']).toBe('3.665');
+    const b = readForm(back, 'metric');
+    expect(b.ok && b.design).toEqual(d);
+  });
+  it('a retyped value is read from the text, not the remembered number', () => {
+    const us = designToValues(demoDesign(), 'us');
+    us['vehicle.wheelbase_m'] = '144'; // 144 × 0.0254 = 3.6576 m
+    const r = readForm(us, 'us');
+    expect(r.ok && r.design.vehicle.wheelbase_m).toBeCloseTo(3.6576, 10);
+  });
+  it('every example design in docs/examples survives the form in both unit systems', async () => {
+    const { readdirSync, readFileSync } = await import('node:fs');
+    const { readDesign } = await import('../../core/index.ts');
+    const dir = new URL('../../docs/examples/', import.meta.url);
+    let checked = 0;
+    for (const f of readdirSync(dir).filter((n) => n.endsWith('.json'))) {
+      const r = readDesign(JSON.parse(readFileSync(new URL(f, dir), 'utf8')));
+      if (!r.ok) continue; // not a design file (other example formats live here too)
+      for (const u of ['metric', 'us'] as const) {
+        const back = readForm(designToValues(r.design, u), u);
+        expect(back.ok && back.design, `${f} ${u}`).toEqual(r.design);
+      }
+      checked++;
+    }
+    expect(checked).toBeGreaterThan(0);
+  });
+});

@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION, demoDesign, type DesignFile, type EvaluationResult, VERIFY_NOTE } from '../../core/index.ts';
 import { buildPacket, evaluateForPacket } from '../../server/packet/build-packet.ts';
 import { checkRows, fmtNum, packetContent } from '../../server/packet/packet-content.ts';
-import { findFonts, renderPacketPdf } from '../../server/packet/packet-pdf.ts';
+import { latin1, renderPacketPdf } from '../../server/packet/packet-pdf.ts';
 import { revisionId } from '../../server/store/revision-id.ts';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-packet-'));
@@ -86,9 +86,19 @@ describe('evidence packet PDF', () => {
     expect(flat(text)).toContain(CAUTION);
   });
   it('prints user text literally (no markup interpreted, nothing escaped)', () => {
-    if (!findFonts().unicode) return; // Latin-1 fallback font: covered by the latin1() mapping instead
     expect(flat(text)).toContain(USER_TEXT);
     expect(text).toContain('IA-2026/17');
+  });
+  it('prints Latin-1 user text literally and the caution with the built-in font too (no TrueType font installed)', async () => {
+    const d = design();
+    const content = packetContent({ design: d, result: evaluateForPacket(d), revisionId: revisionId(d), date: DATE });
+    const helv = await renderPacketPdf(content, DATE, { fonts: { regular: 'Helvetica', bold: 'Helvetica-Bold', unicode: false } });
+    const t = flat(pdfText(helv, 'helvetica.pdf'));
+    expect(t).toContain(USER_TEXT); // every character of USER_TEXT is in Latin-1
+    expect(t).toContain(CAUTION);
+    expect(t).toContain(revisionId(d));
+    // outside Latin-1: the arrow of the diff notation and "≤" are spelled out
+    expect(latin1('38 → 42 ≤ 50')).toBe('38 -> 42 <= 50');
   });
   it('has the sign-off block and a blank test sheet with the fields an inspector fills in', () => {
     const f = flat(text);

@@ -38,27 +38,28 @@ export function shapeOf(ctx: InputContext): string {
 }
 
 function renderInputs(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): { ctx: InputContext; sections: SafeHtml[] } {
-  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set() };
+  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map() };
   const sections = panels
     .filter((p) => p.inputs)
     .map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.inputs!(ctx)}</section>`);
   return { ctx, sections };
 }
 
-/** Names of the fields the input panels render with a message slot, for these values. */
-export function fieldsWithMessages(values: FormValues, units: UnitSystem): ReadonlySet<string> {
+/** The fields the input panels render with a message slot for these values, with their labels. */
+export function fieldsWithMessages(values: FormValues, units: UnitSystem): { names: ReadonlySet<string>; labels: ReadonlyMap<string, string> } {
   // which fields exist depends on the names present and the type switches, not on the numbers: cache by those
   const names = Object.keys(values).sort();
   const key = `${units}|${names.join(',')}|${names.filter((n) => /(^|\.)type$/.test(n)).map((n) => values[n]).join(',')}`;
-  let set = slotCache.get(key);
-  if (!set) {
-    set = renderInputs(values, units, []).ctx.rendered;
+  let entry = slotCache.get(key);
+  if (!entry) {
+    const { ctx } = renderInputs(values, units, []);
+    entry = { names: ctx.rendered, labels: ctx.labels ?? new Map() };
     if (slotCache.size >= 64) slotCache.delete(slotCache.keys().next().value!);
-    slotCache.set(key, set);
+    slotCache.set(key, entry);
   }
-  return set;
+  return entry;
 }
-const slotCache = new Map<string, ReadonlySet<string>>();
+const slotCache = new Map<string, { names: ReadonlySet<string>; labels: ReadonlyMap<string, string> }>();
 
 export function inputsSection(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[], oob = false): SafeHtml {
   const { ctx, sections } = renderInputs(values, units, errors);
@@ -72,6 +73,7 @@ export function inputsSection(values: FormValues, units: UnitSystem, errors: rea
 ${sections}
 ${carried.map(([n, v]) => html`<input type="hidden" name="${n}" value="${v}">`)}
 ${values._provenance !== undefined ? html`<input type="hidden" name="_provenance" value="${values._provenance}">` : ''}
+${values._exact !== undefined ? html`<input type="hidden" name="_exact" value="${values._exact}">` : ''}
 <input type="hidden" name="_shape" value="${shapeOf(ctx)}">
 </div>`;
 }
@@ -93,7 +95,10 @@ export function staleNote(problems: number | null, oob = false): SafeHtml {
 
 export type StatusKind = 'current' | 'invalid' | 'upload-error' | 'error';
 
-export function statusBlock(kind: StatusKind, opts: { errors?: readonly FieldIssue[]; message?: string; code?: string } = {}): SafeHtml {
+export function statusBlock(
+  kind: StatusKind,
+  opts: { errors?: readonly FieldIssue[]; message?: string; code?: string; labels?: ReadonlyMap<string, string> } = {},
+): SafeHtml {
   const errors = opts.errors ?? [];
   const text =
     kind === 'current'
@@ -103,7 +108,7 @@ export function statusBlock(kind: StatusKind, opts: { errors?: readonly FieldIss
         : (opts.message ?? 'Something went wrong.');
   return html`<div id="status" class="status ${kind}" role="status" aria-live="polite"${opts.code ? html` data-code="${opts.code}"` : ''}>
 <p>${kind === 'current' ? html`<span class="dot" aria-hidden="true"></span>` : html`<strong>${kind === 'invalid' ? 'Check input' : 'Not loaded'}</strong> `}${text}${opts.code ? html` <code>${opts.code}</code>` : ''}</p>
-${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${e.path ? html`<a href="#${fieldId(e.path)}">${e.path}</a>: ` : ''}${e.message}</li>`)}</ul>` : ''}
+${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${problemLabel(e.path, opts.labels)}${e.message}</li>`)}</ul>` : ''}
 </div>`;
 }
 
@@ -113,7 +118,7 @@ ${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${e.pat
  */
 export function fieldMessagesOob(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): SafeHtml {
   const m = errorMap(errors);
-  return html`${[...fieldsWithMessages(values, units)].map((n) => fieldMessage(n, m.get(n), true))}`;
+  return html`${[...fieldsWithMessages(values, units).names].map((n) => fieldMessage(n, m.get(n), true))}`;
 }
 
 const INTRO = html`<details class="intro" open><summary>What you are looking at</summary>
@@ -135,6 +140,7 @@ export function workbenchPage(
   const body = html`<header class="top">
 <div class="brand"><span class="logo" aria-hidden="true"></span><h1>Lockstep <span>brake proportioning workbench</span></h1></div>
 <nav class="file" aria-label="Design file">
+<a class="jump button" href="#results-col">Jump to results</a>
 <button type="button" class="download" data-download="/workbench/design.json" data-filename="lockstep-design.json">Download design</button>
 <label class="upload button">Upload design<input type="file" id="upload" accept="application/json,.json" class="sr-file"></label>
 <button type="button" name="_op" value="demo" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" class="secondary" data-reset-draft="1">Start again from the demo</button>
@@ -144,7 +150,7 @@ export function workbenchPage(
 <form id="design-form" class="inputs-col" hx-post="/workbench/update" hx-trigger="input delay:400ms, submit" hx-target="#status" hx-swap="outerHTML" hx-sync="this:replace" aria-label="Design" autocomplete="off" novalidate>
 ${inputsSection(values, units, errors)}
 </form>
-<div class="results-col">
+<div class="results-col" id="results-col">
 ${INTRO}
 <aside class="caution" role="note"><strong>CAUTION</strong> ${CAUTION}</aside>
 ${valid ? statusBlock(errors.length ? 'invalid' : 'current', { errors }) : statusBlock('invalid', { errors })}

@@ -11,6 +11,7 @@ import { hardwarePanel, pitfallsPanel } from './hardware.ts';
 import { hydraulicsPanel } from './hydraulics.ts';
 import { limitsInputsPanel, limitsPanel } from './limits.ts';
 import { loadStatesPanel } from './load-states.ts';
+import { sizingInputsPanel, sizingPanel } from './sizing.ts';
 import type { Panel } from './panel.ts';
 import { surfacesPanel } from './surfaces.ts';
 import { tablePanel } from './table.ts';
@@ -34,4 +35,6 @@ export const panels: Panel[] = [
   hardwarePanel,
   limitsInputsPanel,
   limitsPanel,
+  sizingInputsPanel,
+  sizingPanel,
 ];

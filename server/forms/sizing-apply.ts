@@ -1,0 +1,45 @@
+/**
+ * The sizing panel's "apply" and "undo" (views/panels/sizing.ts). A button posts the whole design form with
+ * `_op = "size:apply:<design path>=<JSON value>"`; the path is one a sizing proposal changes
+ * (core/sizing/apply-change.ts). The form is read as a design, the value written, and the form rebuilt from
+ * the new design in the user's units. The value it replaced is kept in the page control `_sizing_undo`
+ * ("<path>=<JSON>"), which the panel offers as "Undo" (an apply of the old value).
+ */
+import { applySizingChange, isSizingPath, type UnitSystem } from '../../core/index.ts';
+import { appErrors } from '../errors.ts';
+import { designToValues, type FormValues, readForm } from './design-form.ts';
+
+export const SIZING_OP = 'size:apply:';
+export const SIZING_UNDO_FIELD = '_sizing_undo';
+
+export function sizingOp(path: string, value: unknown): string {
+  return `${SIZING_OP}${path}=${JSON.stringify(value)}`;
+}
+
+function valueAt(design: unknown, path: string): unknown {
+  let node: unknown = design;
+  for (const k of path.split('.')) node = node !== null && typeof node === 'object' ? (node as Record<string, unknown>)[k] : undefined;
+  return node;
+}
+
+/** New form values with the proposal applied; unchanged values when the form is not a valid design. */
+export function applySizingOp(values: FormValues, op: string, units: UnitSystem): FormValues {
+  const body = op.slice(SIZING_OP.length);
+  const eq = body.indexOf('=');
+  const path = eq > 0 ? body.slice(0, eq) : '';
+  if (!isSizingPath(path)) throw appErrors.unknownOperation(op);
+  let value: unknown;
+  try {
+    value = JSON.parse(body.slice(eq + 1));
+  } catch {
+    throw appErrors.unknownOperation(op);
+  }
+  const reading = readForm(values, units);
+  if (!reading.ok) return values;
+  const old = valueAt(reading.design, path);
+  const next = designToValues(applySizingChange(reading.design, path, value), units);
+  // page controls other than the undo slot (names starting with "_") travel along unchanged
+  for (const [k, v] of Object.entries(values)) if (k.startsWith('_') && k !== SIZING_UNDO_FIELD) next[k] = v;
+  if (old !== undefined) next[SIZING_UNDO_FIELD] = `${path}=${JSON.stringify(old)}`;
+  return next;
+}

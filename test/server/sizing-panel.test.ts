@@ -1,0 +1,58 @@
+/**
+ * The sizing panel on the workbench (views/panels/sizing.ts) and its apply / undo operation
+ * (server/forms/sizing-apply.ts): applying the recommended part writes it into the form, the design then
+ * passes the curve rules in every load state, and "Undo" restores the replaced value.
+ * Failing design (test data): the demo van with a 66 mm rear piston and no valve fails lock order.
+ */
+import { describe, expect, it } from 'vitest';
+import { demoDesign, type DesignFile, sizeDesign } from '../../core/index.ts';
+import { designToValues, readForm } from '../../server/forms/design-form.ts';
+import { applySizingOp, SIZING_UNDO_FIELD, sizingOp } from '../../server/forms/sizing-apply.ts';
+import { update } from '../../server/routes/workbench.ts';
+
+function failing(): DesignFile {
+  const d = demoDesign();
+  d.hydraulics.rear_valve = { type: 'none' };
+  d.axles.rear.brake = { ...d.axles.rear.brake, piston_diameters_mm: [66] } as DesignFile['axles']['rear']['brake'];
+  return d;
+}
+
+describe('sizing panel', () => {
+  it('shows the band, the options with Apply buttons and the robustness histogram', () => {
+    const out = update(designToValues(failing(), 'metric'));
+    const body = String(out.body);
+    expect(body).toContain('id="panel-sizing"');
+    expect(body).toContain('chart-sizing-band-data');
+    expect(body).toContain('chart-sizing-histogram-data');
+    expect(body).toMatch(/name="_op" value="size:apply:axles\.(front|rear)\.brake\.piston_diameters_mm=/);
+  });
+
+  it('Apply writes the recommended part; the design then passes; Undo restores the old value', () => {
+    const d = failing();
+    const r = sizeDesign(d, { samples: 200 });
+    const opt = r.recommended_option!;
+    const before = designToValues(d, 'metric');
+    const applied = applySizingOp(before, sizingOp(opt.path, opt.value), 'metric');
+    const after = readForm(applied, 'metric');
+    expect(after.ok).toBe(true);
+    if (!after.ok) return;
+    expect(sizeDesign(after.design, { samples: 200 }).current.passes).toBe(true);
+    const old = (d.axles[opt.axle].brake as { piston_diameters_mm: number[] }).piston_diameters_mm;
+    expect(applied[SIZING_UNDO_FIELD]).toBe(`${opt.path}=${JSON.stringify(old)}`);
+    // the page round trip: the answer carries the new value, the undo slot and the Undo button
+    const out = update({ ...before, _op: sizingOp(opt.path, opt.value) });
+    expect(out.status).toBe(200);
+    const body = String(out.body);
+    expect(body).toContain(`name="${SIZING_UNDO_FIELD}"`);
+    expect(body).toMatch(/Undo \(restore/);
+    // undo: apply the replaced value
+    const undo = applied[SIZING_UNDO_FIELD]!;
+    const eq = undo.indexOf('=');
+    const back = readForm(applySizingOp(applied, sizingOp(undo.slice(0, eq), JSON.parse(undo.slice(eq + 1))), 'metric'), 'metric');
+    expect(back.ok && back.design).toEqual(readForm(before, 'metric').ok && (readForm(before, 'metric') as { design: unknown }).design);
+  });
+
+  it('an apply to a path no proposal uses is refused with APP_ERR_UNKNOWN_OPERATION', () => {
+    expect(() => update({ ...designToValues(demoDesign(), 'metric'), _op: 'size:apply:vehicle.wheelbase_m=9' })).toThrow(/Unknown operation/);
+  });
+});

@@ -159,14 +159,21 @@ export function rotorFadeRun(
   const steps = 400;
   const dt = tb / steps;
   const decay = Math.exp(-s.b * dt);
+  const halfDecay = Math.exp(-s.b * dt * 0.5);
+  // Every braking is the same, and the steps are linear in the temperature: a braking starting at θ
+  // ends at θ·decay^steps + rise, so the step loop runs once (rise and gain) rather than every cycle.
+  let rise = 0;
+  let gain = 1;
+  for (let i = 0; i < steps; i++) {
+    const v = v1 - a * (i + 0.5) * dt;
+    const q = (s.share * axleShare * 0.5 * massKg * a * v * (1 + s.rotating)) / C; // K/s
+    rise = rise * decay + q * dt * halfDecay;
+    gain *= decay;
+  }
   let theta = 0; // temperature above ambient, K
   const peaks: number[] = [];
   for (let n = 0; n < cycles; n++) {
-    for (let i = 0; i < steps; i++) {
-      const v = v1 - a * (i + 0.5) * dt;
-      const q = (s.share * axleShare * 0.5 * massKg * a * v * (1 + s.rotating)) / C; // K/s
-      theta = theta * decay + q * dt * Math.exp(-s.b * dt * 0.5);
-    }
+    theta = theta * gain + rise;
     peaks.push(s.ambient + theta);
     theta *= Math.exp(-s.b * Math.max(0, interval - tb));
   }

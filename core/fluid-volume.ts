@@ -29,7 +29,7 @@ import type { Brake, DesignFile } from './design.ts';
 import { forcesAt } from './distribution.ts';
 import type { AxleHardware, Hardware } from './hardware-schema.ts';
 import { pedalForce } from './pedal-force.ts';
-import { rearPressure } from './rear-valve.ts';
+import { masterPressureForRear, rearPressure } from './rear-valve.ts';
 import type { StateModel } from './state-model.ts';
 import type { Warning } from './validate.ts';
 
@@ -202,18 +202,27 @@ function rateWithCircuits(s: StateModel, front: number, rear: number, p: number)
   return (t1 + t2) / s.loads.P;
 }
 
-/** Smallest master pressure at which the working circuits reach braking rate z (bisection), or null. */
+/**
+ * Smallest master pressure at which the working circuits reach braking rate z, or null when they do not
+ * by 1000 bar. The rate is piecewise linear and non-decreasing in p, with kinks only at the thresholds
+ * and the valve knee, so it is inverted exactly on the piece where it reaches z.
+ */
 export function pressureForRate(s: StateModel, front: number, rear: number, z: number): number | null {
   if (!(z > 0)) return 0;
   if (rateWithCircuits(s, front, rear, P_SEARCH_MAX) < z) return null;
-  let lo = 0;
-  let hi = P_SEARCH_MAX;
-  for (let i = 0; i < 200 && hi - lo > 1e-9; i++) {
-    const mid = (lo + hi) / 2;
-    if (rateWithCircuits(s, front, rear, mid) >= z) hi = mid;
-    else lo = mid;
+  const kinks = [s.threshold1, masterPressureForRear(s.valve, s.threshold2), s.valve.knee]
+    .filter((p) => p > 0 && p < P_SEARCH_MAX)
+    .sort((x, y) => x - y);
+  kinks.push(P_SEARCH_MAX);
+  let p0 = 0;
+  let r0 = rateWithCircuits(s, front, rear, 0);
+  for (const p1 of kinks) {
+    const r1 = rateWithCircuits(s, front, rear, p1);
+    if (r1 >= z) return p0 + ((z - r0) * (p1 - p0)) / (r1 - r0);
+    p0 = p1;
+    r0 = r1;
   }
-  return hi;
+  return P_SEARCH_MAX; // not reached: the rate at P_SEARCH_MAX is at least z
 }
 
 interface Resolved {
@@ -287,30 +296,43 @@ function ignoredKeys(design: DesignFile): Warning[] {
   return w;
 }
 
-/** Travel at master pressure p (rear line p2) with the given circuits working. */
-function travelAt(
+/** Pushrod travel and rear line pressure at master pressure p with one circuit lost or none; circuit volumes into `vol` when given. */
+function pushrodAt(
   r: Resolved,
-  design: DesignFile,
+  circuits: readonly HydraulicCircuit[],
   s: StateModel,
-  z: number,
   p: number,
   lostCircuit: HydraulicCircuit | null,
-): TravelPoint {
-  const working = circuitsOf(design).filter((c) => lostCircuit === null || c.id !== lostCircuit.id);
+  vol?: Record<string, number>,
+): { p2: number; x: PushrodTravel } {
   // The rear line holds pressure only while a working circuit feeds a rear brake.
-  const p2 = working.some((c) => c.rear > 0) ? rearPressure(s.valve, p) : 0;
-  const vol: Record<string, number> = {};
+  const p2 = circuits.some((c) => c.rear > 0 && c !== lostCircuit) ? rearPressure(s.valve, p) : 0;
   let vPrimary = 0;
   let vSecondary = 0;
-  for (const c of circuitsOf(design)) {
-    const v = lostCircuit !== null && c.id === lostCircuit.id ? 0 : c.front * axleVolume(r.front, p) + c.rear * axleVolume(r.rear, p2);
-    vol[c.id] = v * 1e9;
+  for (const c of circuits) {
+    const v = c === lostCircuit ? 0 : c.front * axleVolume(r.front, p) + c.rear * axleVolume(r.rear, p2);
+    if (vol) vol[c.id] = v * 1e9;
     if (c.chamber === 'primary') vPrimary += v;
     else vSecondary += v;
   }
   const lost = lostCircuit === null ? 'none' : lostCircuit.chamber;
   // At zero pressure the pedal is at rest; any pressure first needs the dead travel and clearances.
   const x = p > 0 ? pushrodTravel(r.mc, vPrimary, vSecondary, lost) : { travel: 0, bottomed: false };
+  return { p2, x };
+}
+
+/** Travel at master pressure p with the given circuits working (`lostCircuit` one of `circuits`, or null). */
+function travelAt(
+  r: Resolved,
+  design: DesignFile,
+  circuits: readonly HydraulicCircuit[],
+  s: StateModel,
+  z: number,
+  p: number,
+  lostCircuit: HydraulicCircuit | null,
+): TravelPoint {
+  const vol: Record<string, number> = {};
+  const { p2, x } = pushrodAt(r, circuits, s, p, lostCircuit, vol);
   const pedal = x.travel * design.hydraulics.pedal_ratio;
   return {
     braking_rate: z,
@@ -324,6 +346,11 @@ function travelAt(
     bottomed: x.bottomed,
     pedal_force_n: pedalForce(s.pedal, p),
   };
+}
+
+/** travelAt(…).pedal_travel_mm alone, for the series. */
+function pedalTravelMm(r: Resolved, design: DesignFile, circuits: readonly HydraulicCircuit[], s: StateModel, p: number, lostCircuit: HydraulicCircuit | null): number {
+  return pushrodAt(r, circuits, s, p, lostCircuit).x.travel * design.hydraulics.pedal_ratio * 1e3;
 }
 
 const SERIES_STEP = 0.02;
@@ -342,7 +369,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
     const zTop = Math.min(1, s.loads.zLift);
     // Service: both circuits, pressure from the installed distribution.
     const pService = forcesAt(s.dist, zService).p;
-    const service = travelAt(r, design, s, zService, pService, null);
+    const service = travelAt(r, design, circuits, s, zService, pService, null);
     cases.push({
       case: 'service',
       failed_circuit: null,
@@ -357,7 +384,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
     for (let i = 0; i * SERIES_STEP <= zTop + 1e-9; i++) {
       const z = Math.min(i * SERIES_STEP, zTop);
       sv.braking_rate.push(z);
-      sv.pedal_travel_mm.push(travelAt(r, design, s, z, forcesAt(s.dist, z).p, null).pedal_travel_mm);
+      sv.pedal_travel_mm.push(pedalTravelMm(r, design, circuits, s, forcesAt(s.dist, z).p, null));
     }
     series.push(sv);
     if (service.share_of_available_pct > r.warnPct) {
@@ -383,7 +410,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
       const rear = circuits.filter((c) => c !== lost).reduce((a, c) => a + c.rear, 0);
       const name = `${lost.id}_circuit_failed`;
       const p = pressureForRate(s, front, rear, zSecondary);
-      const point = p === null ? null : travelAt(r, design, s, zSecondary, p, lost);
+      const point = p === null ? null : travelAt(r, design, circuits, s, zSecondary, p, lost);
       cases.push({
         case: name,
         failed_circuit: lost.id,
@@ -400,7 +427,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
         const pz = pressureForRate(s, front, rear, z);
         if (pz === null) break;
         fs.braking_rate.push(z);
-        fs.pedal_travel_mm.push(travelAt(r, design, s, z, pz, lost).pedal_travel_mm);
+        fs.pedal_travel_mm.push(pedalTravelMm(r, design, circuits, s, pz, lost));
       }
       series.push(fs);
       if (point === null) {

@@ -19,11 +19,11 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
-import { checkCurveRule } from './checks/curve-check.ts';
+import { checkCurveRule, curveRulePasses } from './checks/curve-check.ts';
 import { ruleSelection } from './checks/run-checks.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
-import { type Distribution, forcesAt } from './distribution.ts';
+import { type Distribution, forcesAt, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
 import { type CurveRule, type RuleStatus, selectRules } from './rules/index.ts';
@@ -263,8 +263,9 @@ export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
 }
 
 function curveChecks(rules: readonly CurveRule[], loads: AxleLoadModel, d: Distribution, speed: number | null, R: number): RegenCurveCheck[] {
+  const segs = segments(d);
   return rules.map((rule) => {
-    const v = checkCurveRule(rule, loads, d);
+    const v = checkCurveRule(rule, loads, d, segs);
     return {
       rule: rule.id,
       title: rule.title,
@@ -287,8 +288,11 @@ function maxForcePassing(
   setup: RegenSetup,
 ): { force: number | null; basis: RegenStateResult['max_force_basis'] } {
   if (rules.length === 0) return { force: null, basis: 'no_rule_to_keep' };
-  const ok = (R: number) =>
-    rules.every((rule) => checkCurveRule(rule, loads, regenDistribution(friction, R, setup.frontShare, setup.blending)).passed);
+  const ok = (R: number) => {
+    const d = regenDistribution(friction, R, setup.frontShare, setup.blending);
+    const segs = segments(d);
+    return rules.every((rule) => curveRulePasses(rule, loads, d, segs));
+  };
   if (ok(setup.maxForce)) return { force: null, basis: 'full_force_passes' };
   let lo = 0;
   let up = setup.maxForce;

@@ -28,7 +28,7 @@ export function messageId(name: string): string {
 
 /** The message slot under a field; the server fills it (or empties it) with out-of-band swaps. */
 export function fieldMessage(name: string, messages: readonly string[] | undefined, oob = false): SafeHtml {
-  return html`<p class="msg" id="${messageId(name)}" data-field="${name}"${oob ? html` hx-swap-oob="true"` : ''}>${(messages ?? []).join('; ')}</p>`;
+  return html`<p class="msg" id="${messageId(name)}"${oob ? html` hx-swap-oob="true"` : ''}>${(messages ?? []).join('; ')}</p>`;
 }
 
 export interface FieldOptions {

@@ -72,16 +72,13 @@ export function join(parts: readonly HtmlValue[], sep: HtmlValue = ''): SafeHtml
   return make(out.join(''));
 }
 
+const JSON_ESCAPES: Record<string, string> = { '<': '\\u003c', '>': '\\u003e', '&': '\\u0026', '\u2028': '\\u2028', '\u2029': '\\u2029' };
+
 /**
  * Data for the browser as `<script type="application/json">`: never executed, and `<`, `>`, `&`, U+2028/9
  * are written as \u escapes so that no value can close the element or open a comment.
  */
 export function jsonScript(id: string, value: unknown): SafeHtml {
-  const json = JSON.stringify(value)
-    .replace(/</g, '\\u003c')
-    .replace(/>/g, '\\u003e')
-    .replace(/&/g, '\\u0026')
-    .replace(/\u2028/g, '\\u2028')
-    .replace(/\u2029/g, '\\u2029');
+  const json = JSON.stringify(value).replace(/[<>&\u2028\u2029]/g, (c) => JSON_ESCAPES[c]!);
   return make(`<script type="application/json" id="${escapeHtml(id)}">${json}</script>`);
 }

@@ -43,8 +43,8 @@ export function sizingText(r: SizingResult): string {
   out.push('Fixed front/rear split (front share of the braking force, thresholds and valves left out):');
   out.push(
     textTable(
-      ['rule', 'load state', 'passing front share'],
-      r.per_rule.map((p) => [p.rule, p.load_state, p.intervals.length ? p.intervals.map(([a, b]) => `${pct(a)} – ${pct(b)}`).join(', ') : 'none']),
+      ['rule', 'load state', 'passing front share', 'status'],
+      r.per_rule.map((p) => [p.rule, p.load_state, p.intervals.length ? p.intervals.map(([a, b]) => `${pct(a)} – ${pct(b)}`).join(', ') : 'none', p.verify_note ? `${p.status}: ${p.verify_note}` : p.status]),
     ),
   );
   out.push('');

@@ -14,7 +14,7 @@
 import type { AxleLoadModel } from '../axle-loads.ts';
 import { type Distribution, type Segment, segments } from '../distribution.ts';
 import type { Branch, Constraint, CurveRule, Piece, RuleStatus } from '../rules/rule-types.ts';
-import { type Poly, polyAdd, polyMul, polyRootsIn, polyScale } from './polynomial.ts';
+import { polyRootsInto } from './polynomial.ts';
 
 /** Margins within this of zero count as met (adhesion units). */
 export const MARGIN_TOLERANCE = 1e-9;
@@ -41,32 +41,88 @@ function difference(a: MarginForm, b: MarginForm): MarginForm {
   return { alpha: a.alpha - b.alpha, beta: a.beta - b.beta, g1: a.g1 - b.g1, g2: a.g2 - b.g2 };
 }
 
-interface PieceGeometry {
-  seg: Segment;
-  N1: Poly;
-  N2: Poly;
+/**
+ * The axle loads N1 = n10 + n11 z, N2 = n20 + n21 z of one load model and the products the numerators
+ * use, coefficients ascending: N1·N2 = q0 + q1 z + q2 z², N1² = u0 + …, N2² = v0 + …, N1²·N2² = w0 + … + w4 z⁴.
+ * Summed in the same order as polyMul would.
+ */
+interface Loads {
+  n10: number;
+  n11: number;
+  n20: number;
+  n21: number;
+  q0: number;
+  q1: number;
+  q2: number;
+  u0: number;
+  u1: number;
+  u2: number;
+  v0: number;
+  v1: number;
+  v2: number;
+  w0: number;
+  w1: number;
+  w2: number;
+  w3: number;
+  w4: number;
 }
 
-function formAt(f: MarginForm, g: PieceGeometry, z: number): number {
-  const n1 = g.N1[0]! + g.N1[1]! * z;
-  const n2 = g.N2[0]! + g.N2[1]! * z;
-  const s = g.seg;
+function loadsOf(m: AxleLoadModel): Loads {
+  const n10 = m.P1;
+  const n11 = m.chi * m.P;
+  const n20 = m.P2;
+  const n21 = -m.chi * m.P;
+  const u0 = n10 * n10;
+  const u1 = n10 * n11 + n11 * n10;
+  const u2 = n11 * n11;
+  const v0 = n20 * n20;
+  const v1 = n20 * n21 + n21 * n20;
+  const v2 = n21 * n21;
+  return {
+    n10,
+    n11,
+    n20,
+    n21,
+    q0: n10 * n20,
+    q1: n10 * n21 + n11 * n20,
+    q2: n11 * n21,
+    u0,
+    u1,
+    u2,
+    v0,
+    v1,
+    v2,
+    w0: u0 * v0,
+    w1: u0 * v1 + u1 * v0,
+    w2: u0 * v2 + u1 * v1 + u2 * v0,
+    w3: u1 * v2 + u2 * v1,
+    w4: u2 * v2,
+  };
+}
+
+function formAt(f: MarginForm, L: Loads, s: Segment, z: number): number {
+  const n1 = L.n10 + L.n11 * z;
+  const n2 = L.n20 + L.n21 * z;
   return f.alpha + f.beta * z + (f.g1 * (s.a1 + s.b1 * z)) / n1 + (f.g2 * (s.a2 + s.b2 * z)) / n2;
 }
 
-function valueNumerator(f: MarginForm, g: PieceGeometry): Poly {
-  const s = g.seg;
-  const n12 = polyMul(g.N1, g.N2);
-  return polyAdd(polyAdd(polyMul([f.alpha, f.beta], n12), polyScale(polyMul([s.a1, s.b1], g.N2), f.g1)), polyScale(polyMul([s.a2, s.b2], g.N1), f.g2));
+/** m(z)·N1·N2 = (α + βz) N1 N2 + γ1 T1 N2 + γ2 T2 N1 (cubic) into out[0..3]. */
+function valueNumerator(f: MarginForm, L: Loads, s: Segment, out: Float64Array): void {
+  out[0] = f.alpha * L.q0 + s.a1 * L.n20 * f.g1 + s.a2 * L.n10 * f.g2;
+  out[1] = f.alpha * L.q1 + f.beta * L.q0 + (s.a1 * L.n21 + s.b1 * L.n20) * f.g1 + (s.a2 * L.n11 + s.b2 * L.n10) * f.g2;
+  out[2] = f.alpha * L.q2 + f.beta * L.q1 + s.b1 * L.n21 * f.g1 + s.b2 * L.n11 * f.g2;
+  out[3] = f.beta * L.q2;
 }
 
-function slopeNumerator(f: MarginForm, g: PieceGeometry): Poly {
-  const s = g.seg;
-  const n1sq = polyMul(g.N1, g.N1);
-  const n2sq = polyMul(g.N2, g.N2);
-  const c1 = s.b1 * g.N1[0]! - s.a1 * g.N1[1]!;
-  const c2 = s.b2 * g.N2[0]! - s.a2 * g.N2[1]!;
-  return polyAdd(polyAdd(polyScale(polyMul(n1sq, n2sq), f.beta), polyScale(n2sq, f.g1 * c1)), polyScale(n1sq, f.g2 * c2));
+/** m'(z)·N1²N2² = β N1² N2² + γ1 (b1 P1 − a1 χP) N2² + γ2 (b2 P2 + a2 χP) N1² (quartic) into out[0..4]. */
+function slopeNumerator(f: MarginForm, L: Loads, s: Segment, out: Float64Array): void {
+  const k1 = f.g1 * (s.b1 * L.n10 - s.a1 * L.n11);
+  const k2 = f.g2 * (s.b2 * L.n20 - s.a2 * L.n21);
+  out[0] = L.w0 * f.beta + L.v0 * k1 + L.u0 * k2;
+  out[1] = L.w1 * f.beta + L.v1 * k1 + L.u1 * k2;
+  out[2] = L.w2 * f.beta + L.v2 * k1 + L.u2 * k2;
+  out[3] = L.w3 * f.beta;
+  out[4] = L.w4 * f.beta;
 }
 
 export interface BranchVerdict {
@@ -94,65 +150,54 @@ function mergeRanges(r: [number, number][]): [number, number][] {
 }
 
 /** Margin of a piece at z: the lowest clause, each clause the best of its alternatives. */
-function composite(clauses: MarginForm[][], g: PieceGeometry, z: number): number {
+function composite(clauses: readonly MarginForm[][], L: Loads, s: Segment, z: number): number {
   let m = Infinity;
   for (const c of clauses) {
     let best = -Infinity;
-    for (const f of c) best = Math.max(best, formAt(f, g, z));
+    for (const f of c) best = Math.max(best, formAt(f, L, s, z));
     m = Math.min(m, best);
   }
   return m;
 }
 
-export function checkBranch(branch: Branch, m: AxleLoadModel, d: Distribution): BranchVerdict {
-  const segs = segments(d);
-  const N1: Poly = [m.P1, m.chi * m.P];
-  const N2: Poly = [m.P2, -m.chi * m.P];
-  const zTop = m.zLift * (1 - 1e-9);
-  let worst: number | null = null;
-  let worstAt: number | null = null;
-  const failing: [number, number][] = [];
-  let liftOff = false;
-  for (const piece of branch.pieces as readonly Piece[]) {
-    const [zA, zB] = piece.z;
-    if (zB > zTop) {
-      liftOff = true;
-      failing.push([Math.max(zA, m.zLift), zB]);
-    }
-    const hi = Math.min(zB, zTop);
-    if (hi < zA) continue;
+/** The margin forms of one piece: per clause its alternatives, all of them, and the pairwise differences within a clause. */
+interface PieceForms {
+  clauses: MarginForm[][];
+  forms: MarginForm[];
+  differences: MarginForm[];
+}
+
+// Rule pieces are constant data: their forms are worked out once.
+const formsOf = new WeakMap<Piece, PieceForms>();
+
+function pieceForms(piece: Piece): PieceForms {
+  let pf = formsOf.get(piece);
+  if (!pf) {
     const clauses = piece.all_of.map((c) => c.map(constraintForm));
-    const forms = clauses.flat();
-    for (const seg of segs) {
-      const lo = Math.max(zA, seg.zFrom);
-      const up = Math.min(hi, seg.zTo);
-      if (up < lo) continue;
-      const g: PieceGeometry = { seg, N1, N2 };
-      const cuts = new Set<number>([lo, up]);
-      for (const f of forms) for (const r of polyRootsIn(valueNumerator(f, g), lo, up)) cuts.add(r);
-      const candidates = new Set<number>(cuts);
-      for (const f of forms) for (const r of polyRootsIn(slopeNumerator(f, g), lo, up)) candidates.add(r);
-      for (const c of clauses) {
-        for (let i = 0; i < c.length; i++) {
-          for (let j = i + 1; j < c.length; j++) for (const r of polyRootsIn(valueNumerator(difference(c[i]!, c[j]!), g), lo, up)) candidates.add(r);
-        }
-      }
-      for (const z of candidates) {
-        const v = composite(clauses, g, z);
-        if (worst === null || v < worst) {
-          worst = v;
-          worstAt = z;
-        }
-      }
-      const pts = [...cuts].sort((a, b) => a - b);
-      for (let i = 0; i + 1 < pts.length; i++) {
-        const a = pts[i]!;
-        const b = pts[i + 1]!;
-        if (b - a <= 1e-12) continue;
-        if (composite(clauses, g, 0.5 * (a + b)) < -MARGIN_TOLERANCE) failing.push([a, b]);
-      }
-    }
+    const differences: MarginForm[] = [];
+    for (const c of clauses) for (let i = 0; i < c.length; i++) for (let j = i + 1; j < c.length; j++) differences.push(difference(c[i]!, c[j]!));
+    pf = { clauses, forms: clauses.flat(), differences };
+    formsOf.set(piece, pf);
   }
+  return pf;
+}
+
+// Work space reused by every check (the checks are not re-entrant): polynomial coefficients, roots,
+// and the cut points and candidate points of one piece in insertion order without repeats.
+const coeffs = new Float64Array(5);
+const roots = new Float64Array(5);
+const cuts: number[] = [];
+const candidates: number[] = [];
+
+function addOnce(list: number[], z: number): void {
+  if (!list.includes(z)) list.push(z);
+}
+
+function addRoots(list: number[], n: number): void {
+  for (let i = 0; i < n; i++) addOnce(list, roots[i]!);
+}
+
+function branchVerdict(branch: Branch, worst: number | null, worstAt: number | null, failing: [number, number][], liftOff: boolean): BranchVerdict {
   const ranges = mergeRanges(failing);
   return {
     id: branch.id,
@@ -164,6 +209,78 @@ export function checkBranch(branch: Branch, m: AxleLoadModel, d: Distribution): 
     failing_ranges: ranges,
     lift_off_in_range: liftOff,
   };
+}
+
+/**
+ * The branch verdict. With `stopAtFailure` the scan ends at the first evidence that the branch fails
+ * (then only `passed` is meaningful): the pass/fail question the regeneration search asks many times.
+ */
+function scanBranch(branch: Branch, m: AxleLoadModel, segs: readonly Segment[], stopAtFailure: boolean): BranchVerdict {
+  const L = loadsOf(m);
+  const zTop = m.zLift * (1 - 1e-9);
+  let worst: number | null = null;
+  let worstAt: number | null = null;
+  const failing: [number, number][] = [];
+  let liftOff = false;
+  for (const piece of branch.pieces as readonly Piece[]) {
+    const [zA, zB] = piece.z;
+    if (zB > zTop) {
+      liftOff = true;
+      failing.push([Math.max(zA, m.zLift), zB]);
+      if (stopAtFailure) return branchVerdict(branch, worst, worstAt, failing, liftOff);
+    }
+    const hi = Math.min(zB, zTop);
+    if (hi < zA) continue;
+    const { clauses, forms, differences } = pieceForms(piece);
+    for (const seg of segs) {
+      const lo = Math.max(zA, seg.zFrom);
+      const up = Math.min(hi, seg.zTo);
+      if (up < lo) continue;
+      // Cuts: the piece ends and where a margin form changes sign. Candidates for the worst margin:
+      // the cuts, where a form is stationary, and where two alternatives of a clause cross.
+      cuts.length = 0;
+      addOnce(cuts, lo);
+      addOnce(cuts, up);
+      for (const f of forms) {
+        valueNumerator(f, L, seg, coeffs);
+        addRoots(cuts, polyRootsInto(coeffs, 4, lo, up, roots));
+      }
+      candidates.length = 0;
+      for (const z of cuts) candidates.push(z);
+      for (const f of forms) {
+        slopeNumerator(f, L, seg, coeffs);
+        addRoots(candidates, polyRootsInto(coeffs, 5, lo, up, roots));
+      }
+      for (const f of differences) {
+        valueNumerator(f, L, seg, coeffs);
+        addRoots(candidates, polyRootsInto(coeffs, 4, lo, up, roots));
+      }
+      for (const z of candidates) {
+        const v = composite(clauses, L, seg, z);
+        if (worst === null || v < worst) {
+          worst = v;
+          worstAt = z;
+        }
+      }
+      if (stopAtFailure && worst !== null && worst < -MARGIN_TOLERANCE) return branchVerdict(branch, worst, worstAt, failing, liftOff);
+      cuts.sort((a, b) => a - b);
+      for (let i = 0; i + 1 < cuts.length; i++) {
+        const a = cuts[i]!;
+        const b = cuts[i + 1]!;
+        if (b - a <= 1e-12) continue;
+        if (composite(clauses, L, seg, 0.5 * (a + b)) < -MARGIN_TOLERANCE) {
+          failing.push([a, b]);
+          if (stopAtFailure) return branchVerdict(branch, worst, worstAt, failing, liftOff);
+        }
+      }
+    }
+  }
+  return branchVerdict(branch, worst, worstAt, failing, liftOff);
+}
+
+/** `segs` may be passed in when the caller has them already (segments(d) of the same distribution). */
+export function checkBranch(branch: Branch, m: AxleLoadModel, d: Distribution, segs: readonly Segment[] = segments(d)): BranchVerdict {
+  return scanBranch(branch, m, segs, false);
 }
 
 const CERTAINTY: Record<RuleStatus, number> = { verified: 0, partial: 1, memory: 2 };
@@ -188,8 +305,8 @@ export interface CurveVerdict {
  * A curve rule passes when any branch passes. Margin, location and failing ranges come from the
  * branch that passed, or from the main requirement (the first branch) when none did.
  */
-export function checkCurveRule(rule: CurveRule, m: AxleLoadModel, d: Distribution): CurveVerdict {
-  const branches = rule.branches.map((b) => checkBranch(b, m, d));
+export function checkCurveRule(rule: CurveRule, m: AxleLoadModel, d: Distribution, segs: readonly Segment[] = segments(d)): CurveVerdict {
+  const branches = rule.branches.map((b) => scanBranch(b, m, segs, false));
   const pass = branches.find((b) => b.passed);
   const shown = pass ?? branches[0]!;
   return {
@@ -201,4 +318,9 @@ export function checkCurveRule(rule: CurveRule, m: AxleLoadModel, d: Distributio
     failing_ranges: shown.failing_ranges,
     branches,
   };
+}
+
+/** checkCurveRule(rule, m, d).passed, without the figures: stops at the first passing branch and at a branch's first failure. */
+export function curveRulePasses(rule: CurveRule, m: AxleLoadModel, d: Distribution, segs: readonly Segment[] = segments(d)): boolean {
+  return rule.branches.some((b) => scanBranch(b, m, segs, true).passed);
 }

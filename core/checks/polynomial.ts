@@ -34,20 +34,27 @@ export function polyDerivative(a: Poly): Poly {
   return a.slice(1).map((c, i) => c * (i + 1));
 }
 
-/** Drops leading coefficients that are negligible against the largest one. */
-function trim(a: Poly): Poly {
-  const scale = Math.max(0, ...a.map(Math.abs));
-  let n = a.length;
+/** Length of `a` (its first n coefficients) once leading coefficients negligible against the largest are dropped. */
+function trimmedLength(a: ArrayLike<number>, n: number): number {
+  let scale = 0;
+  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(a[i]!));
   while (n > 0 && Math.abs(a[n - 1]!) <= scale * 1e-14) n--;
-  return a.slice(0, n);
+  return n;
 }
 
-function bisect(a: Poly, lo: number, hi: number): number {
-  let flo = polyEval(a, lo);
+/** polyEval on the first n coefficients. */
+function evalN(a: ArrayLike<number>, n: number, z: number): number {
+  let v = 0;
+  for (let i = n - 1; i >= 0; i--) v = v * z + a[i]!;
+  return v;
+}
+
+function bisect(a: ArrayLike<number>, n: number, lo: number, hi: number): number {
+  let flo = evalN(a, n, lo);
   for (let i = 0; i < 200; i++) {
     const mid = 0.5 * (lo + hi);
     if (mid <= lo || mid >= hi) break;
-    const fm = polyEval(a, mid);
+    const fm = evalN(a, n, mid);
     if (fm === 0) return mid;
     if (fm < 0 === flo < 0) {
       lo = mid;
@@ -57,31 +64,65 @@ function bisect(a: Poly, lo: number, hi: number): number {
   return 0.5 * (lo + hi);
 }
 
+// Work space per polynomial length n (each level of the recursion has its own n, one less than its
+// caller's), so that finding roots allocates nothing after the first call for a given length.
+const derivBuf: Float64Array[] = [];
+const critBuf: Float64Array[] = [];
+const edgeBuf: Float64Array[] = [];
+
+/**
+ * Real roots of the polynomial a[0] + a[1] z + … + a[n−1] z^(n−1) in [lo, hi], ascending, written to
+ * `out` (room for n values); returns how many. The allocation-free core of polyRootsIn (same result).
+ */
+export function polyRootsInto(a: ArrayLike<number>, length: number, lo: number, hi: number, out: Float64Array): number {
+  const n = trimmedLength(a, length);
+  if (n <= 1 || !(hi >= lo)) return 0;
+  if (n === 2) {
+    const r = -a[0]! / a[1]!;
+    if (r >= lo && r <= hi) {
+      out[0] = r;
+      return 1;
+    }
+    return 0;
+  }
+  const deriv = (derivBuf[n] ??= new Float64Array(n - 1));
+  for (let i = 1; i < n; i++) deriv[i - 1] = a[i]! * i;
+  const crit = (critBuf[n] ??= new Float64Array(n - 1));
+  const nCrit = polyRootsInto(deriv, n - 1, lo, hi, crit);
+  // The derivative's roots split [lo, hi] into pieces where the polynomial is monotonic.
+  const edges = (edgeBuf[n] ??= new Float64Array(n + 1));
+  let nEdges = 0;
+  edges[nEdges++] = lo;
+  for (let i = 0; i < nCrit; i++) if (crit[i]! > lo && crit[i]! < hi) edges[nEdges++] = crit[i]!;
+  edges[nEdges++] = hi;
+  let scale = 0;
+  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(a[i]!));
+  scale *= 1e-13;
+  // Roots come out ascending (each lies in its own piece); one within 1e-13 of the previous candidate is dropped.
+  let count = 0;
+  let prev = NaN;
+  for (let i = 0; i < nEdges; i++) {
+    const x0 = edges[i]!;
+    const f0 = evalN(a, n, x0);
+    let r = NaN;
+    if (Math.abs(f0) <= scale * Math.max(1, Math.abs(x0) ** (n - 1))) r = x0;
+    else if (i + 1 < nEdges) {
+      const f1 = evalN(a, n, edges[i + 1]!);
+      if (f0 < 0 !== f1 < 0 && f1 !== 0) r = bisect(a, n, x0, edges[i + 1]!);
+    }
+    if (!Number.isNaN(r)) {
+      if (count === 0 || r - prev > 1e-13) out[count++] = r;
+      prev = r;
+    }
+  }
+  return count;
+}
+
 /**
  * Real roots of a in [lo, hi], ascending. A polynomial that vanishes identically has no isolated
  * roots and gives []. Touching roots (even multiplicity) are found through the derivative's roots.
  */
 export function polyRootsIn(a: Poly, lo: number, hi: number): number[] {
-  const p = trim(a);
-  if (p.length <= 1 || !(hi >= lo)) return [];
-  if (p.length === 2) {
-    const r = -p[0]! / p[1]!;
-    return r >= lo && r <= hi ? [r] : [];
-  }
-  const crit = polyRootsIn(polyDerivative(p), lo, hi);
-  const edges = [lo, ...crit.filter((c) => c > lo && c < hi), hi];
-  const roots: number[] = [];
-  const scale = Math.max(...p.map(Math.abs)) * 1e-13;
-  for (let i = 0; i + 1 < edges.length; i++) {
-    const x0 = edges[i]!;
-    const x1 = edges[i + 1]!;
-    const f0 = polyEval(p, x0);
-    const f1 = polyEval(p, x1);
-    if (Math.abs(f0) <= scale * Math.max(1, Math.abs(x0) ** (p.length - 1))) roots.push(x0);
-    else if (f0 < 0 !== f1 < 0 && f1 !== 0) roots.push(bisect(p, x0, x1));
-  }
-  const last = edges[edges.length - 1]!;
-  if (Math.abs(polyEval(p, last)) <= scale * Math.max(1, Math.abs(last) ** (p.length - 1))) roots.push(last);
-  roots.sort((x, y) => x - y);
-  return roots.filter((r, i) => i === 0 || r - roots[i - 1]! > 1e-13);
+  const out = new Float64Array(Math.max(1, a.length));
+  return Array.from(out.subarray(0, polyRootsInto(a, a.length, lo, hi, out)));
 }

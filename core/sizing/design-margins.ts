@@ -3,7 +3,9 @@
  * (thresholds, valve, balance bar): one margin per rule and load state, the smallest of them, and
  * whether every one passes. Used to report what a proposed change actually gives.
  */
+import { verifyNoteFor } from '../checks/check-result.ts';
 import { checkCurveRule, MARGIN_TOLERANCE } from '../checks/curve-check.ts';
+import type { RuleStatus } from '../rules/rule-types.ts';
 import type { DesignFile } from '../design.ts';
 import { frontShareAtLowPressure } from '../distribution.ts';
 import { stateModel } from '../state-model.ts';
@@ -17,6 +19,9 @@ export interface RuleMargin {
   margin: number | null;
   /** Branch that passed, or null. */
   branch: string | null;
+  /** How sure the rule text is (the passing branch's, or the least certain); VERIFY_NOTE unless verified. */
+  status: RuleStatus;
+  verify_note?: string;
 }
 
 export interface DesignMargins {
@@ -43,7 +48,7 @@ export function designMargins(design: DesignFile, rules: readonly SizingRule[]):
         const w = b.worst_margin ?? Infinity;
         if (best === null || w > best) best = w;
       }
-      margins.push({ rule: r.compiled.rule.id, load_state: m.state.id, passed: v.passed, margin: liftOff ? null : best, branch: v.branch });
+      margins.push({ rule: r.compiled.rule.id, load_state: m.state.id, passed: v.passed, margin: liftOff ? null : best, branch: v.branch, status: v.status, ...verifyNoteFor(v.status) });
     }
   }
   let smallest: number | null = Infinity;

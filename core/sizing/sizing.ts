@@ -13,9 +13,9 @@ import { designMargins, type DesignMargins } from './design-margins.ts';
 import { type BoreSizing, masterCylinderBore } from './master-cylinder-bore.ts';
 import { monteCarlo, type MonteCarlo, robustnessModel, sensitivity, type Sensitivity, worstCorner, type Corner, DEFAULT_SAMPLES, DEFAULT_SEED } from './robustness.ts';
 import { balanceBarSettingForRatio, type Tolerances } from './sizing-schema.ts';
-import { sizingCurveRules, type SizingRule } from './sizing-rules.ts';
-import { type PartOption, partOptions, recommendedSplit } from './split-options.ts';
-import { type IntervalSet, splitBand, type RuleBand } from './split-band.ts';
+import { sizingCurveRules, sizingRuleSelection, type SizingRule } from './sizing-rules.ts';
+import { type PartOption, partOptions, recommendedSplit, splitMargin } from './split-options.ts';
+import { type IntervalSet, intersect, splitBand, type RuleBand } from './split-band.ts';
 import { searchValve, type ValveCandidate, type ValveSearch } from './valve-search.ts';
 
 export interface BalanceBarSizing {
@@ -124,7 +124,18 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
     messages.push('ABS is fitted: the lock-order rules do not apply to the working system; the split is sized for the ABS-failed vehicle.');
   }
   const band = splitBand(design, rules);
-  const rec = rules.length > 0 ? recommendedSplit(design, rules, band.intervals) : null;
+  let rec = rules.length > 0 ? recommendedSplit(design, rules, band.intervals) : null;
+  // When the selected rules leave the front share unbounded above (lock-order rules only), the largest margin
+  // sits at φ → 1 (no rear brakes). The recommendation then also keeps the 71/320 efficiency line, advisory.
+  if (rec && rules.length > 0 && rec.phi > 0.99 && !rules.some((r) => r.compiled.rule.id.endsWith('/efficiency'))) {
+    const advisory = sizingCurveRules(design, [...sizingRuleSelection(design, opts.rules), 'eu-appendix/efficiency']);
+    const within = intersect(band.intervals, splitBand(design, advisory).intervals);
+    if (within.length > 0) {
+      const r2 = recommendedSplit(design, advisory, within);
+      rec = { phi: r2.phi, margin: splitMargin(design, rules, r2.phi) };
+      messages.push('The selected rules do not bound the front share from above; the recommended share also keeps the 71/320/EEC efficiency line (advisory, not a selected rule).');
+    }
+  }
   const phi = rec && Number.isFinite(rec.phi) ? rec.phi : null;
   const holding = phi === null ? undefined : (band.intervals.find(([a, b]) => phi >= a - 1e-12 && phi <= b + 1e-12) ?? band.intervals[0]);
   if (band.intervals.length === 0 && rules.length > 0) {
@@ -134,7 +145,9 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
   const shares = models.map((m) => ({ load_state: m.state.id, front_share: frontShareAtLowPressure(m.dist) }));
   const current = designMargins(design, rules);
   const options = phi !== null ? partOptions(design, rules, phi) : [];
-  const valve_search = band.intervals.length === 0 && rules.length > 0 ? searchValve(design, rules) : null;
+  const noPassingOption = !current.passes && !options.some((o) => o.passes);
+  const valve_search = rules.length > 0 && (band.intervals.length === 0 || noPassingOption) ? searchValve(design, rules) : null;
+  if (valve_search && band.intervals.length > 0) messages.push('No part change alone passes with the present rear valve; rear-valve settings were searched too.');
   const valveRec = valve_search?.recommended ?? null;
   if (valve_search && valveRec && !valveRec.passes) messages.push('No rear-valve setting searched passes every rule in every load state; the best one found is shown.');
   // robustness of the answer: the design as it is when it passes, else the proposal the assistant recommends

@@ -22,6 +22,8 @@ import type { MarginForm } from '../checks/curve-check.ts';
 import { type Poly, polyAdd, polyDerivative, polyEval, polyMul, polyRootsIn, polyScale } from '../checks/polynomial.ts';
 import type { DesignFile } from '../design.ts';
 import type { CompiledBranch, CompiledRule } from './rule-margin.ts';
+import { verifyNoteFor } from '../checks/check-result.ts';
+import type { RuleStatus } from '../rules/rule-types.ts';
 
 /** A set of φ as sorted, disjoint closed intervals inside [0, 1]. */
 export type IntervalSet = [number, number][];
@@ -188,6 +190,9 @@ export function branchSet(b: CompiledBranch, psi: number, chi: number): Interval
 export interface RuleBand {
   rule: string;
   load_state: string;
+  /** The rule record's status; VERIFY_NOTE unless verified. */
+  status: RuleStatus;
+  verify_note?: string;
   /** φ that pass the rule in this load state (union of its branches). */
   intervals: IntervalSet;
   branches: { id: string; intervals: IntervalSet }[];
@@ -208,7 +213,7 @@ export function splitBand(design: DesignFile, rules: readonly { compiled: Compil
       const m = axleLoadModel(s.mass_kg, s.front_axle_kg, s.cg_height_m, design.vehicle.wheelbase_m);
       const branches = r.compiled.branches.map((b) => ({ id: b.id, intervals: branchSet(b, m.psi, m.chi) }));
       const set = branches.reduce<IntervalSet>((acc, b) => union(acc, b.intervals), []);
-      per.push({ rule: r.compiled.rule.id, load_state: s.id, intervals: set, branches });
+      per.push({ rule: r.compiled.rule.id, load_state: s.id, status: r.compiled.rule.status, ...verifyNoteFor(r.compiled.rule.status), intervals: set, branches });
       all = intersect(all, set);
     }
   }

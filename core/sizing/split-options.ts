@@ -107,11 +107,9 @@ function axleParts(design: DesignFile, axle: Axle): { kind: PartKind; path: stri
 
 /** A copy of the design with the axle's piston (or wheel-cylinder) diameters replaced. */
 export function withDiameters(design: DesignFile, axle: Axle, diameters: readonly number[]): DesignFile {
-  const copy = structuredClone(design);
-  const b = copy.axles[axle].brake;
-  if (b.type === 'disc') b.piston_diameters_mm = [...diameters];
-  else b.wheel_cylinder_diameter_mm = diameters[0]!;
-  return copy;
+  const b = design.axles[axle].brake;
+  const brake = b.type === 'disc' ? { ...b, piston_diameters_mm: [...diameters] } : { ...b, wheel_cylinder_diameter_mm: diameters[0]! };
+  return { ...design, axles: { ...design.axles, [axle]: { ...design.axles[axle], brake } } };
 }
 
 const LIMITS: Record<string, [number, number]> = { caliper_piston: [10, 120], wheel_cylinder: [10, 60] };

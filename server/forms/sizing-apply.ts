@@ -38,8 +38,9 @@ export function applySizingOp(values: FormValues, op: string, units: UnitSystem)
   if (!reading.ok) return values;
   const old = valueAt(reading.design, path);
   const next = designToValues(applySizingChange(reading.design, path, value), units);
-  // page controls other than the undo slot (names starting with "_") travel along unchanged
-  for (const [k, v] of Object.entries(values)) if (k.startsWith('_') && k !== SIZING_UNDO_FIELD) next[k] = v;
+  // other carried page data (names starting with "_") travel along, except what the rebuilt form states anew
+  // (`_exact`, `_provenance` come from the design itself) and the undo slot
+  for (const [k, v] of Object.entries(values)) if (k.startsWith('_') && k !== SIZING_UNDO_FIELD && k !== '_exact' && !(k in next)) next[k] = v;
   if (old !== undefined) next[SIZING_UNDO_FIELD] = `${path}=${JSON.stringify(old)}`;
   return next;
 }

@@ -117,19 +117,25 @@ export function update(posted: FormValues): UpdateOutcome {
  * Rendered results of the last few designs. A form often comes back unchanged (focus moves, a value is typed and
  * typed back, a unit switch and back), and the engine is pure, so the same design gives the same fragment.
  */
-const RESULTS_CACHE_SIZE = 32;
-const resultsCache = new Map<string, SafeHtml>();
-export function cachedResults(design: DesignFile, warnings: Warning[], units: UnitSystem): SafeHtml {
-  const key = `${units}|${JSON.stringify(design)}`;
-  let out = resultsCache.get(key);
-  if (out) {
-    resultsCache.delete(key); // most recently used goes last
-  } else {
-    out = resultsSection(view(design, warnings), units, true);
-    if (resultsCache.size >= RESULTS_CACHE_SIZE) resultsCache.delete(resultsCache.keys().next().value!);
+const CACHE_SIZE = 32;
+function lru<V>(cache: Map<string, V>, key: string, make: () => V): V {
+  let v = cache.get(key);
+  if (v !== undefined) cache.delete(key); // most recently used goes last
+  else {
+    v = make();
+    if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value!);
   }
-  resultsCache.set(key, out);
-  return out;
+  cache.set(key, v);
+  return v;
+}
+const viewCache = new Map<string, ValidView>();
+const resultsCache = new Map<string, SafeHtml>();
+/** The evaluation of a design, shared by the recompute and the deferred panels of the same design. */
+export function cachedView(design: DesignFile, warnings: Warning[]): ValidView {
+  return lru(viewCache, JSON.stringify(design), () => view(design, warnings));
+}
+export function cachedResults(design: DesignFile, warnings: Warning[], units: UnitSystem): SafeHtml {
+  return lru(resultsCache, `${units}|${JSON.stringify(design)}`, () => resultsSection(cachedView(design, warnings), units, true));
 }
 
 function slug(name: string): string {
@@ -157,6 +163,17 @@ export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
     const out = update(formValues(req.body));
     reply.header('cache-control', 'no-store');
     return sendHtml(reply, out.body, out.status);
+  });
+
+  // a deferred result panel (views/panels/panel.ts `deferred`) for the current form
+  app.post<{ Params: { id: string } }>('/workbench/panel/:id', async (req, reply) => {
+    const panel = panels.find((p) => p.id === req.params.id && p.results && p.deferred);
+    if (!panel) throw appErrors.notFound(`/workbench/panel/${req.params.id.slice(0, 60)}`);
+    const r = validFromRequest(req);
+    reply.header('cache-control', 'no-store');
+    if (!r.ok) return sendHtml(reply, html`<div class="deferred" id="deferred-${panel.id}"><p class="hint">Not current: fix the marked inputs to see this section.</p></div>`, 422);
+    const v = cachedView(r.design, r.warnings);
+    return sendHtml(reply, html`<div class="deferred-body">${panel.results!({ design: v.design, result: v.result, units: r.units, warnings: v.warnings })}</div>`);
   });
 
   app.post('/workbench/design.json', async (req, reply) => {

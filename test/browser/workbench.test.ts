@@ -58,7 +58,8 @@ async function typeInto(selector: string, text: string): Promise<void> {
   await page.waitForTimeout(150); // settle
 }
 
-describe('workbench in chromium', () => {
+// the machine running the suite may be busy: a generous timeout per step, never a timed assertion
+describe('workbench in chromium', { timeout: 60000 }, () => {
   it('opens on the demo with the verdict, three charts and the caution', async () => {
     expect(await page.textContent('#verdict-0')).toContain('front axle locks first');
     for (const id of ['chart-a', 'chart-b', 'chart-c']) expect(await drawn(id)).not.toBeNull();

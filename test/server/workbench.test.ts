@@ -136,7 +136,7 @@ describe('POST /workbench/update', () => {
     expect(r.body.startsWith('<div id="status"')).toBe(true);
     expect(r.body).toContain('Results are current');
     expect(r.body).toMatch(/<div id="results" hx-swap-oob="true">/);
-    expect(r.body).toMatch(/<p class="msg" id="m-vehicle-wheelbase_m" data-field="vehicle.wheelbase_m" hx-swap-oob="true"><\/p>/);
+    expect(r.body).toMatch(/<p class="msg" id="m-vehicle-wheelbase_m" hx-swap-oob="true"><\/p>/);
     expect(r.body).not.toContain('id="design-inputs"');
     expect(inlineScripts(r.body)).toEqual([]);
   });
@@ -295,6 +295,7 @@ describe('upload', () => {
     expect(r.statusCode).toBe(200);
     expect(r.body).toContain('<div id="design-inputs" hx-swap-oob="true">');
     expect(r.body).toContain('value="Uploaded test design"');
+    expect(r.body).not.toContain('What you are looking at'); // the intro belongs to the demo only
     expect(r.body).toMatch(/<div id="results" hx-swap-oob="true">/);
   });
 });
@@ -323,5 +324,38 @@ describe('field message slots', () => {
     const oobIds = [...r.body.matchAll(/<p class="msg" id="([^"]+)"[^>]*hx-swap-oob="true"/g)].map((m) => m[1]!);
     expect(oobIds.length).toBeGreaterThan(20);
     for (const id of oobIds) expect(page, id).toContain(`id="${id}"`);
+  });
+});
+
+describe('deferred result panels', () => {
+  it('render a placeholder with the recompute and their results from POST /workbench/panel/:id', async () => {
+    const { panels } = await import('../../views/panels/index.ts');
+    const { html } = await import('../../views/html.ts');
+    const probe = {
+      id: 'probe-deferred',
+      title: 'Probe',
+      deferred: true,
+      results: (ctx: { design: { name: string }; result: { load_states: unknown[] } }) => html`<p id="probe-out">${ctx.design.name}: ${ctx.result.load_states.length} states</p>`,
+    };
+    panels.push(probe as unknown as (typeof panels)[number]);
+    try {
+      const v = demoValues();
+      v.name = EVIL;
+      const r = await update(form(v));
+      expect(r.statusCode).toBe(200);
+      expect(r.body).toContain('id="deferred-probe-deferred" hx-post="/workbench/panel/probe-deferred" hx-trigger="intersect once" hx-include="#design-form"');
+      expect(r.body).not.toContain('id="probe-out"');
+      const p = await app.inject({ method: 'POST', url: '/workbench/panel/probe-deferred', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: form(v) });
+      expect(p.statusCode).toBe(200);
+      expect(p.body).toContain(`<p id="probe-out">${EVIL_ESCAPED}: 2 states</p>`);
+      v['vehicle.wheelbase_m'] = 'x';
+      const bad = await app.inject({ method: 'POST', url: '/workbench/panel/probe-deferred', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: form(v) });
+      expect(bad.statusCode).toBe(422);
+      expect(bad.body).toContain('Not current');
+      const none = await app.inject({ method: 'POST', url: '/workbench/panel/verdict', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(demoValues()) });
+      expect(none.statusCode).toBe(404); // only deferred panels are served this way
+    } finally {
+      panels.splice(panels.indexOf(probe as unknown as (typeof panels)[number]), 1);
+    }
   });
 });

@@ -83,9 +83,15 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>
 ${staleNote(null)}
 <div class="result-body">
+${isDemo(v.design) ? INTRO : ''}
 <p class="for">Results for <strong>${v.design.name}</strong></p>
-${panels.filter((p) => p.results).map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.results!(ctx)}</section>`)}
+${panels.filter((p) => p.results).map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.deferred ? deferredSlot(p.id) : p.results!(ctx)}</section>`)}
 </div></div>`;
+}
+
+/** Placeholder of a deferred panel: loads its results for the current form when it scrolls into view. */
+export function deferredSlot(id: string): SafeHtml {
+  return html`<div class="deferred" id="deferred-${id}" hx-post="/workbench/panel/${id}" hx-trigger="intersect once" hx-include="#design-form" hx-target="this" hx-swap="outerHTML"><p class="hint">Loading…</p></div>`;
 }
 
 /** Empty when the results are current; says why not otherwise. */
@@ -112,6 +118,13 @@ ${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${probl
 </div>`;
 }
 
+/** "Wheelbase vehicle.wheelbase_m: " linked to the field when it is on the page, else the path alone. */
+function problemLabel(path: string, labels: ReadonlyMap<string, string> | undefined): SafeHtml | string {
+  if (!path) return '';
+  const label = labels?.get(path);
+  return label ? html`<a href="#${fieldId(path)}">${label}</a> <code>${path}</code>: ` : html`<code>${path}</code>: `;
+}
+
 /**
  * Out-of-band message slots for every field the panels render with a slot: filled for fields with problems,
  * emptied for the rest. Problems on other paths are listed in the status block only.
@@ -120,6 +133,9 @@ export function fieldMessagesOob(values: FormValues, units: UnitSystem, errors: 
   const m = errorMap(errors);
   return html`${[...fieldsWithMessages(values, units).names].map((n) => fieldMessage(n, m.get(n), true))}`;
 }
+
+/** The intro is shown while the page holds the demo (its name starts "Demo:"). */
+const isDemo = (d: DesignFile) => d.name.startsWith('Demo:');
 
 const INTRO = html`<details class="intro" open><summary>What you are looking at</summary>
 <p>This is an invented example: a 3.5 t panel van converted to battery-electric drive and fitted out as a camper.
@@ -151,7 +167,6 @@ export function workbenchPage(
 ${inputsSection(values, units, errors)}
 </form>
 <div class="results-col" id="results-col">
-${INTRO}
 <aside class="caution" role="note"><strong>CAUTION</strong> ${CAUTION}</aside>
 ${valid ? statusBlock(errors.length ? 'invalid' : 'current', { errors }) : statusBlock('invalid', { errors })}
 ${valid ? resultsSection(valid, units) : html`<div id="results">${staleNote(errors.length || 1)}</div>`}

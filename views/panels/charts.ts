@@ -9,7 +9,9 @@ import { pedalUnit, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
 
-const r4 = (v: number | null) => (v === null ? null : Math.round(v * 1e4) / 1e4);
+/** Chart coordinates to 3 decimals (0.001 of an axis is below a pixel); pressures and forces to 0.1. */
+const r4 = (v: number | null) => (v === null ? null : Math.round(v * 1e3) / 1e3);
+const r1 = (v: number | null) => (v === null ? null : Math.round(v * 10) / 10);
 const round = (a: ReadonlyArray<number | null>) => a.map(r4);
 
 /** Sparse markers at z = 0.1 … 1.0 on a curve, so each load state keeps its symbol in print. */
@@ -134,12 +136,12 @@ export function chartC(ctx: ResultContext): ChartSpec {
     const st = seriesStyle(i);
     const g = `c${i}`;
     const name = plotText(s.label);
-    const p = (a: number[]) => a.map((v) => r4(pu.from(v * PA_PER_BAR)));
+    const p = (a: number[]) => a.map((v) => r1(pu.from(v * PA_PER_BAR)));
     data.push({ type: 'scatter', mode: 'lines', name: `front pressure – ${name}`, legendgroup: g, x: round(c.braking_rate), y: p(c.front_pressure_bar), line: { color: st.colour, width: 2.5 }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
     data.push({ type: 'scatter', mode: 'lines', name: `rear pressure – ${name}`, legendgroup: g, x: round(c.braking_rate), y: p(c.rear_pressure_bar), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
-    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, x: round(c.braking_rate), y: c.pedal_force_n.map((v) => r4(fu.from(v))), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.2f}: %{y:.0f} ${fu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, x: round(c.braking_rate), y: c.pedal_force_n.map((v) => r1(fu.from(v))), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.2f}: %{y:.0f} ${fu.label}<extra></extra>` });
     const k = atGrid(s);
-    data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r4(pu.from(c.front_pressure_bar[j]! * PA_PER_BAR))), g));
+    data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r1(pu.from(c.front_pressure_bar[j]! * PA_PER_BAR))), g));
   });
   const layout = baseLayout('C  Line pressures and pedal force', 'braking rate z', `line pressure (${pu.label})`);
   (layout.xaxis as Record<string, unknown>).range = [0, 1];

@@ -27,6 +27,11 @@ export interface Panel {
   /** Results, rendered only for a valid design. */
   results?: (ctx: ResultContext) => SafeHtml;
   /**
+   * Render the results on demand (when the section scrolls into view, POST /workbench/panel/<id>) instead of
+   * with every recompute. For result panels that cost more than about a millisecond, so typing stays quick.
+   */
+  deferred?: boolean;
+  /**
    * Called when a structural field changed (a type switch, a list operation, the unit system): drop the fields
    * that no longer apply and fill new ones with starting values, in the user's units.
    */

@@ -14,7 +14,7 @@ import { fixed } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { InputContext, Panel, ResultContext } from './panel.ts';
 
-export const PAGE_SAMPLES = 2000;
+export const PAGE_SAMPLES = 1000;
 export const PAGE_SEED = 1;
 
 const pct = (x: number | null | undefined) => (x === null || x === undefined ? '–' : `${fixed(100 * x, 1)} %`);

@@ -7,7 +7,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { sizingCurveRules } from '../../../core/sizing/sizing-rules.ts';
 import { splitBand } from '../../../core/sizing/split-band.ts';
-import { fixedSplitSegments, geometryOf, ruleMargin } from '../../../core/sizing/rule-margin.ts';
+import { compileRule, fixedSplitSegments, geometryOf, ruleMargin } from '../../../core/sizing/rule-margin.ts';
+import { branchSet } from '../../../core/sizing/split-band.ts';
+import type { CurveRule } from '../../../core/rules/rule-types.ts';
 import { axleLoadModel } from '../../../core/index.ts';
 import { fixedSplitDesign } from './fixtures.ts';
 
@@ -102,5 +104,30 @@ describe('exact band against a scan of the margins', () => {
       ),
       { numRuns: 60, seed: 5 },
     );
+  });
+});
+
+describe('a clause whose alternatives bound φ from both sides', () => {
+  it('gives two intervals: φ ≤ min U or φ ≥ max L (synthetic clause, not a regulation)', () => {
+    // Clause on z 0.15–0.30: f1 ≤ z − 0.05 OR f1 ≥ z + 0.05. With f1 = φz/(ψ + χz):
+    //   U(z) = (z − 0.05)(ψ + χz)/z = ψ + χz − 0.05ψ/z − 0.05χ, increasing (U' = χ + 0.05ψ/z² > 0): min at z = 0.15;
+    //   L(z) = ψ + χz + 0.05ψ/z + 0.05χ, L' = χ − 0.05ψ/z² < 0 below z = √(0.05ψ/χ) ≈ 0.371: max at z = 0.15.
+    // L > U everywhere, so φ fails on (min U, max L) = (U(0.15), L(0.15)).
+    const rule: CurveRule = {
+      kind: 'curve', id: 'test/two-sided', rule_set: 'test', title: 'synthetic', source: { document: 'test', paragraph: '-' }, status: 'verified',
+      categories: ['N1'], load_states: 'all', abs_exempt: false,
+      branches: [{ id: 'only', label: 'synthetic', status: 'verified', pieces: [{ z: [0.15, 0.3], all_of: [[
+        { type: 'at_most', axle: 'front', line: { intercept: -0.05, slope: 1 } },
+        { type: 'at_least', axle: 'front', line: { intercept: 0.05, slope: 1 } },
+      ]] }] }],
+    };
+    const U = PSI + CHI * 0.15 - (0.05 * PSI) / 0.15 - 0.05 * CHI;
+    const L = PSI + CHI * 0.15 + (0.05 * PSI) / 0.15 + 0.05 * CHI;
+    const set = branchSet(compileRule(rule).branches[0]!, PSI, CHI);
+    expect(set).toHaveLength(2);
+    expect(set[0]![0]).toBe(0);
+    expect(set[0]![1]).toBeCloseTo(U, 9);
+    expect(set[1]![0]).toBeCloseTo(L, 9);
+    expect(set[1]![1]).toBe(1);
   });
 });

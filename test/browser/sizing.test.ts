@@ -1,0 +1,69 @@
+// Real-browser test of the sizing panel (views/panels/sizing.ts): Debian's chromium driven by playwright-core
+// (never a browser download) against buildApp() on a random loopback port. A 70 mm rear piston over-brakes the
+// demo's rear axle (rear gain (70/48)² = 2.13 times, hand-checked as in test/browser/workbench.test.ts), so the
+// lock-order rule fails; "Apply" on the first (passing) option must make the design pass, "Undo" restore 70 mm.
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { FastifyInstance } from 'fastify';
+import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildApp } from '../../server/app.ts';
+
+const CHROMIUM = '/usr/bin/chromium';
+let app: FastifyInstance;
+let ctx: BrowserContext;
+let page: Page;
+let profile = '';
+const problems: string[] = [];
+
+beforeAll(async () => {
+  app = buildApp();
+  await app.listen({ host: '127.0.0.1', port: 0 });
+  const base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
+  profile = mkdtempSync(join(tmpdir(), 'lockstep-sizing-browser-'));
+  ctx = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    viewport: { width: 1366, height: 768 },
+  });
+  page = await ctx.newPage();
+  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
+  page.on('console', (m) => {
+    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
+  });
+  await page.goto(`${base}/?fresh`);
+  await page.waitForSelector('#chart-sizing-band .chart[data-drawn]', { timeout: 30000 });
+}, 90000);
+
+afterAll(async () => {
+  await ctx?.close();
+  await app?.close();
+  if (profile) rmSync(profile, { recursive: true, force: true });
+});
+
+const REAR = '#f-axles-rear-brake-piston_diameters_mm-0-';
+
+describe('sizing panel in chromium', { timeout: 60000 }, () => {
+  it('draws the band chart and the robustness histogram', async () => {
+    expect(await page.getAttribute('#chart-sizing-histogram .chart', 'data-drawn')).not.toBeNull();
+    expect(await page.textContent('#panel-sizing')).toContain('physical brake testing');
+  });
+
+  it('Apply fixes a failing design, Undo restores it', async () => {
+    let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.fill(REAR, '70');
+    await answer;
+    await page.waitForFunction(() => document.querySelector('#panel-sizing .sum')?.textContent?.includes('(fails'));
+    answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.click('#panel-sizing table.sizing-options tbody tr:first-child button.apply');
+    await answer;
+    await page.waitForFunction(() => document.querySelector('#panel-sizing .sum')?.textContent?.includes('(passes'));
+    expect(await page.isVisible('button[value^="size:apply:"]:has-text("Undo")')).toBe(true);
+    answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.click('button[value^="size:apply:"]:has-text("Undo")');
+    await answer;
+    await page.waitForFunction((sel) => (document.querySelector(sel) as HTMLInputElement | null)?.value === '70', REAR);
+    expect(problems).toEqual([]);
+  });
+});

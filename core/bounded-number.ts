@@ -1,11 +1,12 @@
 /**
- * Bounded numbers for the optional input blocks (build-up, ratings, axle-lift file), with the same
- * messages as core/design.ts: each names the value given and the allowed range; the field path and
- * unit are added where issues are formatted (core/validate.ts).
+ * Bounded numbers for every input schema (design file and its optional blocks, axle-lift file): each
+ * message names the value given and the allowed range; the field path and unit are added where issues
+ * are formatted (core/validate.ts).
  */
 import { z } from 'zod';
 
-function describe(v: unknown): string {
+/** Words for a value a person typed, in an error message. */
+export function describeValue(v: unknown): string {
   if (v === undefined) return 'nothing';
   if (typeof v === 'number') return Number.isFinite(v) ? String(v) : 'a non-finite number';
   if (typeof v === 'string') return JSON.stringify(v.length > 40 ? `${v.slice(0, 40)}…` : v);
@@ -17,12 +18,12 @@ function describe(v: unknown): string {
 function bounded(min: number, max: number, openBelow: boolean) {
   const range = openBelow ? `above ${min} and at most ${max}` : `from ${min} to ${max}`;
   const base = z.number({
-    error: (iss) => (iss.input === undefined ? `is required: a number ${range}` : `${describe(iss.input)} is not a number; allowed: ${range}`),
+    error: (iss) => (iss.input === undefined ? `is required: a number ${range}` : `${describeValue(iss.input)} is not a number; allowed: ${range}`),
   });
   const lower = openBelow
-    ? base.gt(min, { error: (iss) => `${describe(iss.input)} is not ${range}` })
-    : base.min(min, { error: (iss) => `${describe(iss.input)} is below the allowed range, ${range}` });
-  return lower.max(max, { error: (iss) => `${describe(iss.input)} is above the allowed range, ${range}` });
+    ? base.gt(min, { error: (iss) => `${describeValue(iss.input)} is not ${range}` })
+    : base.min(min, { error: (iss) => `${describeValue(iss.input)} is below the allowed range, ${range}` });
+  return lower.max(max, { error: (iss) => `${describeValue(iss.input)} is above the allowed range, ${range}` });
 }
 
 /** A finite number from min to max inclusive. */

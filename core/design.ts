@@ -3,41 +3,17 @@
  * Types come from z.infer. Units are those in the key names (see docs/design-file.md).
  */
 import { z } from 'zod';
+import { boundedNumber, boundedNumberAbove, describeValue } from './bounded-number.ts';
 import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
 import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 
-/** Words for a value a person typed, in an error message. */
-export function describeValue(v: unknown): string {
-  if (v === undefined) return 'nothing';
-  if (typeof v === 'number') return Number.isFinite(v) ? String(v) : 'a non-finite number';
-  if (typeof v === 'string') return JSON.stringify(v.length > 40 ? `${v.slice(0, 40)}…` : v);
-  if (Array.isArray(v)) return 'a list';
-  if (v === null) return 'null';
-  return typeof v === 'object' ? 'an object' : String(v);
-}
+export { describeValue };
 
-/**
- * A finite number within hard limits. Every message names the value given and the allowed range;
- * the path and unit are added where issues are formatted (core/validate.ts).
- */
-function bounded(min: number, max: number, openBelow: boolean) {
-  const range = openBelow ? `above ${min} and at most ${max}` : `from ${min} to ${max}`;
-  const base = z.number({
-    error: (iss) =>
-      iss.input === undefined
-        ? `is required: a number ${range}`
-        : `${describeValue(iss.input)} is not a number; allowed: ${range}`,
-  });
-  const lower = openBelow
-    ? base.gt(min, { error: (iss) => `${describeValue(iss.input)} is not ${range}` })
-    : base.min(min, { error: (iss) => `${describeValue(iss.input)} is below the allowed range, ${range}` });
-  return lower.max(max, { error: (iss) => `${describeValue(iss.input)} is above the allowed range, ${range}` });
-}
-const num = (min: number, max: number) => bounded(min, max, false);
+const num = boundedNumber;
 /** As num, but the lower limit itself is not allowed. */
-const numAbove = (min: number, max: number) => bounded(min, max, true);
+const numAbove = boundedNumberAbove;
 
 export const VEHICLE_CATEGORIES = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'] as const;
 export const PROVENANCE_SOURCES = ['measured', 'maker', 'donor', 'assumed'] as const;

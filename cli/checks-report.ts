@@ -1,18 +1,7 @@
 /** The regulation-check section of `lockstep evaluate`'s text report: per load state, one entry per check. */
-import { type CheckResult, type EvaluationResult, VERIFY_NOTE } from '../core/index.ts';
+import { type CheckResult, type EvaluationResult, SCENARIO_LABELS, VERIFY_NOTE } from '../core/index.ts';
 import { fmt } from './table.ts';
 
-const SCENARIO_WORDS: Record<CheckResult['scenario'], string> = {
-  as_designed: '',
-  abs_failed: 'ABS failed, as a vehicle without ABS',
-  front_circuit_only: 'rear circuit failed: front brakes only',
-  rear_circuit_only: 'front circuit failed: rear brakes only',
-  one_diagonal: 'one diagonal circuit failed',
-  no_booster_assist: 'booster failed: no assist',
-  facing_uphill: 'facing uphill',
-  facing_downhill: 'facing downhill',
-  parking_brake_capacity: 'parking-brake capacity',
-};
 
 export function verdictWord(c: CheckResult): string {
   if (!c.applies) return 'n/a';
@@ -39,7 +28,7 @@ export function failingText(c: CheckResult): string {
 }
 
 function entry(c: CheckResult): string[] {
-  const scen = SCENARIO_WORDS[c.scenario];
+  const scen = SCENARIO_LABELS[c.scenario];
   const head = [`${verdictWord(c).padEnd(11)} ${c.rule}${scen ? ` (${scen})` : ''}`];
   if (c.applies) {
     head.push(`margin ${marginText(c)}`);

@@ -58,3 +58,16 @@ export function verifyNoteFor(status: RuleStatus): { verify_note?: string } {
 export function failedChecks(checks: readonly CheckResult[]): CheckResult[] {
   return checks.filter((c) => c.applies && !c.advisory && c.passed === false);
 }
+
+/** Words for each scenario, shared by the command line, the page and the evidence packet ('' = as designed). */
+export const SCENARIO_LABELS: Record<CheckScenario, string> = {
+  as_designed: '',
+  abs_failed: 'ABS failed (as a vehicle without ABS; for information)',
+  front_circuit_only: 'rear circuit failed: front brakes only',
+  rear_circuit_only: 'front circuit failed: rear brakes only',
+  one_diagonal: 'one diagonal circuit failed',
+  no_booster_assist: 'booster failed: no assist',
+  facing_uphill: 'facing uphill',
+  facing_downhill: 'facing downhill',
+  parking_brake_capacity: 'parking-brake capacity',
+};

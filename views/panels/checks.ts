@@ -3,22 +3,11 @@
  * status, with "verify against the current official text" beside every partly verified or
  * from-memory verdict. Results of the whole design (a rule that does not apply) come first.
  */
-import { type CheckResult, VERIFY_NOTE } from '../../core/index.ts';
+import { type CheckResult, SCENARIO_LABELS, VERIFY_NOTE } from '../../core/index.ts';
 import { fixed } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
 
-const SCENARIO: Record<CheckResult['scenario'], string> = {
-  as_designed: '',
-  abs_failed: 'ABS failed (as a vehicle without ABS; for information)',
-  front_circuit_only: 'rear circuit failed: front brakes only',
-  rear_circuit_only: 'front circuit failed: rear brakes only',
-  one_diagonal: 'one diagonal circuit failed',
-  no_booster_assist: 'booster failed: no assist',
-  facing_uphill: 'facing uphill',
-  facing_downhill: 'facing downhill',
-  parking_brake_capacity: 'parking-brake capacity',
-};
 
 function verdict(c: CheckResult): { cls: string; text: string } {
   if (!c.applies) return { cls: 'na', text: 'not applicable' };
@@ -41,7 +30,7 @@ function where(c: CheckResult): string {
 
 function row(c: CheckResult): SafeHtml {
   const v = verdict(c);
-  const scen = SCENARIO[c.scenario];
+  const scen = SCENARIO_LABELS[c.scenario];
   return html`<tr class="check-${v.cls}">
 <th scope="row"><code>${c.rule}</code>${scen ? html`<br><small>${scen}</small>` : ''}${c.branch && c.branch !== 'primary' && c.branch !== 'efficiency-line' ? html`<br><small>met by: ${c.branch}</small>` : ''}</th>
 <td class="verdict-cell">${v.text}</td>

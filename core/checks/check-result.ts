@@ -62,7 +62,7 @@ export function failedChecks(checks: readonly CheckResult[]): CheckResult[] {
 /** Words for each scenario, shared by the command line, the page and the evidence packet ('' = as designed). */
 export const SCENARIO_LABELS: Record<CheckScenario, string> = {
   as_designed: '',
-  abs_failed: 'ABS failed (as a vehicle without ABS; for information)',
+  abs_failed: 'ABS failed: checked as a vehicle without ABS, for information',
   front_circuit_only: 'rear circuit failed: front brakes only',
   rear_circuit_only: 'front circuit failed: rear brakes only',
   one_diagonal: 'one diagonal circuit failed',

@@ -8,6 +8,7 @@ type Benchmark = { summary: string; load: () => Promise<{ run: () => void | Prom
 
 const benchmarks: Record<string, Benchmark> = {
   engine: { summary: 'engine evaluation of the demo design against a closed-form floor (issue 2)', load: () => import('./engine.ts') },
+  evaluate: { summary: 'full evaluate() of the demo design with curves, and its costliest blocks (issue 3)', load: () => import('./evaluate.ts') },
   sizing: { summary: 'exact split band vs brute-force scan; Monte Carlo samples/s (issue 5)', load: () => import('./sizing.ts') },
   http: { summary: 'recompute endpoint under autocannon (64 connections, 10 s) and page weight', load: () => import('./http.ts') },
 };

@@ -202,18 +202,17 @@ function rateWithCircuits(s: StateModel, front: number, rear: number, p: number)
   return (t1 + t2) / s.loads.P;
 }
 
-/**
- * Smallest master pressure at which the working circuits reach braking rate z, or null when they do not
- * by 1000 bar. The rate is piecewise linear and non-decreasing in p, with kinks only at the thresholds
- * and the valve knee, so it is inverted exactly on the piece where it reaches z.
- */
-export function pressureForRate(s: StateModel, front: number, rear: number, z: number): number | null {
+/** Master pressures where the working circuits' braking rate has a kink (thresholds, valve knee), ascending, ending at P_SEARCH_MAX. */
+function rateKinks(s: StateModel): number[] {
+  const kinks = [s.threshold1, masterPressureForRear(s.valve, s.threshold2), s.valve.knee].filter((p) => p > 0 && p < P_SEARCH_MAX);
+  kinks.sort((x, y) => x - y);
+  kinks.push(P_SEARCH_MAX);
+  return kinks;
+}
+
+function pressureOnKinks(s: StateModel, front: number, rear: number, z: number, kinks: readonly number[]): number | null {
   if (!(z > 0)) return 0;
   if (rateWithCircuits(s, front, rear, P_SEARCH_MAX) < z) return null;
-  const kinks = [s.threshold1, masterPressureForRear(s.valve, s.threshold2), s.valve.knee]
-    .filter((p) => p > 0 && p < P_SEARCH_MAX)
-    .sort((x, y) => x - y);
-  kinks.push(P_SEARCH_MAX);
   let p0 = 0;
   let r0 = rateWithCircuits(s, front, rear, 0);
   for (const p1 of kinks) {
@@ -223,6 +222,15 @@ export function pressureForRate(s: StateModel, front: number, rear: number, z: n
     r0 = r1;
   }
   return P_SEARCH_MAX; // not reached: the rate at P_SEARCH_MAX is at least z
+}
+
+/**
+ * Smallest master pressure at which the working circuits reach braking rate z, or null when they do not
+ * by 1000 bar. The rate is piecewise linear and non-decreasing in p, with kinks only at the thresholds
+ * and the valve knee, so it is inverted exactly on the piece where it reaches z.
+ */
+export function pressureForRate(s: StateModel, front: number, rear: number, z: number): number | null {
+  return pressureOnKinks(s, front, rear, z, rateKinks(s));
 }
 
 interface Resolved {
@@ -367,6 +375,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
     const cases: TravelCase[] = [];
     const series: TravelSeries[] = [];
     const zTop = Math.min(1, s.loads.zLift);
+    const kinks = rateKinks(s);
     // Service: both circuits, pressure from the installed distribution.
     const pService = forcesAt(s.dist, zService).p;
     const service = travelAt(r, design, circuits, s, zService, pService, null);
@@ -409,7 +418,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
       const front = circuits.filter((c) => c !== lost).reduce((a, c) => a + c.front, 0);
       const rear = circuits.filter((c) => c !== lost).reduce((a, c) => a + c.rear, 0);
       const name = `${lost.id}_circuit_failed`;
-      const p = pressureForRate(s, front, rear, zSecondary);
+      const p = pressureOnKinks(s, front, rear, zSecondary, kinks);
       const point = p === null ? null : travelAt(r, design, circuits, s, zSecondary, p, lost);
       cases.push({
         case: name,
@@ -424,7 +433,7 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
       const fs: TravelSeries = { case: name, braking_rate: [], pedal_travel_mm: [] };
       for (let i = 0; i * SERIES_STEP <= zTop + 1e-9; i++) {
         const z = Math.min(i * SERIES_STEP, zTop);
-        const pz = pressureForRate(s, front, rear, z);
+        const pz = pressureOnKinks(s, front, rear, z, kinks);
         if (pz === null) break;
         fs.braking_rate.push(z);
         fs.pedal_travel_mm.push(pedalTravelMm(r, design, circuits, s, pz, lost));

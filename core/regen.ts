@@ -19,11 +19,11 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
-import { checkCurveRule, curveRulePasses } from './checks/curve-check.ts';
+import { checkCurveRule, type CurveVerdict, curveRulePasses } from './checks/curve-check.ts';
 import { ruleSelection } from './checks/run-checks.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
-import { type Distribution, forcesAt, segments } from './distribution.ts';
+import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
 import { type CurveRule, type RuleStatus, selectRules } from './rules/index.ts';
@@ -99,13 +99,24 @@ export function regenDistribution(friction: Distribution, R: number, frontShare:
   const s = frontShare;
   if (blending.type === 'regen_first') {
     const zr = R / P;
-    const d: Distribution = { P, z: [0, zr], t1: [0, s * R], t2: [0, (1 - s) * R] };
+    // Arrays of their final length (this runs inside the searches for the largest allowed force).
+    let n = 2;
+    for (const zf of friction.z) if (zf > 0) n++;
+    const d: Distribution = { P, z: new Array<number>(n), t1: new Array<number>(n), t2: new Array<number>(n) };
+    d.z[0] = 0;
+    d.t1[0] = 0;
+    d.t2[0] = 0;
+    d.z[1] = zr;
+    d.t1[1] = s * R;
+    d.t2[1] = (1 - s) * R;
+    let i = 2;
     for (let j = 0; j < friction.z.length; j++) {
       const zf = friction.z[j]!;
       if (!(zf > 0)) continue;
-      d.z.push(zr + zf);
-      d.t1.push(s * R + friction.t1[j]!);
-      d.t2.push((1 - s) * R + friction.t2[j]!);
+      d.z[i] = zr + zf;
+      d.t1[i] = s * R + friction.t1[j]!;
+      d.t2[i] = (1 - s) * R + friction.t2[j]!;
+      i++;
     }
     return d;
   }
@@ -262,22 +273,34 @@ export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
   return out;
 }
 
-function curveChecks(rules: readonly CurveRule[], loads: AxleLoadModel, d: Distribution, speed: number | null, R: number): RegenCurveCheck[] {
-  const segs = segments(d);
+/**
+ * The curve verdicts of one load state per regenerative force, each force checked once: the speeds at or
+ * below the base speed share the full force, which the search for the largest passing force tries first.
+ */
+type VerdictMemo = Map<number, Map<CurveRule, CurveVerdict>>;
+
+function verdictsAt(memo: VerdictMemo, rules: readonly CurveRule[], loads: AxleLoadModel, d: Distribution, R: number): Map<CurveRule, CurveVerdict> {
+  let v = memo.get(R);
+  if (!v) {
+    const segs = segments(d);
+    v = new Map(rules.map((rule) => [rule, checkCurveRule(rule, loads, d, segs)]));
+    memo.set(R, v);
+  }
+  return v;
+}
+
+function curveChecks(rules: readonly CurveRule[], verdicts: Map<CurveRule, CurveVerdict>, speed: number | null, R: number): RegenCurveCheck[] {
   return rules.map((rule) => {
-    const v = checkCurveRule(rule, loads, d, segs);
-    return {
-      rule: rule.id,
-      title: rule.title,
-      status: v.status,
-      ...(v.status === 'verified' ? {} : { verify_note: VERIFY_NOTE }),
+    const v = verdicts.get(rule)!;
+    // Object.assign rather than a spread for the optional key: much cheaper on Node 20, same key order.
+    return Object.assign({ rule: rule.id, title: rule.title, status: v.status }, v.status === 'verified' ? {} : { verify_note: VERIFY_NOTE }, {
       speed_kmh: speed,
       regen_force_n: R,
       passed: v.passed,
       branch: v.branch,
       worst_margin: v.worst_margin,
       worst_at_braking_rate: v.worst_at_braking_rate,
-    };
+    });
   });
 }
 
@@ -286,26 +309,31 @@ function maxForcePassing(
   loads: AxleLoadModel,
   friction: Distribution,
   setup: RegenSetup,
+  memo: VerdictMemo,
 ): { force: number | null; basis: RegenStateResult['max_force_basis'] } {
   if (rules.length === 0) return { force: null, basis: 'no_rule_to_keep' };
-  const ok = (R: number) => {
-    const d = regenDistribution(friction, R, setup.frontShare, setup.blending);
-    const segs = segments(d);
-    return rules.every((rule) => curveRulePasses(rule, loads, d, segs));
-  };
-  if (ok(setup.maxForce)) return { force: null, basis: 'full_force_passes' };
+  if (rulesPassWith(rules, loads, friction, setup, memo, setup.maxForce)) return { force: null, basis: 'full_force_passes' };
   let lo = 0;
   let up = setup.maxForce;
   for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
     const mid = (lo + up) / 2;
-    if (ok(mid)) lo = mid;
+    if (rulesPassWith(rules, loads, friction, setup, memo, mid)) lo = mid;
     else up = mid;
   }
   return { force: lo, basis: 'bisection' };
 }
 
-function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange): RegenLock {
-  const l = firstLock(loads, d, k);
+/** Whether every rule passes with regenerative force R (the verdicts already found are reused). */
+function rulesPassWith(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup, memo: VerdictMemo, R: number): boolean {
+  const known = memo.get(R);
+  if (known) return rules.every((rule) => known.get(rule)!.passed);
+  const d = regenDistribution(friction, R, setup.frontShare, setup.blending);
+  const segs = segments(d);
+  return rules.every((rule) => curveRulePasses(rule, loads, d, segs));
+}
+
+function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange, segs: readonly Segment[] = segments(d)): RegenLock {
+  const l = firstLock(loads, d, k, segs);
   return {
     adhesion: k,
     first_axle: l.first_axle,
@@ -327,18 +355,33 @@ export function maxAllowedRegenForce(
   blending: RegenBlendingSpec,
   rule: LockOrderRange,
 ): number | null {
-  const ok = (R: number) => lockRow(loads, regenDistribution(friction, R, frontShare, blending), k, rule).allowed;
+  // A surface outside the rule's range is never judged: every force keeps it allowed.
+  if (lockAllowed(rule, k, 'rear', 0)) return null;
   const hi = k * friction.P;
-  if (!ok(0)) return 0;
-  if (ok(hi)) return null;
+  if (!lockAllowedWith(loads, friction, k, frontShare, blending, rule, 0)) return 0;
+  if (lockAllowedWith(loads, friction, k, frontShare, blending, rule, hi)) return null;
   let lo = 0;
   let up = hi;
   for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
     const mid = (lo + up) / 2;
-    if (ok(mid)) lo = mid;
+    if (lockAllowedWith(loads, friction, k, frontShare, blending, rule, mid)) lo = mid;
     else up = mid;
   }
   return lo;
+}
+
+/** Whether the first lock on surface k is allowed with regenerative force R. */
+function lockAllowedWith(
+  loads: AxleLoadModel,
+  friction: Distribution,
+  k: number,
+  frontShare: number,
+  blending: RegenBlendingSpec,
+  rule: LockOrderRange,
+  R: number,
+): boolean {
+  const l = firstLock(loads, regenDistribution(friction, R, frontShare, blending), k);
+  return lockAllowed(rule, k, l.first_axle, l.braking_rate);
 }
 
 /** Bisections for the largest allowed regenerative force stop within this, N (far below what a controller resolves). */
@@ -347,11 +390,11 @@ export const REGEN_FORCE_TOLERANCE_N = 0.5;
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);
 
 function utilisationSeries(loads: AxleLoadModel, d: Distribution): UtilisationPoint[] {
-  return UTIL_AT.map((z) => {
-    const f = forcesAt(d, z);
+  const f = forcesAlong(d, UTIL_AT); // the same values as forcesAt point by point
+  return UTIL_AT.map((z, i) => {
     const n1 = loads.P1 + z * loads.chi * loads.P;
     const n2 = loads.P2 - z * loads.chi * loads.P;
-    return { braking_rate: z, front_utilisation: n2 > 0 ? f.front / n1 : null, rear_utilisation: n2 > 0 ? f.rear / n2 : null };
+    return { braking_rate: z, front_utilisation: n2 > 0 ? f.front[i]! / n1 : null, rear_utilisation: n2 > 0 ? f.rear[i]! / n2 : null };
   });
 }
 
@@ -362,14 +405,17 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
   const rule = lockOrderRange(design.vehicle.category);
   const flags: RegenFlag[] = [];
   const states: RegenStateResult[] = models.map((m) => {
-    const zero = adhesions.map((k) => lockRow(m.loads, m.dist, k, rule));
+    const zeroSegs = segments(m.dist);
+    const zero = adhesions.map((k) => lockRow(m.loads, m.dist, k, rule, zeroSegs));
     const rules = regenCurveRules(design, m.state.kind);
-    const checks = curveChecks(rules, m.loads, m.dist, null, 0);
+    const memo: VerdictMemo = new Map();
+    const checks = curveChecks(rules, verdictsAt(memo, rules, m.loads, m.dist, 0), null, 0);
     const zeroPassed = new Map(checks.map((c) => [c.rule, c.passed]));
     const atSpeeds = setup.speeds.map((kmh): RegenSpeedCase => {
       const R = regenForceAt(setup, kmh / 3.6);
       const d = regenDistribution(m.dist, R, setup.frontShare, setup.blending);
-      const lock = adhesions.map((k) => lockRow(m.loads, d, k, rule));
+      const segs = segments(d);
+      const lock = adhesions.map((k) => lockRow(m.loads, d, k, rule, segs));
       lock.forEach((l, i) => {
         if (!l.allowed && zero[i]!.allowed) {
           flags.push({
@@ -386,7 +432,7 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
           });
         }
       });
-      for (const c of curveChecks(rules, m.loads, d, kmh, R)) {
+      for (const c of curveChecks(rules, verdictsAt(memo, rules, m.loads, d, R), kmh, R)) {
         checks.push(c);
         if (!c.passed && zeroPassed.get(c.rule)) {
           flags.push({
@@ -403,7 +449,7 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
           });
         }
       }
-      const cr = crossings(m.loads, d);
+      const cr = crossings(m.loads, d, segs);
       const utilisation = utilisationSeries(m.loads, d);
       return {
         speed_kmh: kmh,
@@ -426,7 +472,7 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
       };
     });
     const keep = rules.filter((rl) => zeroPassed.get(rl.id));
-    const best = maxForcePassing(keep, m.loads, m.dist, setup);
+    const best = maxForcePassing(keep, m.loads, m.dist, setup, memo);
     return {
       id: m.state.id,
       zero_regen: { lock: zero, utilisation: utilisationSeries(m.loads, m.dist) },

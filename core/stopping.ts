@@ -18,7 +18,7 @@
 import type { AxleLoadModel } from './axle-loads.ts';
 import { G_N } from './constants.ts';
 import type { Vehicle } from './design.ts';
-import type { Distribution } from './distribution.ts';
+import { type Distribution, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
 
 export const STOPPING_DEFAULTS = {
@@ -86,25 +86,25 @@ export function stoppingTable(
   setup: StoppingSetup,
 ): StopRow[] {
   const rows: StopRow[] = [];
+  const segs = segments(dist);
+  const locks = adhesions.map((k) => firstLock(loads, dist, k, segs)); // the same for every speed
   for (const kmh of setup.speedsKmh) {
     const v0 = kmh / 3.6;
-    for (const k of adhesions) {
-      const lock = firstLock(loads, dist, k);
+    for (const [i, k] of adhesions.entries()) {
+      const lock = locks[i]!;
       const cases: [StopRow['mode'], number, string | null][] = [
         ['no_abs', lock.braking_rate, lock.first_axle],
         ['abs', Math.min(setup.absFactor * k, loads.zLift), null],
       ];
       for (const [mode, z, axle] of cases) {
         const a = z * G_N;
-        rows.push({
-          speed_kmh: kmh,
-          adhesion: k,
-          mode,
-          braking_rate: z,
-          deceleration_ms2: a,
-          first_axle: axle,
-          ...stopDistances(v0, a, setup.reactionS, setup.buildUpS),
-        });
+        // Object.assign rather than a spread: much cheaper on Node 20 for rows built this often.
+        rows.push(
+          Object.assign(
+            { speed_kmh: kmh, adhesion: k, mode, braking_rate: z, deceleration_ms2: a, first_axle: axle },
+            stopDistances(v0, a, setup.reactionS, setup.buildUpS),
+          ),
+        );
       }
     }
   }

@@ -56,3 +56,66 @@ ${jsonScript(dataId, spec)}
 <figcaption>${caption}</figcaption>
 </figure>`;
 }
+
+/**
+ * Drops the points of a polyline that lie on the straight line between their kept neighbours (within `tol` of
+ * the curve's own span on each axis, far below a pixel), so piecewise-linear curves (installed forces, line
+ * pressures, pedal force) travel as their breakpoints instead of a sample per braking rate. Curved parts keep
+ * their points. A null in x or y is a gap and is kept. Pure; returns new arrays.
+ */
+export function simplifyLine(x: ReadonlyArray<number | null>, y: ReadonlyArray<number | null>, tol = 1e-5): { x: (number | null)[]; y: (number | null)[] } {
+  const n = Math.min(x.length, y.length);
+  let xs = 0;
+  let ys = 0;
+  let x0 = Infinity;
+  let y0 = Infinity;
+  for (let i = 0; i < n; i++) {
+    const a = x[i];
+    const b = y[i];
+    if (a === null || b === null || a === undefined || b === undefined) continue;
+    x0 = Math.min(x0, a);
+    y0 = Math.min(y0, b);
+    xs = Math.max(xs, a);
+    ys = Math.max(ys, b);
+  }
+  const sx = Math.max(xs - x0, 1e-12);
+  const sy = Math.max(ys - y0, 1e-12);
+  const ox: (number | null)[] = [];
+  const oy: (number | null)[] = [];
+  const ok = (i: number) => x[i] !== null && y[i] !== null && x[i] !== undefined && y[i] !== undefined;
+  /**
+   * the chord a–j passes within tol (normalised by the spans) of the newest interior point j − 1 and of the
+   * middle one: O(1) per step; every interior point was the newest once, against a shorter chord of the same run
+   */
+  const off = (a: number, j: number, k: number) => {
+    const ax = x[a]! / sx;
+    const ay = y[a]! / sy;
+    const dx = x[j]! / sx - ax;
+    const dy = y[j]! / sy - ay;
+    const px = x[k]! / sx - ax;
+    const py = y[k]! / sy - ay;
+    const len = Math.hypot(dx, dy);
+    return len < 1e-15 ? Math.hypot(px, py) : Math.abs(px * dy - py * dx) / len;
+  };
+  const straight = (a: number, j: number) => off(a, j, j - 1) <= tol && off(a, j, (a + j) >> 1) <= tol;
+  let i = 0;
+  while (i < n) {
+    if (!ok(i)) {
+      ox.push(x[i] ?? null);
+      oy.push(y[i] ?? null);
+      i++;
+      continue;
+    }
+    ox.push(x[i]!);
+    oy.push(y[i]!);
+    // the farthest j of this run such that the chord i–j covers every point between
+    let j = i + 1;
+    if (j < n && ok(j)) while (j + 1 < n && ok(j + 1) && straight(i, j + 1)) j++;
+    if (j < n && ok(j) && j > i + 1) {
+      i = j;
+      continue;
+    }
+    i++;
+  }
+  return { x: ox, y: oy };
+}

@@ -118,3 +118,9 @@ export function blockMessage(ctx: InputContext, path: string): SafeHtml {
   ctx.rendered.add(path);
   return fieldMessage(path, ctx.errors.get(path));
 }
+
+/** Prefixes the problem-list labels of every field under a path ("Load state 2: Vehicle mass"). */
+export function prefixLabels(ctx: InputContext, pathPrefix: string, textPrefix: string): void {
+  if (!ctx.labels) return;
+  for (const [n, l] of ctx.labels) if (n.startsWith(pathPrefix) && !l.startsWith(textPrefix)) ctx.labels.set(n, `${textPrefix}${l}`);
+}

@@ -67,7 +67,19 @@ interface Loads {
   w4: number;
 }
 
+// The products are worked out once per load model (and again should its figures have been changed).
+const loadsCache = new WeakMap<AxleLoadModel, Loads>();
+
 function loadsOf(m: AxleLoadModel): Loads {
+  let L = loadsCache.get(m);
+  if (!L || L.n10 !== m.P1 || L.n20 !== m.P2 || L.n11 !== m.chi * m.P) {
+    L = loadProducts(m);
+    loadsCache.set(m, L);
+  }
+  return L;
+}
+
+function loadProducts(m: AxleLoadModel): Loads {
   const n10 = m.P1;
   const n11 = m.chi * m.P;
   const n20 = m.P2;
@@ -197,6 +209,16 @@ function addRoots(list: number[], n: number): void {
   for (let i = 0; i < n; i++) addOnce(list, roots[i]!);
 }
 
+/** Sorts the few cut points ascending in place (insertion sort: Array.prototype.sort allocates a copy). */
+function sortCuts(): void {
+  for (let i = 1; i < cuts.length; i++) {
+    const x = cuts[i]!;
+    let j = i - 1;
+    for (; j >= 0 && cuts[j]! > x; j--) cuts[j + 1] = cuts[j]!;
+    cuts[j + 1] = x;
+  }
+}
+
 function branchVerdict(branch: Branch, worst: number | null, worstAt: number | null, failing: [number, number][], liftOff: boolean): BranchVerdict {
   const ranges = mergeRanges(failing);
   return {
@@ -209,6 +231,31 @@ function branchVerdict(branch: Branch, worst: number | null, worstAt: number | n
     failing_ranges: ranges,
     lift_off_in_range: liftOff,
   };
+}
+
+/**
+ * Pass/fail shortcut on one segment. Between neighbouring cuts every margin form keeps its sign
+ * (N1, N2 > 0 below lift-off), and so does the margin, so one value per gap tells it: 'fails' when a
+ * gap is below the tolerance, 'holds' when every gap is at or above zero. Otherwise (a gap just below
+ * zero, a gap too short to test, a single point) the full search for the worst margin decides.
+ * Sorts `cuts`.
+ */
+function gapSigns(clauses: readonly MarginForm[][], L: Loads, seg: Segment): 'fails' | 'holds' | 'unsure' {
+  sortCuts();
+  if (cuts.length < 2) return 'unsure';
+  let result: 'holds' | 'unsure' = 'holds';
+  for (let i = 0; i + 1 < cuts.length; i++) {
+    const a = cuts[i]!;
+    const b = cuts[i + 1]!;
+    if (b - a <= 1e-12) {
+      result = 'unsure';
+      continue;
+    }
+    const v = composite(clauses, L, seg, 0.5 * (a + b));
+    if (v < -MARGIN_TOLERANCE) return 'fails';
+    if (v < 0) result = 'unsure';
+  }
+  return result;
 }
 
 /**
@@ -245,6 +292,14 @@ function scanBranch(branch: Branch, m: AxleLoadModel, segs: readonly Segment[], 
         valueNumerator(f, L, seg, coeffs);
         addRoots(cuts, polyRootsInto(coeffs, 4, lo, up, roots));
       }
+      if (stopAtFailure) {
+        const signs = gapSigns(clauses, L, seg);
+        if (signs === 'fails') {
+          failing.push([lo, up]);
+          return branchVerdict(branch, worst, worstAt, failing, liftOff);
+        }
+        if (signs === 'holds') continue;
+      }
       candidates.length = 0;
       for (const z of cuts) candidates.push(z);
       for (const f of forms) {
@@ -263,7 +318,7 @@ function scanBranch(branch: Branch, m: AxleLoadModel, segs: readonly Segment[], 
         }
       }
       if (stopAtFailure && worst !== null && worst < -MARGIN_TOLERANCE) return branchVerdict(branch, worst, worstAt, failing, liftOff);
-      cuts.sort((a, b) => a - b);
+      sortCuts();
       for (let i = 0; i + 1 < cuts.length; i++) {
         const a = cuts[i]!;
         const b = cuts[i + 1]!;

@@ -2,7 +2,7 @@
  * Small real polynomials (coefficients in ascending powers: c0 + c1 z + c2 z² + …) and their real
  * roots on an interval. Roots are isolated exactly: the roots of the derivative split the interval
  * into pieces where the polynomial is monotonic, and each sign change is then bracketed and
- * bisected to machine precision. Used for the curve checks, whose margins are ratios of
+ * refined to machine precision (safeguarded Newton). Used for the curve checks, whose margins are ratios of
  * low-degree polynomials on each linear piece of a distribution.
  */
 
@@ -49,19 +49,67 @@ function evalN(a: ArrayLike<number>, n: number, z: number): number {
   return v;
 }
 
-function bisect(a: ArrayLike<number>, n: number, lo: number, hi: number): number {
-  let flo = evalN(a, n, lo);
+/**
+ * The root of a in [lo, hi], where a changes sign and is monotonic: Newton steps kept inside a
+ * shrinking bracket (a bisection step whenever Newton would leave it), to machine precision.
+ */
+function refineRoot(a: ArrayLike<number>, n: number, lo: number, hi: number): number {
+  const negAtLo = evalN(a, n, lo) < 0;
+  let x = 0.5 * (lo + hi);
   for (let i = 0; i < 200; i++) {
-    const mid = 0.5 * (lo + hi);
-    if (mid <= lo || mid >= hi) break;
-    const fm = evalN(a, n, mid);
-    if (fm === 0) return mid;
-    if (fm < 0 === flo < 0) {
-      lo = mid;
-      flo = fm;
-    } else hi = mid;
+    // value and derivative at x (Horner)
+    let f = 0;
+    let df = 0;
+    for (let j = n - 1; j >= 0; j--) {
+      df = df * x + f;
+      f = f * x + a[j]!;
+    }
+    if (f === 0) return x;
+    if (f < 0 === negAtLo) lo = x;
+    else hi = x;
+    let next = x - f / df;
+    if (!(next > lo && next < hi)) {
+      next = 0.5 * (lo + hi);
+      if (next <= lo || next >= hi) break; // the bracket is two neighbouring doubles
+    }
+    if (next === x) break;
+    x = next;
   }
-  return 0.5 * (lo + hi);
+  return x;
+}
+
+// Pascal's triangle up to degree 8, for the Bernstein coefficients.
+const BINOMIAL: number[][] = [[1]];
+for (let k = 1; k <= 8; k++) BINOMIAL.push(Array.from({ length: k + 1 }, (_, i) => (i === 0 || i === k ? 1 : BINOMIAL[k - 1]![i - 1]! + BINOMIAL[k - 1]![i]!)));
+const shifted = new Float64Array(9);
+
+/**
+ * True when a (its first n coefficients, degree ≤ 8) stays more than `margin` away from zero on
+ * [lo, hi]: on the interval a polynomial lies between the smallest and the largest of its Bernstein
+ * coefficients, so it is enough that all of them exceed margin, or all lie below −margin.
+ */
+function clearOfZero(a: ArrayLike<number>, n: number, lo: number, hi: number, margin: number): boolean {
+  const h = hi - lo;
+  if (n > 9 || !Number.isFinite(lo) || !Number.isFinite(h)) return false;
+  const q = shifted;
+  for (let i = 0; i < n; i++) q[i] = a[i]!;
+  // coefficients of a(lo + t) (repeated synthetic division), then of a(lo + h s), s in [0, 1]
+  for (let i = 0; i < n - 1; i++) for (let j = n - 2; j >= i; j--) q[j]! += lo * q[j + 1]!;
+  let hp = 1;
+  for (let i = 0; i < n; i++) {
+    q[i]! *= hp;
+    hp *= h;
+  }
+  const d = n - 1;
+  let min = Infinity;
+  let max = -Infinity;
+  for (let k = 0; k <= d; k++) {
+    let b = 0;
+    for (let i = 0; i <= k; i++) b += (BINOMIAL[k]![i]! / BINOMIAL[d]![i]!) * q[i]!;
+    min = Math.min(min, b);
+    max = Math.max(max, b);
+  }
+  return min > margin || max < -margin;
 }
 
 // Work space per polynomial length n (each level of the recursion has its own n, one less than its
@@ -85,6 +133,13 @@ export function polyRootsInto(a: ArrayLike<number>, length: number, lo: number, 
     }
     return 0;
   }
+  let scale = 0;
+  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(a[i]!));
+  scale *= 1e-13;
+  // Most polynomials have no root in the interval: when the polynomial keeps well clear of zero there
+  // (ten times the near-zero tolerance below, far above the rounding of the test), nothing is found
+  // below either, so the search is skipped.
+  if (clearOfZero(a, n, lo, hi, 10 * scale * Math.max(1, Math.max(Math.abs(lo), Math.abs(hi)) ** (n - 1)))) return 0;
   const deriv = (derivBuf[n] ??= new Float64Array(n - 1));
   for (let i = 1; i < n; i++) deriv[i - 1] = a[i]! * i;
   const crit = (critBuf[n] ??= new Float64Array(n - 1));
@@ -95,25 +150,21 @@ export function polyRootsInto(a: ArrayLike<number>, length: number, lo: number, 
   edges[nEdges++] = lo;
   for (let i = 0; i < nCrit; i++) if (crit[i]! > lo && crit[i]! < hi) edges[nEdges++] = crit[i]!;
   edges[nEdges++] = hi;
-  let scale = 0;
-  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(a[i]!));
-  scale *= 1e-13;
   // Roots come out ascending (each lies in its own piece); one within 1e-13 of the previous candidate is dropped.
   let count = 0;
   let prev = NaN;
+  let f0 = evalN(a, n, lo);
   for (let i = 0; i < nEdges; i++) {
     const x0 = edges[i]!;
-    const f0 = evalN(a, n, x0);
+    const f1 = i + 1 < nEdges ? evalN(a, n, edges[i + 1]!) : NaN;
     let r = NaN;
     if (Math.abs(f0) <= scale * Math.max(1, Math.abs(x0) ** (n - 1))) r = x0;
-    else if (i + 1 < nEdges) {
-      const f1 = evalN(a, n, edges[i + 1]!);
-      if (f0 < 0 !== f1 < 0 && f1 !== 0) r = bisect(a, n, x0, edges[i + 1]!);
-    }
+    else if (i + 1 < nEdges && f0 < 0 !== f1 < 0 && f1 !== 0) r = refineRoot(a, n, x0, edges[i + 1]!);
     if (!Number.isNaN(r)) {
       if (count === 0 || r - prev > 1e-13) out[count++] = r;
       prev = r;
     }
+    f0 = f1;
   }
   return count;
 }

@@ -32,6 +32,7 @@ import {
 } from '../forms/design-form.ts';
 import { sendHtml } from '../html-reply.ts';
 import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
+import { ResponseCache, sendCached } from '../response-cache.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
@@ -118,12 +119,12 @@ export function update(posted: FormValues): UpdateOutcome {
  * typed back, a unit switch and back), and the engine is pure, so the same design gives the same fragment.
  */
 const CACHE_SIZE = 32;
-function lru<V>(cache: Map<string, V>, key: string, make: () => V): V {
+function lru<V>(cache: Map<string, V>, key: string, make: () => V, size = CACHE_SIZE): V {
   let v = cache.get(key);
   if (v !== undefined) cache.delete(key); // most recently used goes last
   else {
     v = make();
-    if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value!);
+    if (cache.size >= size) cache.delete(cache.keys().next().value!);
   }
   cache.set(key, v);
   return v;
@@ -132,10 +133,24 @@ const viewCache = new Map<string, ValidView>();
 const resultsCache = new Map<string, SafeHtml>();
 /** The evaluation of a design, shared by the recompute and the deferred panels of the same design. */
 export function cachedView(design: DesignFile, warnings: Warning[]): ValidView {
-  return lru(viewCache, JSON.stringify(design), () => view(design, warnings));
+  // few: an evaluation with its curves is a large object graph (garbage-collection work); the deferred panels
+  // ask for the design of the latest recompute
+  return lru(viewCache, JSON.stringify(design), () => view(design, warnings), 8);
 }
 export function cachedResults(design: DesignFile, warnings: Warning[], units: UnitSystem): SafeHtml {
   return lru(resultsCache, `${units}|${JSON.stringify(design)}`, () => resultsSection(cachedView(design, warnings), units, true));
+}
+
+/**
+ * Rendered answers of the recompute and of the deferred panels, by the whole posted form (server/response-cache.ts).
+ * An upload (up to 512 KiB of text) is answered but not kept.
+ */
+export const answers = new ResponseCache(200);
+const CACHE_SOURCE_LIMIT = 64 * 1024;
+function cacheSource(route: string, posted: FormValues): string {
+  if (posted._upload !== undefined) return '';
+  const s = `${route}\n${JSON.stringify(Object.entries(posted))}`;
+  return s.length > CACHE_SOURCE_LIMIT ? '' : s;
 }
 
 function slug(name: string): string {
@@ -160,20 +175,26 @@ export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
   });
 
   app.post('/workbench/update', async (req, reply) => {
-    const out = update(formValues(req.body));
+    const posted = formValues(req.body);
+    const out = answers.answer(cacheSource('update', posted), () => update(posted));
     reply.header('cache-control', 'no-store');
-    return sendHtml(reply, out.body, out.status);
+    return sendCached(req, reply, out);
   });
 
   // a deferred result panel (views/panels/panel.ts `deferred`) for the current form
   app.post<{ Params: { id: string } }>('/workbench/panel/:id', async (req, reply) => {
     const panel = panels.find((p) => p.id === req.params.id && p.results && p.deferred);
     if (!panel) throw appErrors.notFound(`/workbench/panel/${req.params.id.slice(0, 60)}`);
-    const r = validFromRequest(req);
+    const posted = formValues(req.body);
     reply.header('cache-control', 'no-store');
-    if (!r.ok) return sendHtml(reply, html`<div class="deferred" id="deferred-${panel.id}"><p class="hint">Not current: fix the marked inputs to see this section.</p></div>`, 422);
-    const v = cachedView(r.design, r.warnings);
-    return sendHtml(reply, html`<div class="deferred-body">${panel.results!({ design: v.design, result: v.result, units: r.units, warnings: v.warnings })}</div>`);
+    const out = answers.answer(cacheSource(`panel:${panel.id}`, posted), () => {
+      const r = validFromRequest(req);
+      if (!r.ok) return { status: 422, body: html`<div class="deferred" id="deferred-${panel.id}"><p class="hint">Not current: fix the marked inputs to see this section.</p></div>` };
+      const v = cachedView(r.design, r.warnings);
+      const controls = Object.fromEntries(Object.entries(posted).filter(([k]) => k.startsWith('_') && !CONTROL.has(k)));
+      return { status: 200, body: html`<div class="deferred loaded" id="deferred-${panel.id}"><div class="deferred-body">${panel.results!({ design: v.design, result: v.result, units: r.units, warnings: v.warnings, controls })}</div></div>` };
+    });
+    return sendCached(req, reply, out);
   });
 
   app.post('/workbench/design.json', async (req, reply) => {

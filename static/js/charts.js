@@ -11,17 +11,35 @@
     toImageButtonOptions: { format: 'png', scale: 2 },
   };
 
+  // htmx removes every <script> from a swapped answer (allowScriptTags: false, views/layout.ts), the JSON data
+  // blocks too. So the data blocks of each answer are read from its text before the swap, with DOMParser (which
+  // never runs anything), and kept here by id for the charts the swap brings in.
+  var specs = {};
+  document.addEventListener('htmx:beforeSwap', function (ev) {
+    var text = ev.detail && ev.detail.serverResponse;
+    if (typeof text !== 'string' || text.indexOf('application/json') < 0) return;
+    var doc = new DOMParser().parseFromString('<body>' + text + '</body>', 'text/html');
+    Array.prototype.forEach.call(doc.querySelectorAll('script[type="application/json"][id]'), function (s) {
+      specs[s.id] = s.textContent;
+    });
+  });
+  function specText(id) {
+    var src = document.getElementById(id);
+    if (src && src.tagName === 'SCRIPT') return src.textContent;
+    return Object.prototype.hasOwnProperty.call(specs, id) ? specs[id] : null;
+  }
+
   function drawAll(root) {
     if (!window.Plotly) return;
     var scope = root && root.querySelectorAll ? root : document;
     var els = Array.prototype.slice.call(scope.querySelectorAll('div.chart[data-chart]'));
     if (scope.matches && scope.matches('div.chart[data-chart]')) els.push(scope);
     els.forEach(function (el) {
-      var src = document.getElementById(el.getAttribute('data-chart'));
-      if (!src) return;
+      var text = specText(el.getAttribute('data-chart'));
+      if (text === null) return;
       var spec;
       try {
-        spec = JSON.parse(src.textContent);
+        spec = JSON.parse(text);
       } catch (e) {
         el.textContent = 'Chart data could not be read.';
         return;

@@ -35,6 +35,26 @@
     el.textContent = text;
   }
 
+  // deferred result panels (views/pages/workbench.ts deferredSlot): a recompute replaces #results with
+  // placeholders that load each panel for the new design when it is in view. Until the new answer arrives, the
+  // panel's previous results stay inside the placeholder, dimmed and marked "not current" (CSS .deferred .stale),
+  // so the page does not jump and nothing old is shown unmarked. Existing nodes are moved; no HTML is built here.
+  document.body.addEventListener('htmx:oobBeforeSwap', function (ev) {
+    var frag = ev.detail && ev.detail.fragment;
+    if (!frag || !frag.querySelectorAll) return;
+    Array.prototype.forEach.call(frag.querySelectorAll('.deferred[id]'), function (slot) {
+      var old = document.getElementById(slot.id);
+      var body = old && (old.querySelector(':scope > .deferred-body') || old.querySelector(':scope > .stale'));
+      if (!body) return;
+      body.classList.remove('deferred-body');
+      body.classList.add('stale');
+      body.setAttribute('aria-hidden', 'true');
+      body.setAttribute('inert', '');
+      Array.prototype.forEach.call(body.querySelectorAll('[id]'), function (el) { el.removeAttribute('id'); });
+      slot.appendChild(body);
+    });
+  });
+
   form.addEventListener('input', save);
   form.addEventListener('change', save);
   document.body.addEventListener('htmx:afterSettle', save);

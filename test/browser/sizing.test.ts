@@ -33,6 +33,8 @@ beforeAll(async () => {
     if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
   });
   await page.goto(`${base}/?fresh`);
+  // the sizing panel is deferred: it is computed when it is in view (views/pages/workbench.ts deferredSlot)
+  await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
   await page.waitForSelector('#chart-sizing-band .chart[data-drawn]', { timeout: 30000 });
 }, 90000);
 
@@ -46,6 +48,10 @@ const REAR = '#f-axles-rear-brake-piston_diameters_mm-0-';
 
 describe('sizing panel in chromium', { timeout: 60000 }, () => {
   it('draws the band chart and the robustness histogram', async () => {
+    // the Monte Carlo runs on request only
+    expect(await page.$('#chart-sizing-histogram')).toBeNull();
+    await page.click('#panel-sizing button.run-robust');
+    await page.waitForSelector('#chart-sizing-histogram .chart[data-drawn]', { timeout: 30000 });
     expect(await page.getAttribute('#chart-sizing-histogram .chart', 'data-drawn')).not.toBeNull();
     expect(await page.textContent('#panel-sizing')).toContain('physical brake testing');
   });
@@ -54,11 +60,13 @@ describe('sizing panel in chromium', { timeout: 60000 }, () => {
     let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.fill(REAR, '70');
     await answer;
-    await page.waitForFunction(() => document.querySelector('#panel-sizing .sum')?.textContent?.includes('(fails'));
+    await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
+    await page.waitForFunction(() => document.querySelector('#panel-sizing .deferred-body .sum')?.textContent?.includes('(fails'));
     answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.click('#panel-sizing table.sizing-options tbody tr:first-child button.apply');
     await answer;
-    await page.waitForFunction(() => document.querySelector('#panel-sizing .sum')?.textContent?.includes('(passes'));
+    await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
+    await page.waitForFunction(() => document.querySelector('#panel-sizing .deferred-body .sum')?.textContent?.includes('(passes'));
     expect(await page.isVisible('button[value^="size:apply:"]:has-text("Undo")')).toBe(true);
     answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.click('button[value^="size:apply:"]:has-text("Undo")');

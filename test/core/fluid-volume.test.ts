@@ -11,6 +11,7 @@ import {
   demoDesign,
   type DesignFile,
   pedalTravel,
+  pressureForRate,
   pushrodTravel,
   readDesign,
   stateModels,
@@ -192,5 +193,36 @@ describe('the demo', () => {
     const t = pedalTravel(d, stateModels(d));
     expect(t.defaults_used).toContain('hardware.pedal_travel_available_mm');
     expect(t.warnings).toEqual([]);
+  });
+});
+
+describe('pressureForRate: smallest master pressure for a braking rate with some circuits working', () => {
+  // hand-derived from zP = f·G1·max(0, p − p_th1) + r·G2·max(0, p2 − p_th2) (design-file spec "Physics"),
+  // p2 = min(p, knee) for a limiting valve; f, r = share of each axle the working circuits feed.
+  const base = simpleDesign();
+  const design: DesignFile = {
+    ...base,
+    axles: {
+      front: { ...base.axles.front, brake: { ...base.axles.front.brake, threshold_pressure_bar: 0.5 } },
+      rear: { ...base.axles.rear, brake: { ...base.axles.rear.brake, threshold_pressure_bar: 2 } },
+    },
+    hydraulics: { ...base.hydraulics, rear_valve: { type: 'limiting', knee_bar: 30 } },
+  };
+  const s = stateModels(design)[0]!;
+  const P = s.loads.P;
+  it('front circuit only: p = p_th1 + zP/G1', () => {
+    expect(pressureForRate(s, 1, 0, 0.3)! / (0.5e5 + (0.3 * P) / s.G1)).toBeCloseTo(1, 12);
+  });
+  it('rear circuit only behind the limiting valve: p = p_th2 + zP/G2 up to the knee, unreachable beyond', () => {
+    const zKnee = (s.G2 * (30e5 - 2e5)) / P;
+    expect(pressureForRate(s, 0, 1, 0.5 * zKnee)! / (2e5 + (0.5 * zKnee * P) / s.G2)).toBeCloseTo(1, 12);
+    expect(pressureForRate(s, 0, 1, 1.01 * zKnee)).toBeNull();
+  });
+  it('both circuits above the knee: the front alone adds rate, p = p_th1 + (zP − G2(knee − p_th2))/G1', () => {
+    const zKnee = (s.G1 * (30e5 - 0.5e5) + s.G2 * (30e5 - 2e5)) / P;
+    const z = zKnee + 0.1;
+    const expected = 0.5e5 + (z * P - s.G2 * (30e5 - 2e5)) / s.G1;
+    expect(pressureForRate(s, 1, 1, z)! / expected).toBeCloseTo(1, 12);
+    expect(pressureForRate(s, 1, 1, 0)).toBe(0);
   });
 });

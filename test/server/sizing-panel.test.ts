@@ -9,6 +9,7 @@ import { demoDesign, type DesignFile, sizeDesign } from '../../core/index.ts';
 import { designToValues, readForm } from '../../server/forms/design-form.ts';
 import { applySizingOp, SIZING_UNDO_FIELD, sizingOp } from '../../server/forms/sizing-apply.ts';
 import { update } from '../../server/routes/workbench.ts';
+import { buildApp } from '../../server/app.ts';
 
 function failing(): DesignFile {
   const d = demoDesign();
@@ -18,13 +19,28 @@ function failing(): DesignFile {
 }
 
 describe('sizing panel', () => {
-  it('shows the band, the options with Apply buttons and the robustness histogram', () => {
+  it('shows the band, the options with Apply buttons and the robustness histogram', async () => {
+    // the panel is deferred: the recompute carries its placeholder, its own request (POST /workbench/panel/sizing)
+    // renders it; the Monte Carlo runs only when the "Run robustness analysis" button posts _robust=1
     const out = update(designToValues(failing(), 'metric'));
-    const body = String(out.body);
-    expect(body).toContain('id="panel-sizing"');
-    expect(body).toContain('chart-sizing-band-data');
-    expect(body).toContain('chart-sizing-histogram-data');
-    expect(body).toMatch(/name="_op" value="size:apply:axles\.(front|rear)\.brake\.piston_diameters_mm=/);
+    expect(String(out.body)).toContain('id="panel-sizing"');
+    expect(String(out.body)).toContain('id="deferred-sizing" hx-post="/workbench/panel/sizing"');
+    const app = buildApp();
+    try {
+      const ask = (extra: Record<string, string>) =>
+        app.inject({ method: 'POST', url: '/workbench/panel/sizing', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: new URLSearchParams({ ...designToValues(failing(), 'metric'), ...extra }).toString() });
+      const plain = await ask({});
+      expect(plain.statusCode).toBe(200);
+      expect(plain.body).toContain('chart-sizing-band-data');
+      expect(plain.body).not.toContain('chart-sizing-histogram-data');
+      expect(plain.body).toContain('Run robustness analysis');
+      const body = (await ask({ _robust: '1' })).body;
+      expect(body).toContain('chart-sizing-band-data');
+      expect(body).toContain('chart-sizing-histogram-data');
+      expect(body).toMatch(/name="_op" value="size:apply:axles\.(front|rear)\.brake\.piston_diameters_mm=/);
+    } finally {
+      await app.close();
+    }
   });
 
   it('Apply writes the recommended part; the design then passes; Undo restores the old value', () => {

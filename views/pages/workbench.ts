@@ -89,9 +89,14 @@ ${panels.filter((p) => p.results).map((p) => html`<section class="panel" id="pan
 </div></div>`;
 }
 
-/** Placeholder of a deferred panel: loads its results for the current form when it scrolls into view. */
+/**
+ * Placeholder of a deferred panel: loads its results for the current form when it is in view, at once when it
+ * already is (every recompute re-sends the placeholders, so a visible deferred panel follows each change).
+ * While it computes, static/js/workbench.js keeps the panel's previous results inside it, dimmed and marked
+ * "not current".
+ */
 export function deferredSlot(id: string): SafeHtml {
-  return html`<div class="deferred" id="deferred-${id}" hx-post="/workbench/panel/${id}" hx-trigger="intersect once" hx-include="#design-form" hx-target="this" hx-swap="outerHTML"><p class="hint">Loading…</p></div>`;
+  return html`<div class="deferred" id="deferred-${id}" hx-post="/workbench/panel/${id}" hx-trigger="intersect once" hx-include="#design-form" hx-target="this" hx-swap="outerHTML" aria-busy="true"><p class="hint computing" role="status">computing… <small>(this section is computed when it is in view)</small></p></div>`;
 }
 
 /** Empty when the results are current; says why not otherwise. */

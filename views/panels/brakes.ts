@@ -1,7 +1,7 @@
 /** Front and rear brakes: tyre radius, disc or drum, and that type's figures. */
 import type { UnitSystem } from '../../core/index.ts';
 import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
-import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
+import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, prefixLabels, selectField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -48,13 +48,15 @@ ${numberField(ctx, `${p}.pad_friction`, 'Pad friction coefficient', { unitText: 
 ${numberField(ctx, `${p}.drum_radius_m`, 'Drum radius')}
 ${numberField(ctx, `${p}.brake_factor`, 'Brake factor C*', { unitText: '–', hint: 'total shoe drag / actuating force; about 2 for leading–trailing shoes' })}`;
   }
-  return html`<fieldset class="axle"><legend>${axle === 'front' ? 'Front axle' : 'Rear axle'}</legend>
+  const out = html`<fieldset class="axle"><legend>${axle === 'front' ? 'Front axle' : 'Rear axle'}</legend>
 ${numberField(ctx, `axles.${axle}.tyre_radius_m`, 'Tyre rolling radius', { hint: 'dynamic radius, loaded' })}
 ${selectField(ctx, `${p}.type`, 'Brake type', [['disc', 'disc'], ['drum', 'drum']], { structural: true })}
 ${fields}
 ${numberField(ctx, `${p}.threshold_pressure_bar`, 'Threshold pressure', { hint: 'line pressure before the brake makes torque' })}
 ${blockMessage(ctx, p)}
 </fieldset>`;
+  prefixLabels(ctx, `axles.${axle}.`, axle === 'front' ? 'Front axle: ' : 'Rear axle: ');
+  return out;
 }
 
 export const brakesPanel: Panel = {

@@ -4,7 +4,7 @@
  * ideal/installed differ by line style, so the charts read in grey print too.
  */
 import { DEFAULT_AT, type LoadStateResult, PA_PER_BAR } from '../../core/index.ts';
-import { baseLayout, chartBlock, type ChartSpec, plotText, seriesStyle } from '../chart.ts';
+import { baseLayout, chartBlock, type ChartSpec, plotText, seriesStyle, simplifyLine } from '../chart.ts';
 import { pedalUnit, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
@@ -13,6 +13,14 @@ import type { Panel, ResultContext } from './panel.ts';
 const r4 = (v: number | null) => (v === null ? null : Math.round(v * 1e3) / 1e3);
 const r1 = (v: number | null) => (v === null ? null : Math.round(v * 10) / 10);
 const round = (a: ReadonlyArray<number | null>) => a.map(r4);
+/**
+ * x and y of a line trace: straight runs reduced to their end points (views/chart.ts simplifyLine; the installed
+ * curves, pressures and pedal force are piecewise linear in z), then rounded for plotting.
+ */
+function xy(x: ReadonlyArray<number | null>, y: ReadonlyArray<number | null>, rx = r4, ry = r4): { x: (number | null)[]; y: (number | null)[] } {
+  const s = simplifyLine(x, y);
+  return { x: s.x.map(rx), y: s.y.map(ry) };
+}
 
 /** Sparse markers at z = 0.1 … 1.0 on a curve, so each load state keeps its symbol in print. */
 function markerTrace(i: number, x: (number | null)[], y: (number | null)[], group: string, yaxis?: string): unknown {
@@ -45,8 +53,8 @@ export function chartA(ctx: ResultContext): ChartSpec {
     const st = seriesStyle(i);
     const g = `a${i}`;
     const name = plotText(s.label);
-    data.push({ type: 'scatter', mode: 'lines', name: `Ideal – ${name}`, legendgroup: g, x: round(c.ideal_front_per_weight), y: round(c.ideal_rear_per_weight), line: { color: st.colour, width: 2, dash: 'dot' }, hovertemplate: 'ideal: front %{x:.3f}, rear %{y:.3f}<extra></extra>' });
-    data.push({ type: 'scatter', mode: 'lines', name: `Installed – ${name}`, legendgroup: g, x: round(c.front_force_per_weight), y: round(c.rear_force_per_weight), line: { color: st.colour, width: 2.5 }, hovertemplate: 'installed: front %{x:.3f}, rear %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `Ideal – ${name}`, legendgroup: g, ...xy(c.ideal_front_per_weight, c.ideal_rear_per_weight), line: { color: st.colour, width: 2, dash: 'dot' }, hovertemplate: 'ideal: front %{x:.3f}, rear %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `Installed – ${name}`, legendgroup: g, ...xy(c.front_force_per_weight, c.rear_force_per_weight), line: { color: st.colour, width: 2.5 }, hovertemplate: 'installed: front %{x:.3f}, rear %{y:.3f}<extra></extra>' });
     const k = atGrid(s);
     data.push(markerTrace(i, k.map((j) => r4(c.front_force_per_weight[j]!)), k.map((j) => r4(c.rear_force_per_weight[j]!)), g));
     for (const v of [...c.ideal_front_per_weight, ...c.front_force_per_weight]) xMax = Math.max(xMax, v);
@@ -115,8 +123,8 @@ export function chartB(ctx: ResultContext): ChartSpec {
     const st = seriesStyle(i);
     const g = `b${i}`;
     const name = plotText(s.label);
-    data.push({ type: 'scatter', mode: 'lines', name: `f1 front – ${name}`, legendgroup: g, x: round(c.braking_rate), y: round(c.front_utilisation), line: { color: st.colour, width: 2.5 }, hovertemplate: 'z %{x:.2f}: f1 = %{y:.3f}<extra></extra>' });
-    data.push({ type: 'scatter', mode: 'lines', name: `f2 rear – ${name}`, legendgroup: g, x: round(c.braking_rate), y: round(c.rear_utilisation), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: 'z %{x:.2f}: f2 = %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `f1 front – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_utilisation), line: { color: st.colour, width: 2.5 }, hovertemplate: 'z %{x:.2f}: f1 = %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `f2 rear – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_utilisation), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: 'z %{x:.2f}: f2 = %{y:.3f}<extra></extra>' });
     const k = atGrid(s);
     data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r4(c.front_utilisation[j] ?? null)), g));
   });
@@ -136,10 +144,9 @@ export function chartC(ctx: ResultContext): ChartSpec {
     const st = seriesStyle(i);
     const g = `c${i}`;
     const name = plotText(s.label);
-    const p = (a: number[]) => a.map((v) => r1(pu.from(v * PA_PER_BAR)));
-    data.push({ type: 'scatter', mode: 'lines', name: `front pressure – ${name}`, legendgroup: g, x: round(c.braking_rate), y: p(c.front_pressure_bar), line: { color: st.colour, width: 2.5 }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
-    data.push({ type: 'scatter', mode: 'lines', name: `rear pressure – ${name}`, legendgroup: g, x: round(c.braking_rate), y: p(c.rear_pressure_bar), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
-    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, x: round(c.braking_rate), y: c.pedal_force_n.map((v) => r1(fu.from(v))), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.2f}: %{y:.0f} ${fu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `front pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_pressure_bar, r4, (v) => r1(v === null ? null : pu.from(v * PA_PER_BAR))), line: { color: st.colour, width: 2.5 }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `rear pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_pressure_bar, r4, (v) => r1(v === null ? null : pu.from(v * PA_PER_BAR))), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.pedal_force_n, r4, (v) => r1(v === null ? null : fu.from(v))), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.2f}: %{y:.0f} ${fu.label}<extra></extra>` });
     const k = atGrid(s);
     data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r1(pu.from(c.front_pressure_bar[j]! * PA_PER_BAR))), g));
   });

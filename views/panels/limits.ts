@@ -300,5 +300,5 @@ ${numberField(ctx, 'tester.pedal_force_limit_n', 'Pedal force applied at most', 
 }
 
 /** Results beside the verdict; the inputs are a panel of their own so that each section id stays unique. */
-export const limitsPanel: Panel = { id: 'limits', title: 'Limits: traction, regeneration, stopping, tester, heat', results: limitsResults };
+export const limitsPanel: Panel = { id: 'limits', title: 'Limits: traction, regeneration, stopping, tester, heat', results: limitsResults, deferred: true };
 export const limitsInputsPanel: Panel = { id: 'limits-inputs', title: 'Limits: optional inputs', inputs: limitsInputs };

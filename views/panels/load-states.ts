@@ -1,5 +1,5 @@
 /** Load states: one row each (mass, front axle load, CG height); add, duplicate, remove. */
-import { blockMessage, listButton, listIndicesOf, numberField, selectField, textField } from '../fields.ts';
+import { blockMessage, listButton, listIndicesOf, numberField, prefixLabels, selectField, textField } from '../fields.ts';
 import { html } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -13,7 +13,7 @@ export const loadStatesPanel: Panel = {
     const rows = idx.map((i) => {
       const p = `load_states[${i}]`;
       const n = i + 1;
-      return html`<fieldset class="state"><legend><span class="swatch s${i % 8}" aria-hidden="true"></span> Load state ${n}</legend>
+      const row = html`<fieldset class="state"><legend><span class="swatch s${i % 8}" aria-hidden="true"></span> Load state ${n}</legend>
 <div class="state-grid">
 ${textField(ctx, `${p}.label`, 'Description', { width: 'l' })}
 ${selectField(ctx, `${p}.kind`, 'Kind', [['unladen', 'unladen'], ['laden', 'laden'], ['other', 'other']])}
@@ -24,6 +24,8 @@ ${numberField(ctx, `${p}.cg_height_m`, 'CG height', { width: 's', hint: 'above t
 </div>
 <p class="acts">${listButton(`dup:load_states[${i}]`, 'Duplicate', `Duplicate load state ${n}`, idx.length >= MAX_STATES)} ${listButton(`remove:load_states[${i}]`, 'Remove', `Remove load state ${n}`, idx.length <= 1)}</p>
 </fieldset>`;
+      prefixLabels(ctx, `${p}.`, `Load state ${n}: `);
+      return row;
     });
     return html`<p class="hint">Weigh each axle on a weighbridge for every load state you want checked. The regulation checks need one <em>unladen</em> and one <em>laden</em> state.</p>
 ${rows}

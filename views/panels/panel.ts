@@ -16,6 +16,11 @@ export interface ResultContext {
   result: EvaluationResult;
   units: UnitSystem;
   warnings: Warning[];
+  /**
+   * Page controls posted with a deferred panel's own request (names starting with `_`, e.g. `_robust` from the
+   * sizing panel's "Run robustness analysis" button); absent in the recompute.
+   */
+  controls?: Readonly<Record<string, string>>;
 }
 
 export interface Panel {

@@ -4,7 +4,8 @@
  * bore, the rear-valve margin map when no fixed split works, the balance-bar setting, and the robustness
  * histogram. "Apply" posts the form with `_op = size:apply:<path>=<value>` (server/forms/sizing-apply.ts);
  * the inputs panel then offers "Undo", which applies the replaced value again.
- * The page runs the Monte Carlo with PAGE_SAMPLES samples; `lockstep size` defaults to 100 000.
+ * Deferred (computed when in view). The page runs the Monte Carlo with PAGE_SAMPLES samples, only when the
+ * "Run robustness analysis" button asks for it; `lockstep size` defaults to 100 000.
  */
 import { CAUTION, type SizingResult, sizeDesign, VERIFY_NOTE } from '../../core/index.ts';
 import { sizingOp, SIZING_UNDO_FIELD } from '../../server/forms/sizing-apply.ts';
@@ -116,9 +117,30 @@ function barSection(r: SizingResult): SafeHtml {
 <p class="warn">${b.warning}</p>`;
 }
 
-export function sizingResults(ctx: ResultContext): SafeHtml {
-  const r = sizeDesign(ctx.design, { samples: PAGE_SAMPLES, seed: PAGE_SEED });
+/** Control posted by the "Run robustness analysis" button (views/panels/panel.ts `controls`). */
+export const ROBUST_CONTROL = '_robust';
+
+/**
+ * The robustness part: the Monte Carlo runs only when asked for with the button (a deferred request of this panel
+ * with `_robust=1`); each change of the design renders the panel again without it, so no old figures stay.
+ */
+function robustnessSection(r: SizingResult, asked: boolean): SafeHtml {
+  if (!asked) {
+    return html`<h3>Robustness</h3>
+<p>How often a rule fails when pad friction, CG height, axle load and tyre radius stray within their tolerances: ${PAGE_SAMPLES} perturbed vehicles, worst corner and sensitivity. Computed on request for the design as it is now.</p>
+<p><button type="button" class="secondary run-robust" hx-post="/workbench/panel/sizing" hx-include="#design-form" hx-vals='{"${ROBUST_CONTROL}": "1"}' hx-target="#deferred-sizing" hx-swap="outerHTML">Run robustness analysis</button></p>`;
+  }
   const rb = r.robustness;
+  return html`<h3>Robustness</h3>
+<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ?? '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
+${chartBlock('chart-sizing-histogram', histogram(r), html`Red line: margin 0 (below it a rule fails); dotted: 5th percentile.`, 'Histogram of the smallest margin over the perturbed vehicles')}
+<div class="scroll"><table><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
+<tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.input}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>`;
+}
+
+export function sizingResults(ctx: ResultContext): SafeHtml {
+  const asked = ctx.controls?.[ROBUST_CONTROL] === '1';
+  const r = sizeDesign(ctx.design, { samples: asked ? PAGE_SAMPLES : 0, seed: PAGE_SEED });
   return html`<p class="sum"><strong>${r.band ? `Fixed splits from ${pct(r.band.min_front_share)} to ${pct(r.band.max_front_share)} pass every rule in every load state.` : 'No fixed split passes every rule in every load state: the band is empty.'}</strong>
 Now ${pct(r.current_front_share)} at low pressure (${r.current.passes ? 'passes' : 'fails'}, smallest margin ${signed(r.current.smallest_margin)}); recommended ${pct(r.recommended_front_share)}.</p>
 ${chartBlock('chart-sizing-band', bandChart(r), html`Blue bars: front shares that pass each rule in each load state (fixed split, thresholds and valves left out). Green: the common band. Dashed: this design's share at low pressure; solid black: the recommended share (largest smallest margin).`, 'Bars of passing front shares per rule and load state with the common band')}
@@ -126,11 +148,7 @@ ${optionsTable(r)}
 ${boreSection(r)}
 ${valveSection(r)}
 ${barSection(r)}
-<h3>Robustness</h3>
-<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ?? '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
-${chartBlock('chart-sizing-histogram', histogram(r), html`Red line: margin 0 (below it a rule fails); dotted: 5th percentile.`, 'Histogram of the smallest margin over the perturbed vehicles')}
-<div class="scroll"><table><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
-<tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.input}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>
+${robustnessSection(r, asked)}
 ${r.messages.map((m) => html`<p class="hint">${m}</p>`)}
 ${r.verify_note ? html`<p class="verify">Rules partly verified or from memory: ${VERIFY_NOTE}.</p>` : ''}
 <p class="caution">${CAUTION}</p>`;
@@ -168,4 +186,4 @@ ${selectField(ctx, `${T}.distribution`, 'Distribution inside the ± limits', [
 }
 
 export const sizingInputsPanel: Panel = { id: 'sizing-inputs', title: 'Sizing: tolerances', inputs: sizingInputs };
-export const sizingPanel: Panel = { id: 'sizing', title: 'Sizing assistant', results: sizingResults };
+export const sizingPanel: Panel = { id: 'sizing', title: 'Sizing assistant', results: sizingResults, deferred: true };

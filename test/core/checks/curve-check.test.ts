@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { frontAxleLoad, rearAxleLoad } from '../../../core/axle-loads.ts';
-import { checkBranch, checkCurveRule } from '../../../core/checks/curve-check.ts';
+import { checkBranch, checkCurveRule, curveRulePasses } from '../../../core/checks/curve-check.ts';
 import { forcesAt, type Distribution } from '../../../core/distribution.ts';
 import { euAppendix, M1_LOCK_BRANCHES, N1_LOCK_BRANCHES } from '../../../core/rules/eu-appendix.ts';
 import type { Branch, CurveRule } from '../../../core/rules/rule-types.ts';
@@ -90,5 +90,39 @@ describe('checkBranch: exact per piece, cross-checked by a dense scan', () => {
     expect(v.passed).toBe(true);
     expect(Math.abs(v.worst_margin!)).toBeLessThan(1e-12);
     expect(P).toBeGreaterThan(0);
+  });
+});
+
+describe('curveRulePasses: the pass/fail shortcut gives the verdict of the full check', () => {
+  const rules = euAppendix.rules.filter((r): r is CurveRule => r.kind === 'curve');
+
+  it('property: equals checkCurveRule(...).passed on random two-piece distributions', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.35, max: 0.65, noNaN: true }),
+        fc.double({ min: 0.1, max: 0.35, noNaN: true }),
+        fc.double({ min: 0.2, max: 0.8, noNaN: true }),
+        fc.double({ min: 0.0, max: 1.0, noNaN: true }),
+        fc.double({ min: 0.35, max: 0.8, noNaN: true }),
+        fc.integer({ min: 0, max: rules.length - 1 }),
+        (psi, chi, zk, rearSlope, phi, ri) => {
+          const m = axleLoadModel(1000, 1000 * psi, chi * 2.5, 2.5);
+          const t2k = (1 - phi) * zk * m.P;
+          const d: Distribution = { P: m.P, z: [0, zk, 1], t1: [0, phi * zk * m.P, m.P - t2k - rearSlope * (1 - zk) * m.P], t2: [0, t2k, t2k + rearSlope * (1 - zk) * m.P] };
+          const rule = rules[ri]!;
+          expect(curveRulePasses(rule, m, d)).toBe(checkCurveRule(rule, m, d).passed);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it('agrees on both sides of the N1 lock-order edge of a fixed split (φ 0.536 passes, 0.535 fails; eu-appendix tests, hand-derived)', () => {
+    const lockN1 = rules.find((r) => r.id === 'eu-appendix/lock-order' && r.categories.includes('N1'))!;
+    for (const phi of [0.535, 0.536, 0.5355, 0.6, 0.4]) {
+      expect(curveRulePasses(lockN1, loads, fixedSplit(phi))).toBe(checkCurveRule(lockN1, loads, fixedSplit(phi)).passed);
+    }
+    expect(curveRulePasses(lockN1, loads, fixedSplit(0.536))).toBe(true);
+    expect(curveRulePasses(lockN1, loads, fixedSplit(0.535))).toBe(false);
   });
 });

@@ -281,13 +281,25 @@ function prune(v: unknown): unknown {
 const TRUE_WORDS = new Set(['true', 'on', '1', 'yes']);
 
 /** Form values -> the object to validate, plus the fields whose text could not be read as a number. */
+/** parseFieldPath for the form reader, kept per field name (the same names come with every recompute); read-only. */
+const pathCache = new Map<string, readonly PathKey[]>();
+function pathOf(name: string): readonly PathKey[] {
+  let p = pathCache.get(name);
+  if (p === undefined) {
+    p = Object.freeze(parseFieldPath(name));
+    if (pathCache.size >= 5000) pathCache.clear();
+    pathCache.set(name, p);
+  }
+  return p;
+}
+
 export function valuesToInput(values: FormValues, units: UnitSystem): { input: Record<string, unknown>; errors: FieldIssue[] } {
   const input: Record<string, unknown> = {};
   const errors: FieldIssue[] = [];
   const exact = exactOf(values);
   for (const [name, text] of Object.entries(values)) {
     if (name.startsWith('_')) continue;
-    const path = parseFieldPath(name);
+    const path = pathOf(name);
     if (path.length === 0) continue;
     const kind = kindOfField(name);
     const t = text.trim();

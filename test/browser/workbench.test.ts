@@ -75,6 +75,11 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
     expect(after).not.toBe(before.verdict);
     expect(after).toContain('rear axle locks first');
     expect(await drawn('chart-b')).not.toBe(before.b);
+    // the redrawn charts hold plotted traces again (not an emptied container with a new counter)
+    for (const id of ['chart-a', 'chart-b', 'chart-c']) {
+      expect(await drawn(id)).not.toBeNull();
+      expect(await page.locator(`#${id} .chart .scatterlayer .trace`).count()).toBeGreaterThan(1);
+    }
     await typeInto('#f-axles-rear-brake-piston_diameters_mm-0-', '48');
     await page.waitForFunction(() => document.querySelector('#verdict-1')?.textContent?.includes('front axle locks first on every surface'));
   });

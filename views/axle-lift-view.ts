@@ -1,9 +1,16 @@
 /**
- * The axle-lift tool of the conversion panel: a form that posts a `lockstep-axle-lift/1` file
- * (docs/axle-lift.md) to POST /workbench/cg-lift, and the fragment that answers it.
+ * The axle-lift tool of the conversion panel: a form for the workshop readings (fields named `lift.<file path>`,
+ * server/forms/axle-lift-form.ts) that posts to POST /workbench/cg-lift, and the block that answers it: the form
+ * again with every typed value and the problems marked, then the result (CG height, standard uncertainty, budget
+ * with the largest contributor, warnings) and one "Apply to load state" button per load state of the design.
+ * The block (#cg-lift) is kept across recomputes of the results by static/js/workbench.js, so what was typed here
+ * survives a change in the design form. Pasting a `lockstep-axle-lift/1` file is offered as a second way.
  */
-import { type AxleLiftResultFile, CAUTION, type FieldIssue } from '../core/index.ts';
-import { fixed } from './format.ts';
+import { type AxleLiftResultFile, CAUTION, type FieldIssue, type UnitSystem } from '../core/index.ts';
+import { cgLiftOp, LIFT_UNITS_FIELD, MAX_LIFTS } from '../server/forms/axle-lift-form.ts';
+import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../server/forms/design-form.ts';
+import { type InputContext, numberField, selectField } from './fields.ts';
+import { fixed, shownUnit } from './format.ts';
 import { html, type SafeHtml } from './html.ts';
 
 const SOURCE_WORDS: Record<string, string> = {
@@ -14,22 +21,77 @@ const SOURCE_WORDS: Record<string, string> = {
   wheel_centre_height: 'wheel-centre height',
 };
 
-const PLACEHOLDER = `{
-  "format": "lockstep-axle-lift/1",
-  "wheelbase_m": …, "wheel_centre_height_m": …,
-  "level": { "front_axle_kg": …, "rear_axle_kg": … },
-  "lifts": [ { "raised_axle": "rear", "lift_height_m": …, "front_axle_kg": … },
-             { "raised_axle": "front", "lift_height_m": …, "rear_axle_kg": … } ],
-  "scale_resolution_kg": …, "lift_height_uncertainty_m": …, "wheelbase_uncertainty_m": …
-}`;
+const AXLES = [['front', 'front'], ['rear', 'rear']] as const;
 
-export function axleLiftForm(): SafeHtml {
-  return html`<form class="cg-lift" hx-post="/workbench/cg-lift" hx-target="#cg-lift-result" hx-swap="innerHTML" aria-label="CG height by axle lift">
-<label for="cg-lift-input">Axle-lift readings (a <code>lockstep-axle-lift/1</code> file: lengths in m, masses in kg, angles in degrees)</label>
-<textarea id="cg-lift-input" name="axle_lift" rows="9" spellcheck="false" placeholder="${PLACEHOLDER}"></textarea>
-<p><button type="submit">Compute CG height</button></p>
-</form>
-<div id="cg-lift-result" aria-live="polite"></div>`;
+export interface AxleLiftBlock {
+  /** The page's unit system: fields and results are shown in it. */
+  units: UnitSystem;
+  /** The `lift.*` fields as typed. */
+  values: FormValues;
+  errors?: readonly FieldIssue[];
+  /** A problem with the request as a whole (paste not JSON, file invalid, nothing entered). */
+  problem?: { message: string; code: string; errors?: readonly FieldIssue[] };
+  result?: AxleLiftResultFile;
+  /** Load states of the design form, for the "Apply" buttons. */
+  loadStates?: ReadonlyArray<{ id: string; label: string }>;
+  /** Text of the paste box (kept as typed). */
+  pasted?: string;
+}
+
+function liftOp(op: string, text: string, title: string, disabled = false): SafeHtml {
+  return html`<button type="button" class="op" name="_lift_op" value="${op}" title="${title}" hx-post="/workbench/cg-lift" hx-include="#design-form" hx-target="#cg-lift" hx-swap="outerHTML"${disabled ? html` disabled` : ''}>${text}</button>`;
+}
+
+export function axleLiftBlock(b: AxleLiftBlock): SafeHtml {
+  const errors = new Map<string, string[]>();
+  for (const e of b.errors ?? []) errors.set(e.path, [...(errors.get(e.path) ?? []), e.message]);
+  const ctx: InputContext = { values: b.values, units: b.units, errors, structural: new Set(), rendered: new Set() };
+  const rows = listIndices(b.values, 'lift.lifts');
+  const unit = (name: string) => unitLabel(displayUnitOf(name, b.units));
+  const form = html`<form class="cg-lift-form" hx-post="/workbench/cg-lift" hx-include="#design-form" hx-target="#cg-lift" hx-swap="outerHTML" aria-label="CG height by axle lift" novalidate autocomplete="off">
+<input type="hidden" name="${LIFT_UNITS_FIELD}" value="${b.units}">
+<fieldset><legend>Vehicle, weighed level</legend><div class="grid">
+${numberField(ctx, 'lift.wheelbase_m', 'Wheelbase')}
+${numberField(ctx, 'lift.wheel_centre_height_m', 'Wheel-centre height', { hint: 'above the ground: the loaded tyre radius' })}
+${numberField(ctx, 'lift.level.front_axle_kg', 'Front axle, level')}
+${numberField(ctx, 'lift.level.rear_axle_kg', 'Rear axle, level')}
+</div></fieldset>
+<fieldset><legend>Lifts</legend>
+<p class="hint">Per lift: which axle was raised, how far (wheel-centre rise) or the body angle, and what the scales read under the axle on them (normally the axle that stays down).</p>
+<div class="scroll"><table class="inputs-table lift-rows"><thead><tr><th scope="col">#</th><th scope="col">Raised axle</th><th scope="col">Lift height <span class="unit">(${unit('lift.lifts[0].lift_height_m')})</span></th><th scope="col">or angle <span class="unit">(°)</span></th><th scope="col">Scale reading <span class="unit">(${unit('lift.lifts[0].reading_kg')})</span></th><th scope="col">Axle on the scales</th><th scope="col"><span class="sr">Remove</span></th></tr></thead>
+<tbody>${rows.map((i) => {
+    const p = `lift.lifts[${i}]`;
+    const n = i + 1;
+    return html`<tr><td>${n}</td>
+<td>${selectField(ctx, `${p}.raised_axle`, `Lift ${n}: raised axle`, AXLES, { compact: true })}</td>
+<td>${numberField(ctx, `${p}.lift_height_m`, `Lift ${n}: lift height`, { compact: true, width: 's' })}</td>
+<td>${numberField(ctx, `${p}.lift_angle_deg`, `Lift ${n}: or lift angle`, { compact: true, width: 's' })}</td>
+<td>${numberField(ctx, `${p}.reading_kg`, `Lift ${n}: scale reading`, { compact: true, width: 's' })}</td>
+<td>${selectField(ctx, `${p}.read_axle`, `Lift ${n}: axle on the scales`, AXLES, { compact: true })}</td>
+<td class="acts">${liftOp(`remove:${i}`, 'Remove', `Remove lift ${n}`, rows.length <= 1)}</td></tr>`;
+  })}</tbody></table></div>
+${liftOp('add', '+ Add lift', 'Add a lift (same axles as the last one)', rows.length >= MAX_LIFTS)}
+</fieldset>
+<fieldset><legend>Measurement uncertainty</legend><div class="grid">
+${numberField(ctx, 'lift.scale_resolution_kg', 'Scale resolution', { hint: 'smallest step the scales show' })}
+${numberField(ctx, 'lift.lift_height_uncertainty_m', 'Lift height uncertainty', { hint: 'one standard deviation' })}
+${numberField(ctx, 'lift.wheelbase_uncertainty_m', 'Wheelbase uncertainty', { hint: 'one standard deviation' })}
+${numberField(ctx, 'lift.wheel_centre_height_uncertainty_m', 'Wheel-centre height uncertainty', { optional: true })}
+${numberField(ctx, 'lift.lift_angle_uncertainty_deg', 'Lift angle uncertainty', { optional: true, hint: 'when angles are entered' })}
+</div></fieldset>
+<p><button type="submit" name="_lift_op" value="compute">Compute CG height</button></p>
+<details class="paste"${b.pasted ? html` open` : ''}><summary>Or paste a <code>lockstep-axle-lift/1</code> file</summary>
+<label for="cg-lift-input">File text (JSON; lengths in m, masses in kg, angles in degrees; docs/axle-lift.md). It fills the form above.</label>
+<textarea id="cg-lift-input" name="axle_lift" rows="6" spellcheck="false">${b.pasted ?? ''}</textarea>
+<p>${liftOp('paste', 'Read the pasted file', 'Fill the form from the pasted file and compute')}</p>
+</details>
+</form>`;
+  const loose = (b.errors ?? []).filter((e) => !ctx.rendered.has(e.path)); // problems with no field of their own
+  const problem = b.problem ?? (b.errors?.length ? { message: `${b.errors.length} input${b.errors.length === 1 ? ' needs' : 's need'} attention (marked above).`, code: 'APP_ERR_AXLE_LIFT_INVALID', errors: loose } : undefined);
+  return html`<div id="cg-lift" class="cg-lift" data-units="${b.units}">
+${form}
+<div id="cg-lift-result" aria-live="polite">${problem ? axleLiftErrors(problem.message, problem.code, problem.errors) : ''}${b.result ? axleLiftFragment(b.result, b.units, b.loadStates ?? []) : ''}</div>
+</div>`;
 }
 
 export function axleLiftErrors(message: string, code: string, errors: readonly FieldIssue[] = []): SafeHtml {
@@ -37,28 +99,37 @@ export function axleLiftErrors(message: string, code: string, errors: readonly F
 ${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${e.path ? html`<code>${e.path}</code>: ` : ''}${e.message}</li>`)}</ul>` : ''}</div>`;
 }
 
-export function axleLiftFragment(r: AxleLiftResultFile): SafeHtml {
+export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'metric', loadStates: ReadonlyArray<{ id: string; label: string }> = []): SafeHtml {
+  const len = shownUnit('length', units);
+  const m = shownUnit('mass', units);
+  const ld = units === 'us' ? 2 : 3;
   const snippet = JSON.stringify({
     cg_height_m: Number(r.cg_height_m.toFixed(3)),
     cg_height_uncertainty_m: Number(r.standard_uncertainty_m.toFixed(3)),
     cg_height_derived_from: 'measured',
     overrides: ['cg_height_m'],
   });
-  return html`<table class="numbers"><tbody>
-<tr><th scope="row">CG height above ground</th><td>${fixed(r.cg_height_m, 3)} m</td></tr>
-<tr><th scope="row">Standard uncertainty (k = 1)</th><td>${fixed(r.standard_uncertainty_m, 3)} m</td></tr>
-<tr><th scope="row">CG behind the front axle</th><td>${fixed(r.cg_to_front_axle_m, 3)} m</td></tr>
-<tr><th scope="row">Vehicle mass (level)</th><td>${fixed(r.mass_kg, 1)} kg</td></tr>
-${r.scatter_uncertainty_m !== null ? html`<tr><th scope="row">Scatter of the lifts about the fit</th><td>${fixed(r.scatter_uncertainty_m, 3)} m</td></tr>` : ''}
+  const largest = r.budget.largest_source;
+  return html`<h4>Result</h4>
+<table class="numbers data cg-lift-result"><tbody>
+<tr><th scope="row">CG height above ground</th><td>${fixed(len.from(r.cg_height_m), ld)} ${len.label}</td></tr>
+<tr><th scope="row">Standard uncertainty (k = 1)</th><td>${fixed(len.from(r.standard_uncertainty_m), ld)} ${len.label}</td></tr>
+<tr><th scope="row">CG behind the front axle</th><td>${fixed(len.from(r.cg_to_front_axle_m), ld)} ${len.label}</td></tr>
+<tr><th scope="row">Vehicle mass (level)</th><td>${fixed(m.from(r.mass_kg), units === 'us' ? 0 : 1)} ${m.label}</td></tr>
+${r.scatter_uncertainty_m !== null ? html`<tr><th scope="row">Scatter of the lifts about the fit</th><td>${fixed(len.from(r.scatter_uncertainty_m), ld)} ${len.label}</td></tr>` : ''}
 </tbody></table>
-<h4>Each lift alone</h4>
-<div class="scroll"><table class="numbers"><thead><tr><th scope="col">Lift</th><th scope="col">Raised</th><th scope="col">Axle read</th><th scope="col">Angle<br><span class="unit">°</span></th><th scope="col">Change<br><span class="unit">kg</span></th><th scope="col">h<br><span class="unit">m</span></th><th scope="col">u(h)<br><span class="unit">m</span></th></tr></thead>
-<tbody>${r.lifts.map((l) => html`<tr><td>${l.index + 1}</td><td>${l.raised_axle}</td><td>${l.read_axle}</td><td>${fixed(l.lift_angle_deg, 2)}</td><td>${fixed(l.reading_change_kg, 1)}</td><td>${fixed(l.cg_height_m, 3)}</td><td>${fixed(l.standard_uncertainty_m, 3)}</td></tr>`)}</tbody></table></div>
-<h4>Uncertainty budget</h4>
-<div class="scroll"><table class="numbers"><thead><tr><th scope="col">Source</th><th scope="col">Contribution<br><span class="unit">m</span></th><th scope="col">Share of variance<br><span class="unit">%</span></th></tr></thead>
-<tbody>${r.budget.by_source.map((b) => html`<tr><td>${SOURCE_WORDS[b.source] ?? b.source}</td><td>${fixed(b.contribution_m, 4)}</td><td>${fixed(100 * b.variance_share, 1)}</td></tr>`)}</tbody></table></div>
-${r.budget.largest_source ? html`<p>Largest contribution: ${SOURCE_WORDS[r.budget.largest_source]} (single input: ${r.budget.largest_input}).</p>` : ''}
+${largest ? html`<p class="largest"><strong>Largest contribution: ${SOURCE_WORDS[largest] ?? largest}</strong> (single input: ${r.budget.largest_input}). Improve that measurement first to narrow the result.</p>` : ''}
 ${r.warnings.length ? html`<ul class="warnings">${r.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
-<p>To apply it, add to the load state it was measured in: <code>${snippet}</code></p>
+${loadStates.length
+    ? html`<div class="apply-lift"><p>Write this CG height and its uncertainty into a load state (marked as measured; the results follow):</p>
+<p>${loadStates.map((s) => html`<button type="button" class="apply" name="_op" value="${cgLiftOp(s.id, r.cg_height_m, r.standard_uncertainty_m)}" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML">Apply to load state “${s.label}”</button> `)}</p></div>`
+    : ''}
+<h4>Each lift alone</h4>
+<div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Lift</th><th scope="col">Raised</th><th scope="col">Axle read</th><th scope="col">Angle<br><span class="unit">°</span></th><th scope="col">Change<br><span class="unit">${m.label}</span></th><th scope="col">h<br><span class="unit">${len.label}</span></th><th scope="col">u(h)<br><span class="unit">${len.label}</span></th></tr></thead>
+<tbody>${r.lifts.map((l) => html`<tr><td>${l.index + 1}</td><td>${l.raised_axle}</td><td>${l.read_axle}</td><td>${fixed(l.lift_angle_deg, 2)}</td><td>${fixed(m.from(l.reading_change_kg), 1)}</td><td>${fixed(len.from(l.cg_height_m), ld)}</td><td>${fixed(len.from(l.standard_uncertainty_m), ld)}</td></tr>`)}</tbody></table></div>
+<h4>Uncertainty budget</h4>
+<div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Source</th><th scope="col">Contribution<br><span class="unit">${len.label}</span></th><th scope="col">Share of variance<br><span class="unit">%</span></th></tr></thead>
+<tbody>${r.budget.by_source.map((b) => html`<tr${b.source === largest ? html` class="largest"` : ''}><td>${SOURCE_WORDS[b.source] ?? b.source}${b.source === largest ? html` <strong>(largest)</strong>` : ''}</td><td>${fixed(len.from(b.contribution_m), units === 'us' ? 3 : 4)}</td><td>${fixed(100 * b.variance_share, 1)}</td></tr>`)}</tbody></table></div>
+<p class="hint">In a design file, the same is written into the load state as <code>${snippet}</code>.</p>
 <p class="hint">${CAUTION}</p>`;
 }

@@ -97,6 +97,19 @@ export function checkField(ctx: InputContext, name: string, label: string, o: Fi
 ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
 }
 
+/** Values of a three-way yes/no choice: "" leaves the key out (server/forms/design-form.ts). */
+export const TRI_STATE_OPTIONS = [['', 'not stated'], ['true', 'yes'], ['false', 'no']] as const;
+
+/**
+ * An optional yes/no fact where "not stated" must stay possible (a checkbox always writes true or false):
+ * a select "not stated" / "yes" / "no". "not stated" sends empty text and leaves the key out of the design.
+ */
+export function triStateField(ctx: InputContext, name: string, label: string, o: FieldOptions = {}): SafeHtml {
+  const v = (ctx.values[name] ?? '').trim().toLowerCase();
+  const shown = ['true', 'on', '1', 'yes'].includes(v) ? 'true' : ['false', 'off', '0', 'no'].includes(v) ? 'false' : v;
+  return selectField({ ...ctx, values: { ...ctx.values, [name]: shown } }, name, label, TRI_STATE_OPTIONS, { optional: true, ...o });
+}
+
 /** A button that changes the structure of a list ("add:path", "dup:path[i]", "remove:path[i]"). */
 export function listButton(op: string, text: string, title: string, disabled = false): SafeHtml {
   return html`<button type="button" class="op" name="_op" value="${op}" title="${title}" hx-post="/workbench/update" hx-target="#status" hx-swap="outerHTML" hx-sync="closest form:replace"${disabled ? html` disabled` : ''}>${text}</button>`;

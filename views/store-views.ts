@@ -15,7 +15,7 @@ const short = (rev: string) => rev.slice(0, 12);
 export function designsListView(list: DesignSummary[]): SafeHtml {
   if (list.length === 0) return html`<section id="designs" class="designs"><h2>Saved designs</h2><p>No saved designs yet.</p></section>`;
   return html`<section id="designs" class="designs"><h2>Saved designs</h2>
-<table class="designs-list"><thead><tr><th scope="col">Name</th><th scope="col">Revisions</th><th scope="col">Latest revision</th><th scope="col">Changed (UTC)</th><th scope="col"></th></tr></thead><tbody>
+<table class="designs-list data"><thead><tr><th scope="col">Name</th><th scope="col">Revisions</th><th scope="col">Latest revision</th><th scope="col">Changed (UTC)</th><th scope="col"></th></tr></thead><tbody>
 ${list.map(
   (d) => html`<tr id="design-${d.id}"><td>${d.name}</td><td>${d.revision_count}</td><td><code title="${d.head_revision}">${short(d.head_revision)}</code></td><td>${d.updated_at}</td>
 <td><a href="/designs/${d.id}/history" hx-get="/designs/${d.id}/history" hx-target="#designs" hx-swap="outerHTML">history</a>
@@ -43,7 +43,7 @@ export function historyView(d: DesignSummary, history: HistoryEntry[], designs: 
   const openForms = latestFirst.filter((h) => designs.has(h.revision_id)).map((h) => ({ seq: h.seq, json: JSON.stringify(designs.get(h.revision_id)) }));
   return html`<section id="designs" class="designs"><h2>History of “${d.name}” <small>(design ${d.id})</small></h2>
 <form hx-get="/diff" hx-target="#diff-result" action="/diff" method="get">
-<table class="history"><thead><tr><th scope="col">From</th><th scope="col">To</th><th scope="col">#</th><th scope="col">Saved (UTC)</th><th scope="col">Revision</th><th scope="col">Message</th><th scope="col">Downloads</th></tr></thead><tbody>
+<table class="history data"><thead><tr><th scope="col">From</th><th scope="col">To</th><th scope="col">#</th><th scope="col">Saved (UTC)</th><th scope="col">Revision</th><th scope="col">Message</th><th scope="col">Downloads</th></tr></thead><tbody>
 ${latestFirst.map(
   (h, i) => html`<tr><td><input type="radio" name="a" value="${h.revision_id}" aria-label="compare from revision ${h.seq}"${i === 1 || latestFirst.length === 1 ? raw(' checked') : ''}></td>
 <td><input type="radio" name="b" value="${h.revision_id}" aria-label="compare to revision ${h.seq}"${i === 0 ? raw(' checked') : ''}></td>
@@ -83,11 +83,11 @@ export function compareView(c: Comparison): SafeHtml {
 <p>Revisions <code>${short(c.a.revision)}</code> (solid lines) and <code>${short(c.b.revision)}</code> (dashed lines).</p>
 ${chartBlock('compare-chart', c.chart, 'Adhesion utilisation of both designs', 'Front and rear adhesion utilisation against braking rate for every load state of both designs; solid lines the first, dashed the second.')}
 <h4>Per load state</h4>
-<table class="compare-states"><thead><tr><th scope="col">Load state</th><th scope="col">Quantity</th><th scope="col">${c.a.label}</th><th scope="col">${c.b.label}</th></tr></thead><tbody>
+<table class="compare-states data"><thead><tr><th scope="col">Load state</th><th scope="col">Quantity</th><th scope="col">${c.a.label}</th><th scope="col">${c.b.label}</th></tr></thead><tbody>
 ${c.states.map((r) => html`<tr class="${r.changed ? 'changed' : ''}"><td>${r.load_state}</td><td>${r.quantity}</td><td>${r.a}</td><td>${r.b}</td></tr>`)}
 </tbody></table>
 <h4>Verdicts</h4>
-${c.checks.length === 0 ? html`<p>No regulation checks selected in either design.</p>` : html`<table class="compare-checks"><thead><tr><th scope="col">Rule</th><th scope="col">Load state</th><th scope="col">${c.a.label}</th><th scope="col">margin</th><th scope="col">${c.b.label}</th><th scope="col">margin</th></tr></thead><tbody>
+${c.checks.length === 0 ? html`<p>No regulation checks selected in either design.</p>` : html`<table class="compare-checks data"><thead><tr><th scope="col">Rule</th><th scope="col">Load state</th><th scope="col">${c.a.label}</th><th scope="col">margin</th><th scope="col">${c.b.label}</th><th scope="col">margin</th></tr></thead><tbody>
 ${c.checks.map((r) => html`<tr class="${r.changed ? 'changed' : ''}"><td>${r.rule}</td><td>${r.load_state}</td><td>${r.a_verdict}</td><td>${r.a_margin}</td><td>${r.b_verdict}</td><td>${r.b_margin}</td></tr>`)}
 </tbody></table>`}
 <h4>Input changes</h4>

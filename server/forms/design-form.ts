@@ -10,6 +10,8 @@
  *   suffix are plain numbers. FIELD_QUANTITIES overrides the quantity for paths whose suffix does not tell
  *   (the rows of the load-sensing table). An empty number field leaves the key out.
  * - booleans (schema z.boolean()): a hidden input "false" followed by a checkbox "true"; the last value wins.
+ *   Optional facts where "not stated" differs from "no" use a three-way select (views/fields.ts triStateField):
+ *   "" (not stated) leaves the key out, "true" / "false" set it. Other text is reported on the field.
  * - everything else is text, sent as typed (enums are <select>s); empty text leaves the key out.
  * - objects that end up without keys are left out (an optional block nobody filled in stays absent).
  */
@@ -279,6 +281,7 @@ function prune(v: unknown): unknown {
 }
 
 const TRUE_WORDS = new Set(['true', 'on', '1', 'yes']);
+const FALSE_WORDS = new Set(['false', 'off', '0', 'no']);
 
 /** Form values -> the object to validate, plus the fields whose text could not be read as a number. */
 /** parseFieldPath for the form reader, kept per field name (the same names come with every recompute); read-only. */
@@ -303,7 +306,17 @@ export function valuesToInput(values: FormValues, units: UnitSystem): { input: R
     if (path.length === 0) continue;
     const kind = kindOfField(name);
     const t = text.trim();
-    if (kind === 'boolean') setAt(input, path, TRUE_WORDS.has(t.toLowerCase()));
+    if (kind === 'boolean') {
+      // a checkbox always sends "false" or "true"; a three-way select (triStateField) sends "" for "not stated",
+      // which leaves the key out like an empty number
+      const w = t.toLowerCase();
+      if (w === '') setAt(input, path, undefined);
+      else if (TRUE_WORDS.has(w) || FALSE_WORDS.has(w)) setAt(input, path, TRUE_WORDS.has(w));
+      else {
+        errors.push({ path: fieldPath(path), message: `${JSON.stringify(text.slice(0, 40))} is not a yes/no value: choose yes, no or not stated` });
+        setAt(input, path, undefined);
+      }
+    }
     else if (kind === 'number') {
       if (t === '') setAt(input, path, undefined);
       else {
@@ -341,7 +354,7 @@ export function readForm(values: FormValues, units: UnitSystem): FormReading {
 }
 
 /** Adds the allowed range in the unit the user sees when it differs from the design-file unit. */
-function withShownRange(e: FieldIssue, units: UnitSystem): FieldIssue {
+export function withShownRange(e: FieldIssue, units: UnitSystem): FieldIssue {
   const u = unitOfField(e.path);
   if (!u) return e;
   const shown = DISPLAY_UNITS[u.quantity][units];

@@ -1,32 +1,70 @@
 /**
- * POST /workbench/cg-lift: the axle-lift tool of the conversion panel. Body: the form field `axle_lift`
- * holding a `lockstep-axle-lift/1` JSON text (docs/axle-lift.md). Answers an HTML fragment: 200 with the
- * CG height, its uncertainty and budget; 422 with the problems (htmx swaps 422, views/layout.ts).
+ * POST /workbench/cg-lift: the axle-lift tool of the conversion panel (views/axle-lift-view.ts). The body is the
+ * tool's form (`lift.*` fields, server/forms/axle-lift-form.ts) together with the design form (for the page's
+ * unit system `_units` and the load states the result can be applied to). `_lift_op` says what to do:
+ * `compute` (default when lift fields are present), `add`, `remove:<i>` (lift rows), or `paste` (read the
+ * `lockstep-axle-lift/1` text in `axle_lift`, fill the form from it and compute; the default when only
+ * `axle_lift` is posted). Answers the whole #cg-lift block: 200 with the result, 422 with the problems marked
+ * at their fields (htmx swaps 422, views/layout.ts). Codes: APP_ERR_AXLE_LIFT_EMPTY, APP_ERR_AXLE_LIFT_NOT_JSON,
+ * APP_ERR_AXLE_LIFT_INVALID.
  */
 import type { FastifyInstance } from 'fastify';
 import { axleLiftResultFile, readAxleLift } from '../../core/index.ts';
-import { axleLiftErrors, axleLiftFragment } from '../../views/axle-lift-view.ts';
+import { axleLiftBlock, type AxleLiftBlock } from '../../views/axle-lift-view.ts';
+import {
+  applyLiftRowOp,
+  convertLiftValues,
+  LIFT_UNITS_FIELD,
+  liftFileToValues,
+  liftValues,
+  loadStatesOf,
+  readLiftForm,
+  startingLiftValues,
+} from '../forms/axle-lift-form.ts';
+import { appErrors } from '../errors.ts';
 import { sendHtml } from '../html-reply.ts';
+import { formValues, unitsOf } from './workbench.ts';
 
 export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
   app.post('/workbench/cg-lift', async (req, reply) => {
-    const body = req.body as Record<string, unknown> | null;
-    const raw = body && typeof body === 'object' ? body.axle_lift : undefined;
-    const text = typeof raw === 'string' ? raw : Array.isArray(raw) ? String(raw[raw.length - 1] ?? '') : '';
-    if (text.trim() === '') {
-      return sendHtml(reply, axleLiftErrors('Paste the axle-lift readings first (a JSON file, see docs/axle-lift.md).', 'APP_ERR_AXLE_LIFT_EMPTY'), 422);
+    const posted = formValues(req.body);
+    const units = unitsOf(posted._units);
+    const typedIn = posted[LIFT_UNITS_FIELD] === undefined ? units : unitsOf(posted[LIFT_UNITS_FIELD]);
+    // the block may have been kept across a unit switch: show the typed values in the page's units from now on
+    let values = convertLiftValues(liftValues(posted), typedIn, units);
+    const hasFields = Object.keys(values).length > 0;
+    const op = posted._lift_op ?? (hasFields ? 'compute' : 'paste');
+    const loadStates = loadStatesOf(posted).filter((s) => s.id !== '');
+    const block = (b: Omit<AxleLiftBlock, 'units' | 'values' | 'loadStates'>, status = 200) =>
+      sendHtml(reply, axleLiftBlock({ units, values, loadStates, pasted: posted.axle_lift, ...b }), status);
+
+    if (op === 'add' || op.startsWith('remove:')) {
+      values = applyLiftRowOp(values, op);
+      return block({});
     }
-    let input: unknown;
-    try {
-      input = JSON.parse(text);
-    } catch (e) {
-      return sendHtml(reply, axleLiftErrors(`The readings are not valid JSON (${(e as Error).message}).`, 'APP_ERR_AXLE_LIFT_NOT_JSON'), 422);
+    if (op === 'paste') {
+      const text = posted.axle_lift ?? '';
+      if (!hasFields) values = startingLiftValues(units);
+      if (text.trim() === '') {
+        return block({ problem: { message: 'Paste the axle-lift readings first (a lockstep-axle-lift/1 file, see docs/axle-lift.md), or fill in the form.', code: 'APP_ERR_AXLE_LIFT_EMPTY' } }, 422);
+      }
+      let input: unknown;
+      try {
+        input = JSON.parse(text);
+      } catch (e) {
+        return block({ problem: { message: `The pasted readings are not valid JSON (${(e as Error).message}). The form is unchanged.`, code: 'APP_ERR_AXLE_LIFT_NOT_JSON' } }, 422);
+      }
+      const r = readAxleLift(input);
+      if (!r.ok) {
+        const n = r.errors.length;
+        return block({ problem: { message: `${n} problem${n === 1 ? '' : 's'} in the pasted readings (the form is unchanged):`, code: 'APP_ERR_AXLE_LIFT_INVALID', errors: r.errors } }, 422);
+      }
+      values = liftFileToValues(r.input, units);
+      return block({ result: axleLiftResultFile(r.input), pasted: '' });
     }
-    const r = readAxleLift(input);
-    if (!r.ok) {
-      const n = r.errors.length;
-      return sendHtml(reply, axleLiftErrors(`${n} problem${n === 1 ? '' : 's'} in the readings:`, 'APP_ERR_AXLE_LIFT_INVALID', r.errors), 422);
-    }
-    return sendHtml(reply, axleLiftFragment(axleLiftResultFile(r.input)));
+    if (op !== 'compute') throw appErrors.unknownOperation(op);
+    const r = readLiftForm(values, units);
+    if (!r.ok) return block({ errors: r.errors }, 422);
+    return block({ result: axleLiftResultFile(r.input) });
   });
 }

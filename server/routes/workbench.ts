@@ -32,6 +32,7 @@ import {
 } from '../forms/design-form.ts';
 import { sendHtml } from '../html-reply.ts';
 import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
+import { applyCgLiftOp, CG_LIFT_OP } from '../forms/axle-lift-form.ts';
 import { ResponseCache, sendCached } from '../response-cache.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
@@ -88,6 +89,9 @@ export function update(posted: FormValues): UpdateOutcome {
     structural = true;
   } else if (posted._op === 'demo') {
     values = designToValues(demoDesign(), units);
+    structural = true;
+  } else if (posted._op?.startsWith(CG_LIFT_OP)) {
+    values = applyCgLiftOp(values, posted._op, units); // the axle-lift tool's "Apply to load state" (server/forms/axle-lift-form.ts)
     structural = true;
   } else if (posted._op?.startsWith(SIZING_OP)) {
     values = applySizingOp(values, posted._op, units); // the sizing panel's apply / undo (server/forms/sizing-apply.ts)

@@ -55,6 +55,16 @@
     });
   });
 
+  // the axle-lift tool (views/axle-lift-view.ts) sits inside the results, which every recompute replaces: keep the
+  // block as it is (typed readings, result) by moving the existing node into the new results before the swap
+  document.body.addEventListener('htmx:oobBeforeSwap', function (ev) {
+    var frag = ev.detail && ev.detail.fragment;
+    if (!frag || !frag.querySelector) return;
+    var fresh = frag.querySelector('#cg-lift');
+    var old = document.getElementById('cg-lift');
+    if (fresh && old && fresh !== old) fresh.replaceWith(old);
+  });
+
   form.addEventListener('input', save);
   form.addEventListener('change', save);
   document.body.addEventListener('htmx:afterSettle', save);

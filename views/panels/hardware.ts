@@ -4,7 +4,7 @@
  */
 import type { EvaluationResult } from '../../core/index.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText, seriesStyle } from '../chart.ts';
-import { type InputContext, numberField, selectField } from '../fields.ts';
+import { type InputContext, numberField, selectField, triStateField } from '../fields.ts';
 import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
@@ -27,7 +27,7 @@ export function failedValveTable(ctx: ResultContext): SafeHtml {
   const first = fm[0]!;
   return html`<p>Deceleration at the ${fixed(first.pedal_force_limit_n, 0)} N pedal-force limit, not above the first wheel lock on adhesion ${fixed(first.test_adhesion, 2)},
 against the secondary-braking figure. <small>${first.source} — ${first.verify_note}.</small></p>
-<div class="scroll"><table class="failure-modes">
+<div class="scroll"><table class="failure-modes data">
 <caption class="sr">Failed distribution valve per mode and load state</caption>
 <tr><th scope="col">Failed state</th><th scope="col">Load state</th><th scope="col">Reached (m/s²)</th><th scope="col">Required (m/s²)</th><th scope="col">Verdict</th><th scope="col">Limited by</th><th scope="col">Rear locks first on k (0.2–0.8)</th></tr>
 ${fm.map(
@@ -70,7 +70,7 @@ export function pedalTravelBlock(ctx: ResultContext): SafeHtml {
   const mm = (v: number) => fixed(tu.from(v * 1e-3), ctx.units === 'us' ? 2 : 1);
   return html`<p>Travel available ${mm(t.pedal_travel_available_mm)} ${tu.label}; warning when the service test deceleration takes more than ${fixed(t.warn_pct, 0)} %.
 Master-cylinder stroke ${mm(t.master_cylinder_total_stroke_mm)} ${tu.label}; circuits ${t.circuits.join(' + ')}.</p>
-<div class="scroll"><table class="pedal-travel">
+<div class="scroll"><table class="pedal-travel data">
 <caption class="sr">Pedal travel per load state, service and one circuit failed</caption>
 <tr><th scope="col">Load state</th><th scope="col">Case</th><th scope="col">At (m/s²)</th><th scope="col">Master pressure (${pu.label})</th><th scope="col">Pedal travel (${tu.label})</th><th scope="col">Used</th><th scope="col">Margin (${tu.label})</th><th scope="col">Pedal force (N)</th></tr>
 ${t.states.flatMap((s) =>
@@ -79,7 +79,7 @@ ${t.states.flatMap((s) =>
     const over = p !== null && (p.bottomed || p.margin_mm < 0 || (c.case === 'service' && p.share_of_available_pct > t.warn_pct));
     return html`<tr class="${over ? 'fail' : ''}"><td>${s.load_state}</td><td>${c.case.replace(/_/g, ' ')}</td><td>${fixed(c.target_ms2, 1)}</td>
 <td>${p ? fixed(pu.from(p.master_pressure_bar * 1e5), 1) : '–'}</td><td>${p ? mm(p.pedal_travel_mm) : 'not reached'}</td>
-<td>${p ? `${fixed(p.share_of_available_pct, 0)} %` : '–'}${p?.bottomed ? ' (master cylinder bottoms)' : ''}</td><td>${p ? mm(p.margin_mm) : '–'}</td>
+<td>${p ? `${fixed(p.share_of_available_pct, 0)} %` : '–'}${p?.bottomed ? ' (master cylinder bottoms)' : ''}${over ? html` <span class="flag">too much travel</span>` : ''}</td><td>${p ? mm(p.margin_mm) : '–'}</td>
 <td>${p ? fixed(p.pedal_force_n, 0) : '–'}${p && p.pedal_force_n > c.pedal_force_limit_n ? ` (above ${c.pedal_force_limit_n})` : ''}</td></tr>`;
   }),
 )}
@@ -95,9 +95,9 @@ export const pitfallsPanel: Panel = { id: 'pitfalls', title: 'Pitfalls', results
 const NOT_STATED = ['', 'not stated'] as const;
 
 /**
- * Optional inputs: numbers and choices only (an empty field leaves the key out, so a design nobody filled in
- * here keeps its meaning). The yes/no facts of `base_vehicle` and `conversion` are edited in the design file:
- * a checkbox would always write true or false, and "not stated" must stay possible.
+ * Optional inputs (an empty field leaves the key out, so a design nobody filled in here keeps its meaning).
+ * The yes/no facts of `base_vehicle` and `conversion` are three-way selects (not stated / yes / no,
+ * `triStateField`): "not stated" must stay possible, and the pitfall checks read only what is stated.
  */
 export function hardwareInputs(ctx: InputContext): SafeHtml {
   const axle = (a: 'front' | 'rear') => html`<fieldset><legend>${a === 'front' ? 'Front' : 'Rear'} axle (both wheels)</legend><div class="grid">
@@ -124,10 +124,18 @@ ${numberField(ctx, 'base_vehicle.rear_tyre_radius_m', 'Rear tyre rolling radius'
 ${selectField(ctx, 'base_vehicle.circuit_split', 'Circuit split', [NOT_STATED, ['front_rear', 'front/rear'], ['diagonal', 'diagonal']], { optional: true })}
 ${selectField(ctx, 'base_vehicle.front_brake_type', 'Front brakes', [NOT_STATED, ['disc', 'disc'], ['drum', 'drum']], { optional: true })}
 ${selectField(ctx, 'base_vehicle.rear_brake_type', 'Rear brakes', [NOT_STATED, ['disc', 'disc'], ['drum', 'drum']], { optional: true })}
+${triStateField(ctx, 'base_vehicle.abs', 'Antilock (ABS) fitted')}
+${triStateField(ctx, 'base_vehicle.stability_control', 'Stability control fitted')}
+${triStateField(ctx, 'base_vehicle.booster', 'Brake booster fitted')}
 </div></fieldset>
 <fieldset><legend>Conversion</legend><div class="grid">
 ${selectField(ctx, 'conversion.bias_adjuster', 'Front/rear bias adjuster', [NOT_STATED, ['none', 'none fitted'], ['locked', 'fitted, locked or pinned'], ['driver_adjustable', 'driver can adjust it']], { optional: true })}
 ${selectField(ctx, 'conversion.booster_source', 'Booster powered by', [NOT_STATED, ['engine_vacuum', 'engine vacuum'], ['electric_vacuum_pump', 'electric vacuum pump'], ['hydraulic_pump', 'hydraulic pump'], ['electric_booster', 'electric booster'], ['none', 'nothing']], { optional: true })}
+${triStateField(ctx, 'conversion.engine_removed', 'Combustion engine removed')}
+${triStateField(ctx, 'conversion.suspension_modified', 'Suspension modified', { hint: 'helper springs, air assistance, lift or lowering' })}
+${triStateField(ctx, 'conversion.stability_control_working', 'Stability control still works')}
+${triStateField(ctx, 'conversion.master_cylinder_from_drum_system', 'Master cylinder from a drum-braked system')}
+${triStateField(ctx, 'conversion.master_cylinder_replaced', 'Master cylinder replaced (drums to discs)')}
 </div></fieldset>
 </details>`;
 }

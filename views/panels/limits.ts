@@ -49,7 +49,7 @@ function tractionTable(s: LoadStateResult, units: UnitSystem): SafeHtml {
   const ks = [...new Set(s.traction.map((t) => t.adhesion))];
   const own = s.traction.find((t) => t.is_design_drive)!.drive;
   const at = (d: string, k: number) => s.traction.find((t) => t.drive === d && t.adhesion === k);
-  return html`<table class="numbers"><caption>${s.label}: largest acceleration (g) per drive layout; start gradient and drive-axle load for this design's ${own} drive</caption>
+  return html`<table class="numbers data"><caption>${s.label}: largest acceleration (g) per drive layout; start gradient and drive-axle load for this design's ${own} drive</caption>
 <tr><th scope="col">Adhesion k</th>${DRIVES.map((d) => html`<th scope="col">${d} drive${d === own ? ' *' : ''}</th>`)}<th scope="col">* in ${acc.label}</th><th scope="col">* start gradient (%)</th><th scope="col">* drive axle load (${f.label})</th><th scope="col">* limited by</th></tr>
 ${ks.map((k) => {
   const o = at(own, k);
@@ -65,7 +65,7 @@ function stoppingTable(s: LoadStateResult, units: UnitSystem): SafeHtml {
   const speeds = [...new Set(st.rows.map((r) => r.speed_kmh))];
   const ks = [...new Set(st.rows.map((r) => r.adhesion))];
   const cell = (v: number, k: number, mode: 'no_abs' | 'abs') => st.rows.find((r) => r.speed_kmh === v && r.adhesion === k && r.mode === mode);
-  return html`<table class="numbers"><caption>${s.label}: stopping distance (${du.label}), without ABS / with ABS</caption>
+  return html`<table class="numbers data"><caption>${s.label}: stopping distance (${du.label}), without ABS / with ABS</caption>
 <tr><th scope="col">Adhesion k</th><th scope="col">z at first lock</th>${speeds.map((v) => html`<th scope="col">from ${fixed(su.from(v / 3.6), 0)} ${su.label}</th>`)}</tr>
 ${ks.map((k) => {
   const lock = cell(speeds[0]!, k, 'no_abs');
@@ -83,7 +83,7 @@ function testerBlock(s: LoadStateResult, units: UnitSystem): SafeHtml {
   const f = shownUnit('force', units);
   const pu = shownUnit('pressure', units);
   const pd = pedalUnit(units);
-  return html`<table class="numbers"><caption>${s.label}: roller tester (roller adhesion ${fixed(t.roller_adhesion, 2)}, test mass ${fixed(shownUnit('mass', units).from(t.test_mass_kg), 0)} ${shownUnit('mass', units).label})</caption>
+  return html`<table class="numbers data"><caption>${s.label}: roller tester (roller adhesion ${fixed(t.roller_adhesion, 2)}, test mass ${fixed(shownUnit('mass', units).from(t.test_mass_kg), 0)} ${shownUnit('mass', units).label})</caption>
 <tr><th scope="col">Axle</th><th scope="col">Static load (${f.label})</th><th scope="col">Slip force (${f.label})</th><th scope="col">Slips at (${pu.label})</th><th scope="col">Slips at pedal (${pd.label})</th><th scope="col">Recorded (${f.label})</th><th scope="col">Limited by</th></tr>
 ${t.axles.map(
   (a) => html`<tr><td>${a.axle}</td><td>${fixed(f.from(a.static_load_n), 2)}</td><td>${fixed(f.from(a.slip_force_n), 2)}</td><td>${fixed(a.slip_pressure_bar === null ? null : pu.from(a.slip_pressure_bar * 1e5), 1)}</td>
@@ -173,14 +173,14 @@ ${fixed(g.front_share * 100, 0)} % on the front axle. Largest force ${fixed(f.fr
 ${g.load_states.map((st) => {
   const label = ctx.result.load_states.find((s) => s.id === st.id)?.label ?? st.id;
   const F = st.max_force_passing_checks_n;
-  return html`<table class="numbers"><caption>${label}: axle that locks first and at which z (✗ = not allowed), and the largest regenerative force that keeps the lock allowed</caption>
+  return html`<table class="numbers data"><caption>${label}: axle that locks first and at which z (✗ = not allowed), and the largest regenerative force that keeps the lock allowed</caption>
 <tr><th scope="col">k</th><th scope="col">No regeneration</th>${st.at_speeds.map((c) => html`<th scope="col">${fixed(su.from(c.speed_kmh / 3.6), 0)} ${su.label} (${fixed(f.from(c.regen_force_n), 2)} ${f.label})</th>`)}<th scope="col">Largest allowed (${f.label})</th><th scope="col">Motor torque (N·m)</th></tr>
 ${st.zero_regen.lock.map((l, i) => {
   const lim = st.limits[i]!;
   return html`<tr><td>${fixed(l.adhesion, 2)}</td><td>${code(l)}</td>${st.at_speeds.map((c) => html`<td>${code(c.lock[i]!)}</td>`)}
 <td>${lim.in_rule_range ? (lim.max_force_n === null ? 'no limit' : fixed(f.from(lim.max_force_n), 2)) : 'outside range'}</td><td>${lim.in_rule_range ? fixed(lim.max_motor_torque_nm, 1) : ''}</td></tr>`;
 })}</table>
-${st.checks.length ? html`<table class="numbers"><caption>${label}: regulation curve checks with regeneration (margin in adhesion units)</caption>
+${st.checks.length ? html`<table class="numbers data"><caption>${label}: regulation curve checks with regeneration (margin in adhesion units)</caption>
 <tr><th scope="col">Rule</th><th scope="col">No regeneration</th>${st.at_speeds.map((c) => html`<th scope="col">${fixed(su.from(c.speed_kmh / 3.6), 0)} ${su.label}</th>`)}</tr>
 ${[...new Set(st.checks.map((c) => c.rule))].map((id) => html`<tr><td>${id}${st.checks.find((c) => c.rule === id)?.verify_note ? html` <small>(${st.checks.find((c) => c.rule === id)!.verify_note})</small>` : ''}</td>
 ${[null, ...st.at_speeds.map((c) => c.speed_kmh)].map((v) => {
@@ -227,7 +227,7 @@ function heatBlock(ctx: ResultContext): SafeHtml {
   if (!h) return html`<p class="hint">No <code>heat</code> block in the design (rotor masses): brake heat is not estimated.</p>`;
   const su = speedUnit(ctx.units);
   const ti = h.type_i;
-  return html`<table class="numbers"><caption>One stop from ${fixed(su.from(h.single_stop.speed_kmh / 3.6), 0)} ${su.label} at ${fixed(h.single_stop.deceleration_ms2, 1)} m/s² (estimate)</caption>
+  return html`<table class="numbers data"><caption>One stop from ${fixed(su.from(h.single_stop.speed_kmh / 3.6), 0)} ${su.label} at ${fixed(h.single_stop.deceleration_ms2, 1)} m/s² (estimate)</caption>
 <tr><th scope="col">Case</th><th scope="col">Mass (kg)</th><th scope="col">Energy (kJ)</th><th scope="col">Front share</th><th scope="col">Per front brake (kJ)</th><th scope="col">Per rear brake (kJ)</th><th scope="col">Front rotor rise (K)</th><th scope="col">Rear rotor rise (K)</th></tr>
 ${h.single_stop.rows.map(
   (r) => html`<tr><td>${r.case === 'base_vehicle' ? 'base vehicle' : r.case}</td><td>${fixed(r.mass_kg, 0)}</td><td>${fixed(r.energy_j / 1e3, 1)}</td><td>${fixed(r.front_share, 3)}</td>

@@ -74,11 +74,11 @@ function histogram(r: SizingResult): ChartSpec {
 
 function optionsTable(r: SizingResult): SafeHtml {
   if (r.options.length === 0) return html`<p class="hint">No part change found: the recommended share cannot be reached by resizing one axle within the allowed diameters.</p>`;
-  return html`<div class="scroll"><table class="sizing-options">
+  return html`<div class="scroll"><table class="sizing-options data">
 <caption>Parts that move the split to ${pct(r.recommended_front_share)} (the other axle kept), each checked with the full model</caption>
 <thead><tr><th scope="col">Change</th><th scope="col">Series and source</th><th scope="col">Front share</th><th scope="col">Smallest margin</th><th scope="col">Verdict</th><th scope="col"></th></tr></thead>
 <tbody>${r.options.map(
-    (o) => html`<tr class="${o.passes ? 'check-ok' : 'check-fail'}"><th scope="row">${o.change}</th><td>${o.series}<br><small>${o.source}</small></td><td>${pct(o.front_share)}</td><td>${signed(o.smallest_margin)}</td><td>${o.passes ? 'passes' : 'fails'}</td><td>${applyButton(o.path, o.value, 'Apply')}</td></tr>`,
+    (o) => html`<tr class="${o.passes ? 'check-ok' : 'check-fail'}"><th scope="row">${o.change}</th><td>${o.series}<br><small>${o.source}</small></td><td>${pct(o.front_share)}</td><td>${signed(o.smallest_margin)}</td><td class="verdict-word">${o.passes ? 'passes' : 'fails'}</td><td>${applyButton(o.path, o.value, 'Apply')}</td></tr>`,
   )}</tbody></table></div>`;
 }
 
@@ -89,7 +89,7 @@ function boreSection(r: SizingResult): SafeHtml {
   return html`<h3>Master-cylinder bore</h3>
 <p>${b.rule}: ${fixed(b.required_deceleration_ms2, 2)} m/s² needs ${fixed(b.pressure_for_required_bar, 1)} bar. Bores from ${fixed(b.min_bore_mm, 1)} to ${fixed(b.max_bore_mm, 1)} mm keep the pedal force at most ${fixed(b.pedal_force_target_n, 0)} N (limit ${b.pedal_force_limit_n} N) and the line pressure at the limit at most ${b.max_line_pressure_bar} bar (common practice, no source). Now ${b.current_bore_mm} mm.</p>
 ${b.notes.map((n) => html`<p class="hint">${n}</p>`)}
-${ok.length ? html`<div class="scroll"><table><thead><tr><th scope="col">Bore</th><th scope="col">Pedal force (N)</th><th scope="col">Pressure at the limit (bar)</th><th scope="col"></th></tr></thead><tbody>${ok.map((c) => html`<tr><th scope="row">${c.label}</th><td>${fixed(c.pedal_force_n, 0)}</td><td>${fixed(c.pressure_at_limit_bar, 1)}</td><td>${applyButton(b.path, Math.round(c.bore_mm * 1000) / 1000, 'Apply')}</td></tr>`)}</tbody></table></div>` : ''}`;
+${ok.length ? html`<div class="scroll"><table class="data"><thead><tr><th scope="col">Bore</th><th scope="col">Pedal force (N)</th><th scope="col">Pressure at the limit (bar)</th><th scope="col"></th></tr></thead><tbody>${ok.map((c) => html`<tr><th scope="row">${c.label}</th><td>${fixed(c.pedal_force_n, 0)}</td><td>${fixed(c.pressure_at_limit_bar, 1)}</td><td>${applyButton(b.path, Math.round(c.bore_mm * 1000) / 1000, 'Apply')}</td></tr>`)}</tbody></table></div>` : ''}`;
 }
 
 function valveSection(r: SizingResult): SafeHtml {
@@ -134,7 +134,7 @@ function robustnessSection(r: SizingResult, asked: boolean): SafeHtml {
   return html`<h3>Robustness</h3>
 <p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ?? '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
 ${chartBlock('chart-sizing-histogram', histogram(r), html`Red line: margin 0 (below it a rule fails); dotted: 5th percentile.`, 'Histogram of the smallest margin over the perturbed vehicles')}
-<div class="scroll"><table><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
+<div class="scroll"><table class="data"><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
 <tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.input}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>`;
 }
 

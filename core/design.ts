@@ -35,6 +35,15 @@ export const LoadState = z.strictObject({
   front_axle_kg: numAbove(0, 60000),
   cg_height_m: numAbove(0, 10),
   ...loadStateBuildUpShape, // optional: derived_from, from_build_up, overrides, cg_height_derived_from, cg_height_uncertainty_m
+}).superRefine((s, ctx) => {
+  // On the load state itself, so it is reported even when other parts of the file have problems too.
+  if (s.front_axle_kg >= s.mass_kg) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['front_axle_kg'],
+      message: `${s.front_axle_kg} is not below mass_kg ${s.mass_kg} (the front axle load must be between 0 and the vehicle mass)`,
+    });
+  }
 });
 
 export const DiscBrake = z.strictObject({
@@ -234,13 +243,6 @@ export const designShape = {
 export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
   const seen = new Map<string, number>();
   d.load_states.forEach((s, i) => {
-    if (s.front_axle_kg >= s.mass_kg) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['load_states', i, 'front_axle_kg'],
-        message: `${s.front_axle_kg} is not below mass_kg ${s.mass_kg} (the front axle load must be between 0 and the vehicle mass)`,
-      });
-    }
     // Compared only with a wheelbase inside its own range, so a bad wheelbase gives one message, not one per state.
     const E = d.vehicle.wheelbase_m;
     if (E >= 0.5 && E <= 10 && s.cg_height_m >= E) {

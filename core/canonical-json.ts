@@ -23,7 +23,9 @@ export const CANONICAL_DIGITS = 15;
 export function canonicalNumber(n: number): string {
   if (!Number.isFinite(n)) throw new CanonicalJsonError('CORE_ERR_CANONICAL_NON_FINITE', `${String(n)} has no JSON form (numbers must be finite)`);
   if (n === 0) return '0';
-  return String(Number(n.toPrecision(CANONICAL_DIGITS)));
+  const rounded = Number(n.toPrecision(CANONICAL_DIGITS));
+  // Next to the largest double, rounding up would overflow to Infinity: keep the number as it is.
+  return String(Number.isFinite(rounded) ? rounded : n);
 }
 
 function write(v: unknown, path: string, out: string[]): void {

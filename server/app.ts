@@ -20,6 +20,8 @@ import { AppError, appErrors, BODY_LIMIT } from './errors.ts';
 import { sendHtml } from './html-reply.ts';
 import { workbenchRoutes } from './routes/workbench.ts';
 import { cgLiftRoutes } from './routes/cg-lift.ts';
+import { packetRoutes } from './routes/packet.ts';
+import { storeRoutes } from './routes/store.ts';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
 const STATIC_DIR = join(ROOT, 'static');
@@ -113,6 +115,8 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
 
   app.register(async (scope) => workbenchRoutes(scope, assets));
   app.register(async (scope) => cgLiftRoutes(scope));
+  app.register(storeRoutes); // design store: LOCKSTEP_DATA_DIR (default ./data), opened on first use
+  app.register(packetRoutes);
 
   app.setNotFoundHandler((req, reply) => sendError(req, reply, appErrors.notFound(req.url.split('?')[0]!.slice(0, 200)), assets));
   app.setErrorHandler((err: FastifyError | AppError, req, reply) => {

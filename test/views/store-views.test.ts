@@ -5,7 +5,7 @@ import { demoDesign } from '../../core/index.ts';
 import { evaluateForPacket } from '../../server/packet/build-packet.ts';
 import { packetContent } from '../../server/packet/packet-content.ts';
 import type { DesignSummary } from '../../server/store/design-store.ts';
-import { storePanel } from '../../views/panels/store.ts';
+import { storeInputsPanel } from '../../views/panels/store.ts';
 import { designsListView, diffView, historyView, packetHtml } from '../../views/store-views.ts';
 
 const EVIL = '"><script>alert(1)</script>&\'';
@@ -39,7 +39,7 @@ describe('store views', () => {
   });
   it('escape identification fields in the panel inputs and in the packet print view', () => {
     const ctx = { values: { 'identification.owner': EVIL, _design_id: EVIL }, units: 'metric' as const, errors: new Map(), structural: new Set<string>(), rendered: new Set<string>() };
-    const inputs = storePanel.inputs!(ctx).html;
+    const inputs = storeInputsPanel.inputs!(ctx).html;
     expect(inputs).toContain(`value="${ESCAPED}"`);
     expect(inputs).not.toContain('<script>');
     const d = demoDesign();

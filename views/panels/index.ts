@@ -12,6 +12,7 @@ import { hydraulicsPanel } from './hydraulics.ts';
 import { limitsInputsPanel, limitsPanel } from './limits.ts';
 import { loadStatesPanel } from './load-states.ts';
 import { sizingInputsPanel, sizingPanel } from './sizing.ts';
+import { storeInputsPanel, storePanel } from './store.ts';
 import type { Panel } from './panel.ts';
 import { surfacesPanel } from './surfaces.ts';
 import { tablePanel } from './table.ts';
@@ -37,4 +38,6 @@ export const panels: Panel[] = [
   limitsPanel,
   sizingInputsPanel,
   sizingPanel,
+  storeInputsPanel,
+  storePanel,
 ];

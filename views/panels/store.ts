@@ -9,9 +9,10 @@ import type { Panel } from './panel.ts';
 
 const SAVE_NEW = raw(`hx-vals='{"_design_id": ""}'`);
 
-export const storePanel: Panel = {
-  id: 'packet',
-  title: 'Evidence packet and saved designs',
+/** Inputs (left column): the identification printed on the packet's cover. */
+export const storeInputsPanel: Panel = {
+  id: 'packet-inputs',
+  title: 'Evidence packet: identification',
   inputs: (ctx) => {
     ctx.rendered.add('_design_id');
     return html`<p class="hint">Printed on the cover of the evidence packet, exactly as typed.</p>
@@ -24,6 +25,12 @@ ${textField(ctx, 'identification.approval_code', 'Approval code or reference', {
 </div>
 <input type="hidden" id="store-design-id" name="_design_id" value="${ctx.values._design_id ?? ''}">`;
   },
+};
+
+/** Results (right column): save, saved designs, packet and exports. */
+export const storePanel: Panel = {
+  id: 'packet',
+  title: 'Evidence packet and saved designs',
   results: () => html`<div class="store-actions">
 <p><label for="store-message">Message for this revision</label> <input id="store-message" name="_message" maxlength="2000" class="w-l" placeholder="e.g. rear caliper 38 → 42 mm"></p>
 <p><button type="button" hx-post="/designs/save" hx-include="#design-form, #store-message" hx-target="#store-status">Save revision</button>

@@ -136,7 +136,8 @@ function problemLabel(path: string, labels: ReadonlyMap<string, string> | undefi
  */
 export function fieldMessagesOob(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): SafeHtml {
   const m = errorMap(errors);
-  return html`${[...fieldsWithMessages(values, units).names].map((n) => fieldMessage(n, m.get(n), true))}`;
+  // control fields (names starting with "_") have no message line
+  return html`${[...fieldsWithMessages(values, units).names].filter((n) => !n.startsWith('_')).map((n) => fieldMessage(n, m.get(n), true))}`;
 }
 
 /** The intro is shown while the page holds the demo (its name starts "Demo:"). */

@@ -60,29 +60,135 @@ export function fmtNum(v: unknown, decimals = 3): string {
 /** Longer lists of numbers are plot series: named, not printed. */
 const MAX_LISTED = 24;
 
-/** A compact one-line text for any JSON value. */
-export function textOf(v: unknown, depth = 0): string {
+// Generic result sections: titles in words with the unit in brackets, read from the key's suffix
+// (e.g. max_deceleration_ms2 -> "Max deceleration [m/s²]"), and numbers at a sensible precision.
+
+/** Unit suffixes of result keys, longest first (a key ending in one names that unit). */
+const UNIT_SUFFIXES: readonly [string, string][] = [
+  ['_j_per_kg_k', 'J/(kg·K)'],
+  ['_per_s', '1/s'],
+  ['_ms2', 'm/s²'],
+  ['_mm3', 'mm³'],
+  ['_pct', '%'],
+  ['_deg', '°'],
+  ['_kmh', 'km/h'],
+  ['_bar', 'bar'],
+  ['_kw', 'kW'],
+  ['_nm', 'N·m'],
+  ['_kj', 'kJ'],
+  ['_kg', 'kg'],
+  ['_mm', 'mm'],
+  ['_ft', 'ft'],
+  ['_m', 'm'],
+  ['_n', 'N'],
+  ['_g', 'g'],
+  ['_j', 'J'],
+  ['_k', 'K'],
+  ['_c', '°C'],
+  ['_s', 's'],
+];
+
+/** Keys whose words read badly when derived (the unit is still taken from the suffix). */
+const TITLE_OVERRIDES: Record<string, string> = {
+  id: 'ID',
+  k_from: 'Adhesion k from',
+  k_to: 'Adhesion k to',
+  z_from: 'Braking rate z from',
+  z_to: 'Braking rate z to',
+  v1_kmh: 'Initial speed v1',
+  v2_kmh: 'Final speed v2',
+  pct_when_rear_slips: 'Share when rear slips [%]',
+  failing_without_regen: 'Fails without regeneration',
+  zero_regen: 'Zero regeneration',
+};
+
+/** Words always written in capitals or otherwise fixed. */
+const WORD_FIXES: Record<string, string> = { cg: 'CG', abs: 'ABS', pct: '%', regen: 'regeneration', nm: 'N·m' };
+
+/** Words and unit of a result key: max_deceleration_ms2 -> { words: "Max deceleration", unit: "m/s²" }. */
+export function keyParts(key: string): { words: string; unit: string } {
+  let base = key;
+  let unit = '';
+  for (const [suf, u] of UNIT_SUFFIXES) {
+    if (key.length > suf.length && key.endsWith(suf)) {
+      base = key.slice(0, -suf.length);
+      unit = u;
+      break;
+    }
+  }
+  const override = TITLE_OVERRIDES[key] ?? TITLE_OVERRIDES[base];
+  if (override) return { words: override, unit: override.includes('[') ? '' : unit };
+  const words = base.split('_').filter((w) => w !== '').map((w) => WORD_FIXES[w] ?? w).join(' ');
+  return { words: words.charAt(0).toUpperCase() + words.slice(1), unit };
+}
+
+/** Words inside a sentence: first letter small unless the first word is an abbreviation (CG, ABS, ID). */
+function lowerFirst(words: string): string {
+  const first = words.split(' ')[0] ?? '';
+  return first.length > 1 && first === first.toUpperCase() ? words : words.charAt(0).toLowerCase() + words.slice(1);
+}
+
+/** A column or row title for a result key, unit in brackets: "Max gradient [%]". */
+export function columnTitle(key: string): string {
+  const { words, unit } = keyParts(key);
+  return unit ? `${words} [${unit}]` : words;
+}
+
+/** Dimensionless rates and ratios (braking rate, utilisation, efficiency, adhesion, shares): 3 decimals. */
+const RATIO_KEY = /(^|_)(braking_rate|braking_rates|utilisation|efficiency|adhesion|adhesion_needed|share|z|k)(_|$)/;
+
+function noNegativeZero(s: string): string {
+  return /^-0(\.0*)?$/.test(s) ? s.slice(1) : s;
+}
+
+function trimZeros(s: string): string {
+  return s.includes('.') && !s.includes('e') ? s.replace(/0+$/, '').replace(/\.$/, '') : s;
+}
+
+/** A number to `sig` significant digits (integer digits are never dropped); exponent only beyond 1e12 or below 1e-4. */
+export function fmtSig(v: number, sig = 4): string {
+  if (!Number.isFinite(v)) return String(v);
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e12 || a < 1e-4) return v.toExponential(sig - 1);
+  const decimals = Math.max(0, Math.min(8, sig - 1 - Math.floor(Math.log10(a))));
+  return noNegativeZero(trimZeros(v.toFixed(decimals)));
+}
+
+/** A number of a generic result section, precision chosen by its key. */
+export function fmtKeyed(v: number, key?: string): string {
+  if (!Number.isFinite(v)) return String(v);
+  if (key !== undefined && keyParts(key).unit === '' && RATIO_KEY.test(key) && Math.abs(v) < 100) return noNegativeZero(trimZeros(v.toFixed(3)));
+  return fmtSig(v, 4);
+}
+
+/** A compact one-line text for any JSON value; `key` (the value's key) chooses precision and unit words. */
+export function textOf(v: unknown, depth = 0, key?: string): string {
   if (v === null || v === undefined) return '—';
-  if (typeof v === 'number') return fmtNum(v, 4);
+  if (typeof v === 'number') return fmtKeyed(v, key);
   if (typeof v === 'boolean') return v ? 'yes' : 'no';
   if (typeof v === 'string') return v;
   if (Array.isArray(v)) {
     if (v.length > MAX_LISTED && v.every((x) => typeof x === 'number' || x === null)) return `series of ${v.length} values (plotted in the page; see the CSV export)`;
-    if (depth > 2) return `${v.length} entries`;
-    return v.map((x) => textOf(x, depth + 1)).join(', ');
+    if (v.length > MAX_LISTED && v.every(isRecord)) return `${v.length} entries (not listed here; see the JSON result)`;
+    if (depth > 2 || (depth >= 2 && v.some(isRecord))) return `${v.length} entries`;
+    return v.map((x) => textOf(x, depth + 1, key)).join(', ');
   }
   if (typeof v === 'object') {
     if (depth > 2) return '…';
     return Object.entries(v as Record<string, unknown>)
-      .map(([k, x]) => `${k}: ${textOf(x, depth + 1)}`)
+      .map(([k, x]) => {
+        const { words, unit } = keyParts(k);
+        const t = textOf(x, depth + 1, k);
+        return `${lowerFirst(words)}: ${t}${unit && typeof x === 'number' ? ` ${unit}` : ''}`;
+      })
       .join('; ');
   }
   return String(v);
 }
 
 function humanise(key: string): string {
-  const s = key.replace(/_/g, ' ');
-  return s.charAt(0).toUpperCase() + s.slice(1);
+  return columnTitle(key);
 }
 
 const isRecord = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
@@ -119,25 +225,28 @@ export function genericBlocks(title: string, value: unknown, depth = 0): Block[]
   const rows: [string, string][] = [];
   const nested: [string, unknown][] = [];
   for (const [k, v] of Object.entries(rec)) {
-    if (isScalar(v) || (Array.isArray(v) && v.every(isScalar))) rows.push([humanise(k), textOf(v)]);
+    if (isScalar(v) || (Array.isArray(v) && v.every(isScalar))) rows.push([humanise(k), textOf(v, 0, k)]);
     else nested.push([k, v]);
   }
   if (rows.length) out.push({ kind: 'kv', rows });
   for (const [k, v] of nested) {
-    if (depth >= 3) out.push({ kind: 'p', text: `${humanise(k)}: ${textOf(v)}` });
+    if (depth >= 3) out.push({ kind: 'p', text: `${humanise(k)}: ${textOf(v, 0, k)}` });
     else out.push(...genericBlocks(humanise(k), v, depth + 1));
   }
   return out;
 }
 
 const MAX_TABLE_COLUMNS = 8;
+/** Characters of table text across the printable width (A4, 7.5 pt, roughly), and the longest word kept whole. */
+const LINE_CHARS = 110;
+const LONG_WORD_CHARS = 24;
 
 /** A list of flat records given in a cell: keys once in the header, values per record. */
 function compactRecords(v: unknown): { keys: string[]; text: string } | null {
   if (!Array.isArray(v) || v.length === 0 || !v.every(isRecord)) return null;
   const keys: string[] = [];
   for (const r of v as Record<string, unknown>[]) for (const k of Object.keys(r)) if (!keys.includes(k)) keys.push(k);
-  return { keys, text: (v as Record<string, unknown>[]).map((r) => keys.map((k) => textOf(r[k], 2)).join(' ')).join('; ') };
+  return { keys, text: (v as Record<string, unknown>[]).map((r) => keys.map((k) => textOf(r[k], 2, k)).join(' ')).join('; ') };
 }
 
 /** Tables for a list of records; wide ones are split, repeating the first column. */
@@ -146,16 +255,32 @@ export function recordTables(list: Record<string, unknown>[]): Block[] {
   for (const r of list) for (const k of Object.keys(r)) if (!columns.includes(k)) columns.push(k);
   const headers = columns.map((c) => {
     const inner = list.map((r) => compactRecords(r[c])).find((x) => x !== null);
-    return inner ? `${humanise(c)} (${inner.keys.map((k) => k.replace(/_/g, ' ')).join(', ')})` : humanise(c);
+    return inner ? `${humanise(c)} (${inner.keys.map((k) => lowerFirst(columnTitle(k))).join(', ')})` : humanise(c);
   });
-  const cells = list.map((r) => columns.map((c) => compactRecords(r[c])?.text ?? textOf(r[c])));
-  if (columns.length <= MAX_TABLE_COLUMNS) return [{ kind: 'table', columns: headers, rows: cells }];
-  const out: Block[] = [];
-  for (let start = 1; start < columns.length; start += MAX_TABLE_COLUMNS - 1) {
-    const idx = [0, ...Array.from({ length: Math.min(MAX_TABLE_COLUMNS - 1, columns.length - start) }, (_, i) => start + i)];
-    out.push({ kind: 'table', columns: idx.map((i) => headers[i]!), rows: cells.map((row) => idx.map((i) => row[i]!)) });
+  const cells = list.map((r) => columns.map((c) => compactRecords(r[c])?.text ?? textOf(r[c], 0, c)));
+  // Each column needs at least its longest word (in characters, long tokens capped); columns are grouped so
+  // that these fit across the page and no word has to be broken, the first column repeated in every group.
+  const longest = (t: string) => Math.min(LONG_WORD_CHARS, Math.max(0, ...t.split(/\s+/).map((w) => w.length)));
+  const need = columns.map((_, i) => Math.max(4, longest(headers[i]!) * 1.1, ...cells.map((r) => longest(r[i]!))) + 2);
+  const total = need.reduce((a, b) => a + b, 0);
+  if (columns.length <= MAX_TABLE_COLUMNS && total <= LINE_CHARS) return [{ kind: 'table', columns: headers, rows: cells }];
+  const groups: number[][] = [];
+  let cur: number[] = [];
+  let used = need[0]!;
+  for (let i = 1; i < columns.length; i++) {
+    if (cur.length > 0 && (cur.length >= MAX_TABLE_COLUMNS - 1 || used + need[i]! > LINE_CHARS)) {
+      groups.push(cur);
+      cur = [];
+      used = need[0]!;
+    }
+    cur.push(i);
+    used += need[i]!;
   }
-  return out;
+  if (cur.length > 0) groups.push(cur);
+  return groups.map((g) => {
+    const idx = [0, ...g];
+    return { kind: 'table', columns: idx.map((i) => headers[i]!), rows: cells.map((row) => idx.map((i) => row[i]!)) } satisfies Block;
+  });
 }
 
 /** Result keys printed by dedicated sections; everything else is printed generically. */
@@ -594,6 +719,8 @@ export function packetContent(input: PacketInput): PacketContent {
     kind: 'table',
     columns: ['Load state', 'Test', 'Test mass kg', 'Front axle kg', 'Speed km/h', 'Speed source', 'Pedal force N', 'Measured deceleration m/s²', 'Stopping distance m', 'Wheel lock (F/R/none)'],
     rows: blankRows,
+    // room to write in every column; headers wrap at spaces (weights in points of the A4 text width)
+    widths: [46, 52, 64, 46, 38, 40, 46, 62, 47, 54],
   });
   b.push({ kind: 'p', text: 'Roller tester, per axle and wheel (left / right braking force in N, imbalance in %):', style: 'bold' });
   b.push({

@@ -75,40 +75,66 @@ function para(ctx: Ctx, text: string, size: number, font: 'R' | 'B', opts: PDFKi
   doc.text(s, PAGE.margin, doc.y, { width: width(doc), ...opts });
 }
 
-function columnWidths(doc: PDFKit.PDFDocument, columns: string[], rows: string[][], weights?: number[]): number[] {
+const CELL_PAD = 2.5;
+
+/**
+ * Column widths in points. Each column gets at least the measured width of its longest word (header in bold,
+ * cells in regular; capped at a third of the page so one long token cannot starve the rest), so text wraps at
+ * spaces and no word is broken; the remaining width is shared in proportion to how much more each column's
+ * content wants. Given weights are used as they are, widened where a word would not fit.
+ */
+function columnWidths(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]): number[] {
+  const { doc } = ctx;
   const W = width(doc);
-  if (weights && weights.length === columns.length) {
-    const sum = weights.reduce((a, b) => a + b, 0);
-    return weights.map((w) => (w / sum) * W);
-  }
-  // Each column gets at least its longest word (capped), the rest shared by capped content length.
-  const longestWord = (s: string) => Math.max(0, ...s.split(/\s+/).map((w) => w.length));
+  const measure = (s: string, font: 'R' | 'B') => doc.font(font).fontSize(FS.table).widthOfString(ctx.t(s));
+  // pdfkit measures a word with its following space when it decides to break it: leave room for that space
+  const extra = 2 * CELL_PAD + 1 + measure(' ', 'B');
+  const longestWord = (s: string, font: 'R' | 'B') => Math.max(0, ...s.split(/\s+/).map((w) => measure(w, font)));
+  const wordCap = W / 3;
   const mins = columns.map((c, i) => {
-    let m = Math.min(longestWord(c), 16);
-    for (const r of rows) m = Math.max(m, Math.min(longestWord(r[i] ?? ''), 16));
-    return Math.max(m, 3) + 1;
-  });
-  const wants = columns.map((c, i) => {
-    let m = Math.min(c.length, 18);
-    for (const r of rows) m = Math.max(m, Math.min((r[i] ?? '').length, 48));
-    return Math.max(m, mins[i]!);
+    let m = Math.min(longestWord(c, 'B'), wordCap);
+    for (const r of rows) m = Math.max(m, Math.min(longestWord(r[i] ?? '', 'R'), wordCap));
+    return Math.max(m, 12) + extra;
   });
   const minSum = mins.reduce((a, b) => a + b, 0);
+  if (weights && weights.length === columns.length) {
+    const sum = weights.reduce((a, b) => a + b, 0);
+    const given = weights.map((w) => (w / sum) * W);
+    if (minSum > W || given.every((g, i) => g >= mins[i]!)) return given;
+    // widen the columns a word does not fit, taking the room from the others in proportion to their slack
+    const short = given.reduce((a, g, i) => a + Math.max(0, mins[i]! - g), 0);
+    const slack = given.reduce((a, g, i) => a + Math.max(0, g - mins[i]!), 0);
+    return given.map((g, i) => (g < mins[i]! ? mins[i]! : g - ((g - mins[i]!) / slack) * short));
+  }
+  const wants = columns.map((c, i) => {
+    // a header may wrap at spaces: it asks for little more than its longest word
+    let m = Math.min(measure(c, 'B'), Math.max(mins[i]! - extra, 60));
+    for (const r of rows) m = Math.max(m, Math.min(measure(r[i] ?? '', 'R'), W * 0.5));
+    return Math.max(m + extra, mins[i]!);
+  });
   const wantSum = wants.reduce((a, b) => a + b, 0);
-  if (wantSum <= minSum) return mins.map((m) => (m / minSum) * W);
-  // interpolate between minimum and wanted widths so that the total is W (in character units)
-  const charW = FS.table * 0.55;
-  const budget = W / charW;
-  const t = Math.max(0, Math.min(1, (budget - minSum) / (wantSum - minSum)));
-  const chars = mins.map((m, i) => m + t * (wants[i]! - m));
-  const sum = chars.reduce((a, b) => a + b, 0);
-  return chars.map((c) => (c / sum) * W);
+  if (minSum >= W) {
+    // too many long words: squeeze only the columns with the longest ones (ids, paths), down to a common cap
+    let lo = 0;
+    let hi = Math.max(...mins);
+    for (let n = 0; n < 40; n++) {
+      const c = (lo + hi) / 2;
+      if (mins.reduce((a, m) => a + Math.min(m, c), 0) > W) hi = c;
+      else lo = c;
+    }
+    const capped = mins.map((m) => Math.min(m, lo));
+    const sum = capped.reduce((a, b) => a + b, 0);
+    return capped.map((m) => (m / sum) * W);
+  }
+  if (wantSum <= W) return wants.map((w) => (w / wantSum) * W);
+  const t = (W - minSum) / (wantSum - minSum);
+  return mins.map((m, i) => m + t * (wants[i]! - m));
 }
 
 function table(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]): void {
   const { doc } = ctx;
-  const widths = columnWidths(doc, columns, rows, weights);
-  const pad = 2.5;
+  const widths = columnWidths(ctx, columns, rows, weights);
+  const pad = CELL_PAD;
   const rowHeight = (cells: string[], font: 'R' | 'B') => {
     doc.font(font).fontSize(FS.table);
     let h = 0;
@@ -131,8 +157,11 @@ function table(ctx: Ctx, columns: string[], rows: string[][], weights?: number[]
     doc.x = PAGE.margin;
     doc.y = y + h;
   };
-  const header = () => drawRow(columns, 'B', true);
-  ensure(ctx, rowHeight(columns, 'B') + (rows[0] ? rowHeight(rows[0], 'R') : 0));
+  // A title that has to wrap puts its unit on a line of its own, so "[m/s²]" is never split at the slash.
+  doc.font('B').fontSize(FS.table);
+  const heads = columns.map((c, i) => (doc.widthOfString(ctx.t(c)) > widths[i]! - 2 * pad ? c.replace(/ (\[[^\]]*\])$/, '\n$1') : c));
+  const header = () => drawRow(heads, 'B', true);
+  ensure(ctx, rowHeight(heads, 'B') + (rows[0] ? rowHeight(rows[0], 'R') : 0));
   header();
   for (const r of rows) {
     const cells = columns.map((_, i) => r[i] ?? '');

@@ -415,6 +415,17 @@ function reindex(values: FormValues, listPath: string, entries: Array<Array<[str
 
 export type ListOp = { op: 'add' | 'dup' | 'remove'; list: string; index: number | null };
 
+/**
+ * Lists that may be empty (optional lists of an optional block): their last entry can be removed, and "add" on
+ * an empty list creates the first entry from these field names and starting texts. Add a line for a new list.
+ */
+export const EMPTYABLE_LISTS: Array<{ list: string; blank: Record<string, string> }> = [
+  { list: 'build_up.removed', blank: { name: '', mass_kg: '', x_m: '', cg_height_m: '', group: 'removed' } },
+  { list: 'build_up.added', blank: { name: '', mass_kg: '', x_m: '', cg_height_m: '', group: 'added' } },
+  { list: 'build_up.seats', blank: { name: '', x_m: '', cg_height_m: '', driver: 'false' } },
+  { list: 'build_up.tanks', blank: { name: '', full_kg: '', x_m: '', cg_height_m: '', fill_weighed: '' } },
+];
+
 /** Reads `_op` values such as "add:load_states", "dup:load_states[1]", "remove:axles.front.brake.piston_diameters_mm[1]". */
 export function parseListOp(text: string): ListOp | null {
   const m = /^(add|dup|remove):([A-Za-z0-9_.[\]]+?)(?:\[(\d+)\])?$/.exec(text);
@@ -438,9 +449,15 @@ export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): Fo
   const idx = listIndices(values, op.list);
   const entries = idx.map((i) => entryOf(values, op.list, i));
   const from = [...idx];
+  const emptyable = EMPTYABLE_LISTS.find((l) => l.list === op.list);
+  if (op.op === 'add' && idx.length === 0 && emptyable) {
+    const out = { ...values };
+    for (const [k, v] of Object.entries(emptyable.blank)) out[`${op.list}[0].${k}`] = v;
+    return out;
+  }
   if (op.op === 'remove') {
     const at = idx.indexOf(op.index ?? -1);
-    if (at < 0 || idx.length <= 1) return values;
+    if (at < 0 || (idx.length <= 1 && !emptyable)) return values;
     entries.splice(at, 1);
     from.splice(at, 1);
     return reindex(values, op.list, entries, from);

@@ -7,6 +7,7 @@ import { brakesPanel } from './brakes.ts';
 import { checksPanel } from './checks.ts';
 import { chartsPanel } from './charts.ts';
 import { conversionPanel } from './conversion.ts';
+import { conversionInputsPanel } from './conversion-inputs.ts';
 import { hardwarePanel, pitfallsPanel } from './hardware.ts';
 import { hydraulicsPanel } from './hydraulics.ts';
 import { limitsInputsPanel, limitsPanel } from './limits.ts';
@@ -32,6 +33,7 @@ export const panels: Panel[] = [
   checksPanel,
   pitfallsPanel,
   tablePanel,
+  conversionInputsPanel,
   conversionPanel,
   hardwarePanel,
   limitsInputsPanel,

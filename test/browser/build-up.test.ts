@@ -3,44 +3,27 @@
 // Hand-derived (docs/build-up.md "What is computed"): base vehicle 1400 + 1200 kg = 2600 kg; an item added over
 // the rear axle (x = L) adds its whole mass to the rear axle, so the unladen state (no driver seat listed) is
 // 2600 + 200 = 2800 kg, and 2600 + 300 = 2900 kg after the item's mass is changed to 300 kg.
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import type { FastifyInstance } from 'fastify';
-import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildApp } from '../../server/app.ts';
+import { type BrowserHarness, openBrowser } from './harness.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
-let app: FastifyInstance;
-let ctx: BrowserContext;
+let h: BrowserHarness;
 let page: Page;
-let profile = '';
-const problems: string[] = [];
+let base = '';
+let problems: string[] = [];
 
 beforeAll(async () => {
-  app = buildApp();
-  await app.listen({ host: '127.0.0.1', port: 0 });
-  const base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
-  profile = mkdtempSync(join(tmpdir(), 'lockstep-build-up-browser-'));
-  ctx = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    viewport: { width: 1366, height: 900 },
-  });
-  page = await ctx.newPage();
-  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-  page.on('console', (m) => {
-    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
-  });
+  h = await openBrowser({ name: 'build-up', viewport: { width: 1366, height: 900 } });
+  page = h.page;
+  problems = h.problems;
+  base = h.base;
   await page.goto(`${base}/?fresh`);
   await page.waitForSelector('#panel-conversion-inputs', { timeout: 30000 });
 }, 90000);
 
 afterAll(async () => {
-  await ctx?.close();
-  await app?.close();
-  if (profile) rmSync(profile, { recursive: true, force: true });
+  await h?.close();
 });
 
 const unladenMass = async () =>

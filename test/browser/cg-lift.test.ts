@@ -6,44 +6,25 @@
 // ΔW = W (h − r) tan θ / L = 3500 · 0.65 · 0.16594 / 3.665 = 103.0 kg, so the readings are 1803 kg (front, rear
 // raised) and 1903 kg (rear, front raised), and the tool must give h = 1.00 m to within the 1 kg rounding
 // (1 kg of ΔW is 3.665 / (3500 · 0.16594) = 6.3 mm of h).
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import type { FastifyInstance } from 'fastify';
-import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildApp } from '../../server/app.ts';
+import { type BrowserHarness, openBrowser } from './harness.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
-let app: FastifyInstance;
-let ctx: BrowserContext;
+let h: BrowserHarness;
 let page: Page;
-let profile = '';
-const problems: string[] = [];
+let problems: string[] = [];
 
 beforeAll(async () => {
-  app = buildApp();
-  await app.listen({ host: '127.0.0.1', port: 0 });
-  const base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
-  profile = mkdtempSync(join(tmpdir(), 'lockstep-cg-lift-browser-'));
-  ctx = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    viewport: { width: 1366, height: 900 },
-  });
-  page = await ctx.newPage();
-  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-  page.on('console', (m) => {
-    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
-  });
-  await page.goto(`${base}/?fresh`);
+  h = await openBrowser({ name: 'cg-lift', viewport: { width: 1366, height: 900 } });
+  page = h.page;
+  problems = h.problems;
+  await page.goto(`${h.base}/?fresh`);
   await page.waitForSelector('#cg-lift form', { timeout: 30000 });
 }, 90000);
 
 afterAll(async () => {
-  await ctx?.close();
-  await app?.close();
-  if (profile) rmSync(profile, { recursive: true, force: true });
+  await h?.close();
 });
 
 const LADEN_CG = '#f-load_states-1-cg_height_m';

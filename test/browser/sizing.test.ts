@@ -1,47 +1,27 @@
 // Real-browser test of the sizing panel (views/panels/sizing.ts): Debian's chromium driven by playwright-core
 // (never a browser download) against buildApp() on a random loopback port. A 70 mm rear piston over-brakes the
-// demo's rear axle (rear gain (70/48)² = 2.13 times, hand-checked as in test/browser/workbench.test.ts), so the
+// demo's rear axle (rear gain (70/48)² = 2.13 times, hand-derived as in test/browser/workbench.test.ts), so the
 // lock-order rule fails; "Apply" on the first (passing) option must make the design pass, "Undo" restore 70 mm.
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import type { FastifyInstance } from 'fastify';
-import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildApp } from '../../server/app.ts';
+import { type BrowserHarness, openBrowser } from './harness.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
-let app: FastifyInstance;
-let ctx: BrowserContext;
+let h: BrowserHarness;
 let page: Page;
-let profile = '';
-const problems: string[] = [];
+let problems: string[] = [];
 
 beforeAll(async () => {
-  app = buildApp();
-  await app.listen({ host: '127.0.0.1', port: 0 });
-  const base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
-  profile = mkdtempSync(join(tmpdir(), 'lockstep-sizing-browser-'));
-  ctx = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    viewport: { width: 1366, height: 768 },
-  });
-  page = await ctx.newPage();
-  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-  page.on('console', (m) => {
-    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
-  });
-  await page.goto(`${base}/?fresh`);
+  h = await openBrowser({ name: 'sizing', viewport: { width: 1366, height: 768 } });
+  page = h.page;
+  problems = h.problems;
+  await page.goto(`${h.base}/?fresh`);
   // the sizing panel is deferred: it is computed when it is in view (views/pages/workbench.ts deferredSlot)
   await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
   await page.waitForSelector('#chart-sizing-band .chart[data-drawn]', { timeout: 30000 });
 }, 90000);
 
 afterAll(async () => {
-  await ctx?.close();
-  await app?.close();
-  if (profile) rmSync(profile, { recursive: true, force: true });
+  await h?.close();
 });
 
 const REAR = '#f-axles-rear-brake-piston_diameters_mm-0-';

@@ -3,48 +3,28 @@
 // Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.291 in, 58 in = 1.4732 m);
 // the lock-order expectation for a 70 mm rear piston is hand-checked with core evaluate() before writing
 // this test (rear brake gain (70/48)² = 2.13 times the demo's, so the rear axle is over-braked and locks first).
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import type { FastifyInstance } from 'fastify';
-import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
-import { buildApp } from '../../server/app.ts';
+import { type BrowserHarness, openBrowser } from './harness.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
-let app: FastifyInstance;
-let ctx: BrowserContext;
+let h: BrowserHarness;
 let page: Page;
 let base = '';
-let profile = '';
-const problems: string[] = [];
+let problems: string[] = [];
 
 beforeAll(async () => {
-  app = buildApp();
-  await app.listen({ host: '127.0.0.1', port: 0 });
-  base = `http://127.0.0.1:${(app.server.address() as { port: number }).port}`;
-  profile = mkdtempSync(join(tmpdir(), 'lockstep-browser-'));
-  ctx = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    viewport: { width: 1366, height: 768 },
-    acceptDownloads: true,
-  });
-  page = await ctx.newPage();
-  // CSP violations and script errors show up here; the page must produce none
-  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-  page.on('console', (m) => {
-    if (m.type() === 'error' && !/status of 422/.test(m.text())) problems.push(`console: ${m.text()}`);
-  });
+  h = await openBrowser({ name: 'workbench', viewport: { width: 1366, height: 768 }, acceptDownloads: true });
+  page = h.page;
+  problems = h.problems;
+  base = h.base;
   await page.goto(`${base}/?fresh`);
   await page.waitForSelector('#chart-a .chart[data-drawn]', { timeout: 30000 });
 }, 90000);
 
 afterAll(async () => {
-  await ctx?.close();
-  await app?.close();
-  if (profile) rmSync(profile, { recursive: true, force: true });
+  await h?.close();
 });
 
 const drawn = (id: string) => page.getAttribute(`#${id} .chart`, 'data-drawn');

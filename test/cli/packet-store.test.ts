@@ -1,4 +1,4 @@
-// `lockstep packet` and `lockstep store`, run in process. Exit codes per docs (0 ok, 2 invalid input);
+// `lockstep packet` and `lockstep store`, run in process (spec: docs/evidence-packet.md; SHA-256 test vector source: FIPS 180-2, in test/core). Exit codes per docs (0 ok, 2 invalid input);
 // the revision id is the SHA-256 of the canonical design JSON (server/store/revision-id.ts).
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';

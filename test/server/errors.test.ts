@@ -1,4 +1,4 @@
-// Every APP_ERR_* code of the workbench: stable code, HTTP status (RFC 9110 meanings: 400, 404, 413, 415, 422,
+// Every APP_ERR_* code of the workbench: stable code, HTTP status (source: RFC 9110 meanings: 400, 404, 413, 415, 422,
 // 500), a message a person can act on, and a row in docs/errors.md (project convention, style anchors §1:
 // errors declared once and tested as data).
 import { readFileSync } from 'node:fs';

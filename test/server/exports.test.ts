@@ -1,4 +1,4 @@
-// CSV per RFC 4180 §2 (fields with comma, quote or line break enclosed in quotes; quotes doubled; CRLF line
+// Sources: CSV per RFC 4180 §2 (fields with comma, quote or line break enclosed in quotes; quotes doubled; CRLF line
 // ends) and the OWASP "CSV Injection" advice (text starting with = + - @ is prefixed so a spreadsheet does not
 // run it as a formula). Curve values are compared with evaluate(design, { curves: true }) of the same design.
 import { describe, expect, it } from 'vitest';

@@ -2,7 +2,8 @@
  * The sizing panel on the workbench (views/panels/sizing.ts) and its apply / undo operation
  * (server/forms/sizing-apply.ts): applying the recommended part writes it into the form, the design then
  * passes the curve rules in every load state, and "Undo" restores the replaced value.
- * Failing design (test data): the demo van with a 66 mm rear piston and no valve fails lock order.
+ * Failing design (test data): the demo van with a 66 mm rear piston and no valve fails lock order. No outside
+ * values here: the rules are those of core/rules, whose sources are cited in test/core/rules.
  */
 import { describe, expect, it } from 'vitest';
 import { demoDesign, type DesignFile, sizeDesign } from '../../core/index.ts';

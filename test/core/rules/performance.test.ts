@@ -1,5 +1,5 @@
 /**
- * Rule set `performance` (71/320/EEC Annex II 2.1.1 ≈ UN R13 Annex 4 2.1.1 [P]; secondary R13 Rev.4
+ * Sources: rule set `performance` (71/320/EEC Annex II 2.1.1 ≈ UN R13 Annex 4 2.1.1 [P]; secondary R13 Rev.4
  * Annex 4 para 2.2 [V]; booster failure against the secondary figures [M]; parking on 18 % [M]):
  * reference sheet sections 5.1–5.5. Designs from test/core/checks/fixed-split.ts: φ = front pistons
  * / all pistons, ψ = 0.5, χ = 0.2; first locks on k = 0.8 from the closed forms:

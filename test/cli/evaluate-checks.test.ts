@@ -4,26 +4,13 @@
  * Designs: hand-built fixed splits (test/core/checks/fixed-split.ts). φ = 0.6 fails the M1 lock order
  * of 71/320/EEC Annex II Appendix point 3.1.1 from z* = (0.6 − 0.5)/0.2 = 0.50 to 0.80; φ = 0.7 passes.
  */
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main.ts';
+import { run, tempFiles } from './run-cli.ts';
 import { splitDesign } from '../core/checks/fixed-split.ts';
 
-const dir = mkdtempSync(join(tmpdir(), 'lockstep-checks-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
-const file = (name: string, body: unknown) => {
-  const p = join(dir, name);
-  writeFileSync(p, JSON.stringify(body));
-  return p;
-};
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await runCli(argv, { stdout: (t) => void (stdout += t), stderr: (t) => void (stderr += t) });
-  return { code, stdout, stderr };
-}
+const tmp = tempFiles('lockstep-checks-');
+afterAll(() => tmp.remove());
+const file = tmp.file;
 
 describe('lockstep evaluate: checks decide the exit status', () => {
   it('a design failing the M1 lock order exits 1; the JSON names the rule, paragraph, range and margin', async () => {

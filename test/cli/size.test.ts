@@ -6,27 +6,15 @@
  * reference sheet section 1; the efficiency line's own lower bound, about 0.57, is lower) and ends below 1
  * (test/core/sizing/split-band.test.ts derives that end).
  */
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main.ts';
+import { run, tempFiles } from './run-cli.ts';
 import { CAUTION } from '../../core/index.ts';
 import { fixedSplitDesign } from '../core/sizing/fixtures.ts';
 
-const dir = mkdtempSync(join(tmpdir(), 'lockstep-size-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
-const file = (name: string, body: unknown) => {
-  const p = join(dir, name);
-  writeFileSync(p, JSON.stringify(body));
-  return p;
-};
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await runCli(argv, { stdout: (t) => void (stdout += t), stderr: (t) => void (stderr += t) });
-  return { code, stdout, stderr };
-}
+const tmp = tempFiles('lockstep-size-');
+afterAll(() => tmp.remove());
+const file = tmp.file;
 
 describe('lockstep size', () => {
   const f = file('v.json', fixedSplitDesign({ rules: ['fmvss135/lock-sequence', 'eu-appendix/efficiency'] }));

@@ -38,3 +38,19 @@ describe('bin/lockstep.mjs', () => {
     expect(r.stderr).toMatch(/load_states\[1\]\.mass_kg: "heavy" is not a number/);
   }, 120000); // three process starts through tsx on a shared 2-core machine
 });
+
+describe('bin/lockstep.mjs and a reader that stops early', () => {
+  it('ends quietly when stdout is closed (lockstep evaluate x.json --json | head)', () => {
+    // common practice, no source: command-line tools end without a stack trace on a closed pipe (EPIPE)
+    const demo = lockstep('demo');
+    const p = join(dir, 'demo-pipe.json');
+    writeFileSync(p, demo.stdout);
+    const r = spawnSync('bash', ['-c', `"${process.execPath}" "${bin}" evaluate "${p}" --json | head -c 50 > /dev/null; echo "status \${PIPESTATUS[0]}" >&2`], {
+      cwd: root,
+      encoding: 'utf8',
+      timeout: 60000,
+    });
+    expect(r.stderr).not.toMatch(/EPIPE|Unhandled/);
+    expect(r.stderr).toMatch(/status 0/);
+  });
+});

@@ -1,4 +1,4 @@
-// The store and packet routes inside the whole app (buildApp: helmet, formbody, the app's error handler), as the
+// Sources: the store and packet routes inside the whole app (buildApp: helmet, formbody, the app's error handler), as the
 // page uses them: the workbench form posted to /designs/save and /packet.pdf (field names are design paths).
 // Fastify testing guide: app.inject. Escaping: OWASP XSS Prevention rule #1.
 import { mkdtempSync, rmSync } from 'node:fs';

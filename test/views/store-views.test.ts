@@ -1,4 +1,4 @@
-// User text in the store's HTML views and the packet print view is escaped (OWASP XSS Prevention Cheat Sheet,
+// User text in the store's HTML views and the packet print view is escaped (source: OWASP XSS Prevention Cheat Sheet,
 // rule #1: & < > " ' escaped in element content and quoted attribute values).
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';

@@ -13,6 +13,26 @@ import type { Branch, CurveRule } from '../../../core/rules/rule-types.ts';
 import { axleLoadModel } from '../../../core/axle-loads.ts';
 import { fixedSplit, loads, P, scanMin } from './fixed-split.ts';
 
+/** Random two-piece distributions: front share φ up to z_k, then the rear force grows at `rearSlope` of the total. */
+const twoPieceArb = fc.tuple(
+  fc.double({ min: 0.35, max: 0.65, noNaN: true }), // ψ
+  fc.double({ min: 0.1, max: 0.35, noNaN: true }), // χ
+  fc.double({ min: 0.2, max: 0.8, noNaN: true }), // z_k
+  fc.double({ min: 0.0, max: 1.0, noNaN: true }), // rear slope above z_k
+  fc.double({ min: 0.35, max: 0.8, noNaN: true }), // φ
+);
+function twoPiece([psi, chi, zk, rearSlope, phi]: [number, number, number, number, number]) {
+  const m = axleLoadModel(1000, 1000 * psi, chi * 2.5, 2.5);
+  const t2k = (1 - phi) * zk * m.P;
+  const d: Distribution = {
+    P: m.P,
+    z: [0, zk, 1],
+    t1: [0, phi * zk * m.P, m.P - t2k - rearSlope * (1 - zk) * m.P],
+    t2: [0, t2k, t2k + rearSlope * (1 - zk) * m.P],
+  };
+  return { m, d };
+}
+
 function marginAt(branch: Branch, d: Distribution, m: typeof loads, z: number): number | null {
   const piece = branch.pieces.find((p) => z >= p.z[0] && z <= p.z[1]);
   if (!piece) return null;
@@ -41,17 +61,11 @@ describe('checkBranch: exact per piece, cross-checked by a dense scan', () => {
     const branches = [...M1_LOCK_BRANCHES, ...N1_LOCK_BRANCHES, ...euAppendix.rules.filter((r): r is CurveRule => r.kind === 'curve').flatMap((r) => r.branches)];
     fc.assert(
       fc.property(
-        fc.double({ min: 0.35, max: 0.65, noNaN: true }),
-        fc.double({ min: 0.1, max: 0.35, noNaN: true }),
-        fc.double({ min: 0.2, max: 0.8, noNaN: true }),
-        fc.double({ min: 0.0, max: 1.0, noNaN: true }),
-        fc.double({ min: 0.35, max: 0.8, noNaN: true }),
+        twoPieceArb,
         fc.integer({ min: 0, max: branches.length - 1 }),
-        (psi, chi, zk, rearSlope, phi, bi) => {
-          const m = axleLoadModel(1000, 1000 * psi, chi * 2.5, 2.5);
-          // piece 1 front share phi up to zk, then the rear force grows at rearSlope of the total
-          const t2k = (1 - phi) * zk * m.P;
-          const d: Distribution = { P: m.P, z: [0, zk, 1], t1: [0, phi * zk * m.P, m.P - t2k - rearSlope * (1 - zk) * m.P], t2: [0, t2k, t2k + rearSlope * (1 - zk) * m.P] };
+        (args, bi) => {
+          const { m, d } = twoPiece(args);
+          const zk = args[2];
           const b = branches[bi]!;
           const v = checkBranch(b, m, d);
           if (v.lift_off_in_range || v.worst_margin === null) return;
@@ -99,16 +113,10 @@ describe('curveRulePasses: the pass/fail shortcut gives the verdict of the full 
   it('property: equals checkCurveRule(...).passed on random two-piece distributions', () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 0.35, max: 0.65, noNaN: true }),
-        fc.double({ min: 0.1, max: 0.35, noNaN: true }),
-        fc.double({ min: 0.2, max: 0.8, noNaN: true }),
-        fc.double({ min: 0.0, max: 1.0, noNaN: true }),
-        fc.double({ min: 0.35, max: 0.8, noNaN: true }),
+        twoPieceArb,
         fc.integer({ min: 0, max: rules.length - 1 }),
-        (psi, chi, zk, rearSlope, phi, ri) => {
-          const m = axleLoadModel(1000, 1000 * psi, chi * 2.5, 2.5);
-          const t2k = (1 - phi) * zk * m.P;
-          const d: Distribution = { P: m.P, z: [0, zk, 1], t1: [0, phi * zk * m.P, m.P - t2k - rearSlope * (1 - zk) * m.P], t2: [0, t2k, t2k + rearSlope * (1 - zk) * m.P] };
+        (args, ri) => {
+          const { m, d } = twoPiece(args);
           const rule = rules[ri]!;
           expect(curveRulePasses(rule, m, d)).toBe(checkCurveRule(rule, m, d).passed);
         },

@@ -65,3 +65,13 @@ export async function openBrowser(opts: {
     },
   };
 }
+
+/**
+ * Scrolls the element into view inside the page, in one step: a locator action can fail with "not attached to
+ * the DOM" when an htmx swap replaces the element between finding and scrolling it (a recompute re-sends every
+ * panel). Waits until the element exists first.
+ */
+export async function scrollIntoView(page: Page, selector: string): Promise<void> {
+  await page.waitForSelector(selector, { state: 'attached' });
+  await page.evaluate((sel) => document.querySelector(sel)?.scrollIntoView({ block: 'start' }), selector);
+}

@@ -4,7 +4,7 @@
 // lock-order rule fails; "Apply" on the first (passing) option must make the design pass, "Undo" restore 70 mm.
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { type BrowserHarness, openBrowser } from './harness.ts';
+import { type BrowserHarness, openBrowser, scrollIntoView } from './harness.ts';
 
 let h: BrowserHarness;
 let page: Page;
@@ -16,7 +16,7 @@ beforeAll(async () => {
   problems = h.problems;
   await page.goto(`${h.base}/?fresh`);
   // the sizing panel is deferred: it is computed when it is in view (views/pages/workbench.ts deferredSlot)
-  await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
+  await scrollIntoView(page, '#panel-sizing');
   await page.waitForSelector('#chart-sizing-band .chart[data-drawn]', { timeout: 30000 });
 }, 90000);
 
@@ -40,12 +40,12 @@ describe('sizing panel in chromium', { timeout: 60000 }, () => {
     let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.fill(REAR, '70');
     await answer;
-    await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
+    await scrollIntoView(page, '#panel-sizing');
     await page.waitForFunction(() => document.querySelector('#panel-sizing .deferred-body .sum')?.textContent?.includes('(fails'));
     answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.click('#panel-sizing table.sizing-options tbody tr:first-child button.apply');
     await answer;
-    await page.locator('#panel-sizing').scrollIntoViewIfNeeded();
+    await scrollIntoView(page, '#panel-sizing');
     await page.waitForFunction(() => document.querySelector('#panel-sizing .deferred-body .sum')?.textContent?.includes('(passes'));
     expect(await page.isVisible('button[value^="size:apply:"]:has-text("Undo")')).toBe(true);
     answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));

@@ -274,6 +274,13 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
       }
     }
   }
+  if (d.hydraulics.balance_bar && d.hydraulics.circuit_split === 'diagonal') {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['hydraulics', 'circuit_split'],
+      message: '"diagonal" cannot go with a balance bar: each of its master cylinders feeds one axle; use "front_rear" or remove hydraulics.balance_bar',
+    });
+  }
   const adh = d.adhesion_coefficients;
   if (adh) {
     const dup = adh.findIndex((k, i) => adh.indexOf(k) !== i);

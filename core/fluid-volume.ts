@@ -17,6 +17,12 @@
  *                          directly: x = S_p + d + V_s / A;
  *   secondary circuit lost: the secondary piston is pushed to the end of its bore before the primary
  *                          chamber can hold pressure: x = S_s + d + V_p / A.
+ * Balance bar (two single master cylinders, front bore A_f and rear bore A_r, the bar sending the share s of the
+ * pushrod force to the front): each cylinder moves x_i = d + V_i / A_i, and the bar's pivot, which the pushrod
+ * drives, moves x = s · x_f + (1 − s) · x_r (the pivot divides the bar in the ratio of the force shares). With a
+ * circuit lost its cylinder runs to the end of its stroke and the bar swivels: x_i = S_i. The front cylinder's
+ * stroke is `primary_stroke_mm`, the rear one's `secondary_stroke_mm`. The rear line pressure is λ times the
+ * front-referred one (core/state-model.ts), so the rear axle's volume is taken at the real rear pressure.
  * Pedal travel = x · pedal ratio (the booster passes travel through unchanged). A piston that would
  * need more than its stroke "bottoms": the pedal reaches the stop before that pressure.
  * Defaults (HARDWARE_DEFAULTS) are common practice recalled from memory and are listed in the result
@@ -91,6 +97,14 @@ export interface HydraulicCircuit {
 }
 
 export function circuitsOf(design: DesignFile): HydraulicCircuit[] {
+  // With a balance bar the front cylinder is "primary" and the rear one "secondary" (the schema refuses a
+  // diagonal split with a bar).
+  if (design.hydraulics.balance_bar) {
+    return [
+      { id: 'front', front: 1, rear: 0, chamber: 'primary' },
+      { id: 'rear', front: 0, rear: 1, chamber: 'secondary' },
+    ];
+  }
   if (design.hydraulics.circuit_split === 'diagonal') {
     return [
       { id: 'diagonal_1', front: 0.5, rear: 0.5, chamber: 'primary' },
@@ -117,6 +131,30 @@ export interface PushrodTravel {
   travel: number;
   /** A piston needs more than its stroke. */
   bottomed: boolean;
+}
+
+/** Two single master cylinders on a balance bar, SI: front and rear bore areas (m²), front force share s. */
+export interface BalanceBarCylinders {
+  frontArea: number;
+  rearArea: number;
+  frontShare: number;
+}
+
+/**
+ * Pivot (pushrod) travel of a balance bar for the front and rear cylinders' volumes (m³), with one cylinder's
+ * circuit lost or none; strokes and dead travel from `mc` (primary = front cylinder, secondary = rear).
+ */
+export function balanceBarTravel(
+  mc: TandemMasterCylinder,
+  bar: BalanceBarCylinders,
+  vFront: number,
+  vRear: number,
+  lost: 'none' | 'primary' | 'secondary',
+): PushrodTravel {
+  const xf = lost === 'primary' ? mc.primaryStroke : mc.deadTravel + vFront / bar.frontArea;
+  const xr = lost === 'secondary' ? mc.secondaryStroke : mc.deadTravel + vRear / bar.rearArea;
+  const bottomed = (lost !== 'primary' && xf > mc.primaryStroke) || (lost !== 'secondary' && xr > mc.secondaryStroke);
+  return { travel: bar.frontShare * xf + (1 - bar.frontShare) * xr, bottomed };
 }
 
 /** Pushrod travel for chamber volumes vPrimary, vSecondary (m³), with one chamber lost or none. */
@@ -180,6 +218,7 @@ export interface PedalTravelState {
 export interface PedalTravelResult {
   pedal_travel_available_mm: number;
   warn_pct: number;
+  /** Pushrod travel with every piston at its stop, mm (tandem: both strokes; balance bar: s·S_front + (1 − s)·S_rear). */
   master_cylinder_total_stroke_mm: number;
   circuits: string[];
   /** Keys whose default was used (see HARDWARE_DEFAULTS). */
@@ -193,7 +232,8 @@ export interface PedalTravelResult {
 export const PEDAL_TRAVEL_METHOD =
   'Volume per axle = clearance volume + (hose/caliper expansion + fluid volume / bulk modulus) × pressure; ' +
   'tandem master cylinder: pushrod travel = sum of both pistons (dead travel + volume / bore area); with a circuit lost ' +
-  'the stroke of its chamber is used up before the other builds pressure; pedal travel = pushrod travel × pedal ratio.';
+  'the stroke of its chamber is used up before the other builds pressure; balance bar: pivot travel = s × front cylinder ' +
+  'travel + (1 − s) × rear cylinder travel, a lost circuit\'s cylinder running to its stop; pedal travel = pushrod travel × pedal ratio.';
 
 /** Braking rate the working circuits give at master pressure p, and the rear line pressure. */
 function rateWithCircuits(s: StateModel, front: number, rear: number, p: number): number {
@@ -235,6 +275,7 @@ export function pressureForRate(s: StateModel, front: number, rear: number, z: n
 
 interface Resolved {
   mc: TandemMasterCylinder;
+  bar: BalanceBarCylinders | null;
   front: AxleFluid;
   rear: AxleFluid;
   available: number;
@@ -272,9 +313,11 @@ function resolve(design: DesignFile): Resolved {
     secondaryStroke: pick('hardware.master_cylinder.secondary_stroke_mm', mcIn?.secondary_stroke_mm, d.secondary_stroke_mm) * 1e-3,
     deadTravel: pick('hardware.master_cylinder.dead_travel_mm', mcIn?.dead_travel_mm, d.dead_travel_mm) * 1e-3,
   };
-  if (design.hydraulics.circuit_split === 'front_rear') pick('hardware.master_cylinder.primary_feeds', mcIn?.primary_feeds, d.primary_feeds);
+  const barIn = design.hydraulics.balance_bar;
+  if (design.hydraulics.circuit_split === 'front_rear' && !barIn) pick('hardware.master_cylinder.primary_feeds', mcIn?.primary_feeds, d.primary_feeds);
   return {
     mc,
+    bar: barIn ? { frontArea: mc.area, rearArea: pistonArea(barIn.rear_bore_mm * 1e-3), frontShare: barIn.setting_front_share } : null,
     front: axleFluid(design.axles.front.brake, hw?.front, bulk),
     rear: axleFluid(design.axles.rear.brake, hw?.rear, bulk),
     available: pick('hardware.pedal_travel_available_mm', hw?.pedal_travel_available_mm, d.pedal_travel_available_mm) * 1e-3,
@@ -286,6 +329,13 @@ function resolve(design: DesignFile): Resolved {
 /** Keys given for a brake type that does not use them: reported, not silently dropped. */
 function ignoredKeys(design: DesignFile): Warning[] {
   const w: Warning[] = [];
+  if (design.hydraulics.balance_bar && design.hardware?.master_cylinder?.primary_feeds !== undefined) {
+    w.push({
+      code: 'WARN_HARDWARE_KEY_UNUSED',
+      path: 'hardware.master_cylinder.primary_feeds',
+      message: 'primary_feeds is given but the design has a balance bar, whose front cylinder feeds the front axle and rear cylinder the rear; the value is ignored',
+    });
+  }
   for (const axle of ['front', 'rear'] as const) {
     const h = design.hardware?.[axle];
     if (!h) continue;
@@ -313,8 +363,9 @@ function pushrodAt(
   lostCircuit: HydraulicCircuit | null,
   vol?: Record<string, number>,
 ): { p2: number; x: PushrodTravel } {
-  // The rear line holds pressure only while a working circuit feeds a rear brake.
-  const p2 = circuits.some((c) => c.rear > 0 && c !== lostCircuit) ? rearPressure(s.valve, p) : 0;
+  // The rear line holds pressure only while a working circuit feeds a rear brake; real pressure (λ times the
+  // front-referred one with a balance bar).
+  const p2 = circuits.some((c) => c.rear > 0 && c !== lostCircuit) ? s.rearMasterRatio * rearPressure(s.valve, p) : 0;
   let vPrimary = 0;
   let vSecondary = 0;
   for (const c of circuits) {
@@ -325,7 +376,8 @@ function pushrodAt(
   }
   const lost = lostCircuit === null ? 'none' : lostCircuit.chamber;
   // At zero pressure the pedal is at rest; any pressure first needs the dead travel and clearances.
-  const x = p > 0 ? pushrodTravel(r.mc, vPrimary, vSecondary, lost) : { travel: 0, bottomed: false };
+  const x =
+    p <= 0 ? { travel: 0, bottomed: false } : r.bar ? balanceBarTravel(r.mc, r.bar, vPrimary, vSecondary, lost) : pushrodTravel(r.mc, vPrimary, vSecondary, lost);
   return { p2, x };
 }
 
@@ -461,7 +513,8 @@ export function pedalTravel(design: DesignFile, models: StateModel[]): PedalTrav
   return {
     pedal_travel_available_mm: r.available * 1e3,
     warn_pct: r.warnPct,
-    master_cylinder_total_stroke_mm: (r.mc.primaryStroke + r.mc.secondaryStroke) * 1e3,
+    master_cylinder_total_stroke_mm:
+      (r.bar ? r.bar.frontShare * r.mc.primaryStroke + (1 - r.bar.frontShare) * r.mc.secondaryStroke : r.mc.primaryStroke + r.mc.secondaryStroke) * 1e3,
     circuits: circuits.map((c) => c.id),
     defaults_used: r.defaults,
     defaults_note: HARDWARE_DEFAULTS_NOTE,

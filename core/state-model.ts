@@ -23,6 +23,11 @@ export interface StateModel {
   valve: ValveLaw;
   dist: Distribution;
   pedal: PedalModel;
+  /**
+   * Rear master pressure per front line pressure: λ of the balance bar, 1 without one. The real rear line
+   * pressure is λ · rearPressure(valve, p) and a valve knee read from the design is referred as knee / λ.
+   */
+  rearMasterRatio: number;
 }
 
 export function stateModel(design: DesignFile, state: LoadState): StateModel {
@@ -55,5 +60,6 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
     valve,
     dist,
     pedal: pedalModel(bore, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar),
+    rearMasterRatio: lambda,
   };
 }

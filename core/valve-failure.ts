@@ -70,22 +70,33 @@ export function failedValves(valve: RearValve): FailedValve[] {
   }
 }
 
+/**
+ * The failed law referred to the front line pressure of the state model: with a balance bar the valve sits
+ * behind the rear master cylinder, so its knee is knee / λ in front pressure (core/state-model.ts).
+ */
+function referredLaw(s: StateModel, f: FailedValve): ValveLaw {
+  return { knee: f.law.knee / s.rearMasterRatio, ratio: f.law.ratio };
+}
+
 /** The distribution of one load state with the valve failed. */
 export function failedDistribution(s: StateModel, f: FailedValve): Distribution {
-  return installedDistribution({
+  const d = installedDistribution({
     P: s.loads.P,
     G1: s.G1,
     G2: f.rearBlocked ? 0 : s.G2,
     threshold1: s.threshold1,
     threshold2: s.threshold2,
-    valve: f.law,
+    valve: referredLaw(s, f),
   });
+  // real rear line pressures, as in core/state-model.ts
+  if (s.rearMasterRatio !== 1 && d.p2) d.p2 = d.p2.map((q) => q * s.rearMasterRatio);
+  return d;
 }
 
 /** Braking rate at master pressure p with the valve failed. */
 export function failedRateAtPressure(s: StateModel, f: FailedValve, p: number): number {
   const t1 = s.G1 * Math.max(0, p - s.threshold1);
-  const t2 = f.rearBlocked ? 0 : s.G2 * Math.max(0, rearPressure(f.law, p) - s.threshold2);
+  const t2 = f.rearBlocked ? 0 : s.G2 * Math.max(0, rearPressure(referredLaw(s, f), p) - s.threshold2);
   return (t1 + t2) / s.loads.P;
 }
 

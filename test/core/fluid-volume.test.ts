@@ -3,11 +3,14 @@
 // Targets: service Type-0 d_m 5.0 m/s² for N1 (71/320 Annex II 2.1.1 [P], reference sheet 5.2);
 // secondary braking 2.2 m/s² for N (R13 Rev.4 Annex 4 2.2 [V], reference sheet 5.3).
 // Tandem master-cylinder model: the one documented in core/fluid-volume.ts (a failed chamber uses up
-// its stroke first) — common practice, no source.
+// its stroke first) — common practice, no source. Balance bar: the pivot divides the bar in the ratio of the
+// force shares, so its travel is s·x_front + (1 − s)·x_rear (lever statics, common practice, no source); rear
+// master pressure λ·p with λ = ((1 − s)/s)(d_f/d_r)² (force balance on the bar, docs/design-file.md).
 import { describe, expect, it } from 'vitest';
 import {
   axleFluid,
   axleVolume,
+  balanceBarTravel,
   demoDesign,
   type DesignFile,
   pedalTravel,
@@ -224,5 +227,77 @@ describe('pressureForRate: smallest master pressure for a braking rate with some
     const expected = 0.5e5 + (z * P - s.G2 * (30e5 - 2e5)) / s.G1;
     expect(pressureForRate(s, 1, 1, z)! / expected).toBeCloseTo(1, 12);
     expect(pressureForRate(s, 1, 1, 0)).toBe(0);
+  });
+});
+
+describe('pedal travel with a balance bar', () => {
+  // The simple system with two single master cylinders: front 20 mm, rear 25 mm, 60 % of the pushrod force to
+  // the front; strokes 16 mm (front) and 14 mm (rear). hand-derived: λ = (0.4/0.6) · (20/25)² = 0.426667.
+  const base = simpleDesign();
+  const r0 = readDesign({
+    ...base,
+    hydraulics: { ...base.hydraulics, balance_bar: { rear_bore_mm: 25, setting_front_share: 0.6 } },
+    hardware: { ...base.hardware, master_cylinder: { primary_stroke_mm: 16, secondary_stroke_mm: 14, dead_travel_mm: 1 } },
+  });
+  if (!r0.ok) throw new Error(JSON.stringify(r0.errors));
+  const d = r0.design;
+  const r = pedalTravel(d, stateModels(d));
+  const cases = r.states[0]!.cases;
+
+  it('pivot travel = s · x_front + (1 − s) · x_rear; a lost cylinder runs to its stop', () => {
+    const mc = { area: 1, primaryStroke: 0.016, secondaryStroke: 0.014, deadTravel: 0.001 };
+    const bar = { frontArea: 2e-4, rearArea: 4e-4, frontShare: 0.25 };
+    // hand-derived: x_f = 0.001 + 2e-6/2e-4 = 0.011 m, x_r = 0.001 + 2e-6/4e-4 = 0.006 m; 0.25 · 0.011 + 0.75 · 0.006 = 0.00725 m
+    expect(balanceBarTravel(mc, bar, 2e-6, 2e-6, 'none').travel).toBeCloseTo(0.00725, 12);
+    // front lost: 0.25 · 0.016 + 0.75 · 0.006 = 0.0085 m
+    expect(balanceBarTravel(mc, bar, 0, 2e-6, 'primary').travel).toBeCloseTo(0.0085, 12);
+    // rear lost: 0.25 · 0.011 + 0.75 · 0.014 = 0.01325 m
+    expect(balanceBarTravel(mc, bar, 2e-6, 0, 'secondary').travel).toBeCloseTo(0.01325, 12);
+    // front needs 0.001 + 4e-6/2e-4 = 0.021 m > 0.016 m stroke
+    expect(balanceBarTravel(mc, bar, 4e-6, 0, 'none').bottomed).toBe(true);
+  });
+
+  it('service at 5.0 m/s²: rear volume at the real rear pressure, each cylinder by its own bore', () => {
+    const c = cases.find((x) => x.case === 'service')!.point!;
+    // hand-derived: G2 referred = 50.265 · 0.426667 = 21.4466 N/bar; p = 10000 / (125.664 + 21.4466) = 67.976 bar;
+    // rear line 0.426667 · 67.976 = 29.003 bar
+    expect(c.master_pressure_bar).toBeCloseTo(67.976, 2);
+    expect(c.rear_pressure_bar).toBeCloseTo(29.003, 2);
+    // front 785.398 + 12 · 67.976 = 1601.113 mm³; rear 628.319 + 12 · 29.003 = 976.357 mm³
+    expect(c.circuit_volume_mm3.front).toBeCloseTo(1601.113, 1);
+    expect(c.circuit_volume_mm3.rear).toBeCloseTo(976.357, 1);
+    // x_f = 1 + 1601.113/314.159 = 6.0965 mm; x_r = 1 + 976.357/490.874 = 2.9890 mm; pivot 0.6 · 6.0965 + 0.4 · 2.9890 = 4.8535 mm; × 4
+    expect(c.pushrod_travel_mm).toBeCloseTo(4.8535, 3);
+    expect(c.pedal_travel_mm).toBeCloseTo(19.414, 2);
+  });
+
+  it('front circuit failed: the front cylinder runs its 16 mm, the rear reaches 2.2 m/s² alone', () => {
+    const c = cases.find((x) => x.case === 'front_circuit_failed')!.point!;
+    // hand-derived: rear line 4400 / 50.265 = 87.535 bar (front-referred 205.161 bar); rear 628.319 + 12 · 87.535 = 1678.741 mm³;
+    // x_r = 1 + 1678.741/490.874 = 4.4199 mm; pivot 0.6 · 16 + 0.4 · 4.4199 = 11.3680 mm; pedal 45.472 mm
+    expect(c.rear_pressure_bar).toBeCloseTo(87.535, 2);
+    expect(c.master_pressure_bar).toBeCloseTo(205.161, 2);
+    expect(c.pushrod_travel_mm).toBeCloseTo(11.368, 3);
+    expect(c.pedal_travel_mm).toBeCloseTo(45.472, 2);
+  });
+
+  it('rear circuit failed: the rear cylinder runs its 14 mm, the front reaches 2.2 m/s² alone', () => {
+    const c = cases.find((x) => x.case === 'rear_circuit_failed')!.point!;
+    // hand-derived: 4400 / 125.664 = 35.014 bar; x_f = 1 + 1205.567/314.159 = 4.8374 mm; pivot 0.6 · 4.8374 + 0.4 · 14 = 8.5025 mm
+    expect(c.master_pressure_bar).toBeCloseTo(35.014, 2);
+    expect(c.pushrod_travel_mm).toBeCloseTo(8.5025, 3);
+    expect(c.pedal_travel_mm).toBeCloseTo(34.01, 2);
+    // hand-derived: both cylinders at their stops: 0.6 · 16 + 0.4 · 14 = 15.2 mm
+    expect(r.master_cylinder_total_stroke_mm).toBeCloseTo(15.2, 9);
+  });
+
+  it('reports primary_feeds as unused with a bar, and the schema refuses a bar on a diagonal split', () => {
+    const withFeeds = readDesign({ ...d, hardware: { ...d.hardware, master_cylinder: { ...d.hardware!.master_cylinder, primary_feeds: 'rear' } } });
+    if (!withFeeds.ok) throw new Error(JSON.stringify(withFeeds.errors));
+    const w = pedalTravel(withFeeds.design, stateModels(withFeeds.design)).warnings;
+    expect(w.map((x) => [x.code, x.path])).toContainEqual(['WARN_HARDWARE_KEY_UNUSED', 'hardware.master_cylinder.primary_feeds']);
+    const diagonal = readDesign({ ...d, hydraulics: { ...d.hydraulics, circuit_split: 'diagonal' } });
+    expect(diagonal.ok).toBe(false);
+    if (!diagonal.ok) expect(diagonal.errors.map((e) => e.path)).toEqual(['hydraulics.circuit_split']);
   });
 });

@@ -156,3 +156,26 @@ describe('evaluate result', () => {
     }
   });
 });
+
+describe('with a balance bar the failed valve sits behind the rear master cylinder', () => {
+  it('a broken load-sensing linkage holds its knee in rear line pressure, not in front pressure', () => {
+    // Balance bar: front bore 20 mm, rear 25 mm, 60 % to the front; hand-derived λ = (0.4/0.6) · (20/25)² = 0.426667
+    // (force balance on the bar, docs/design-file.md).
+    const states = [
+      { id: 'unladen', label: 'Unladen', kind: 'unladen', mass_kg: 1800, front_axle_kg: 1000, cg_height_m: 0.6 },
+      { id: 'laden', label: 'Laden', kind: 'laden', mass_kg: 2400, front_axle_kg: 1000, cg_height_m: 0.6 },
+    ];
+    const plain = design({ type: 'load_sensing', ratio: 0.3, knee_bar_at_rear_axle_kg: [[800, 20], [1400, 40]] }, states);
+    const r = readDesign({ ...plain, hydraulics: { ...plain.hydraulics, balance_bar: { rear_bore_mm: 25, setting_front_share: 0.6 } } });
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    const [lowest] = failedValves(r.design.hydraulics.rear_valve);
+    const laden = stateModels(r.design)[1]!;
+    const low = failedDistribution(laden, lowest!);
+    // hand-derived: front 100 bar ⇒ rear master 42.667 bar ⇒ rear line 20 + 0.3 · (42.667 − 20) = 26.8 bar;
+    // z = (125.664 · 100 + 50.265 · 26.8) / (2400 · 9.80665) = 0.591159
+    const z = (125.66371 * 100 + 50.26548 * 26.8) / (2400 * 9.80665);
+    expect(forcesAt(low, z).p / 1e5).toBeCloseTo(100, 3);
+    expect(forcesAt(low, z).p2 / 1e5).toBeCloseTo(26.8, 3);
+  });
+});
+

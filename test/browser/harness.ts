@@ -75,3 +75,11 @@ export async function scrollIntoView(page: Page, selector: string): Promise<void
   await page.waitForSelector(selector, { state: 'attached' });
   await page.evaluate((sel) => document.querySelector(sel)?.scrollIntoView({ block: 'start' }), selector);
 }
+
+/**
+ * Waits until htmx has finished with every answer: no element is still waiting for a request, swapping or
+ * settling (htmx's own classes). Call it after the awaited response of a request, whose swap runs a moment later.
+ */
+export async function settled(page: Page): Promise<void> {
+  await page.waitForFunction(() => !document.querySelector('.htmx-request, .htmx-swapping, .htmx-settling'));
+}

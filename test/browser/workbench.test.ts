@@ -7,7 +7,7 @@ import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
-import { type BrowserHarness, openBrowser } from './harness.ts';
+import { type BrowserHarness, openBrowser, settled } from './harness.ts';
 
 let h: BrowserHarness;
 let page: Page;
@@ -35,7 +35,7 @@ async function typeInto(selector: string, text: string): Promise<void> {
   const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
   await page.fill(selector, text);
   await answer;
-  await page.waitForTimeout(150); // settle
+  await settled(page);
 }
 
 // the machine running the suite may be busy: a generous timeout per step, never a timed assertion

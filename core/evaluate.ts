@@ -87,6 +87,28 @@ export interface EvaluateOptions {
   curves?: boolean;
   /** Rule-set or rule ids to check (overrides the design's `rules` key; default by category). */
   rules?: readonly string[];
+  /**
+   * Compute the limits (traction, stopping, tester, regeneration, heat), the pedal travel and the failure
+   * modes on first read instead of at once: for a view that shows them only on request. The result reads
+   * the same, key for key, as without this option.
+   */
+  deferLimits?: boolean;
+}
+
+/**
+ * Replaces obj[key] by a getter that computes the value on first read and keeps it (an ordinary enumerable
+ * property from then on, in the same place among the keys, so JSON.stringify writes the same text).
+ */
+function computeOnRead<T extends object, K extends keyof T>(obj: T, key: K, make: () => T[K]): void {
+  Object.defineProperty(obj, key, {
+    configurable: true,
+    enumerable: true,
+    get() {
+      const value = make();
+      Object.defineProperty(obj, key, { value, writable: true, configurable: true, enumerable: true });
+      return value;
+    },
+  });
 }
 
 export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateOptions = {}): LoadStateResult {
@@ -145,8 +167,17 @@ export function evaluateState(design: DesignFile, s: StateModel, opts: EvaluateO
     lowest_efficiency: lowest,
     at,
     warnings,
-    ...stateLimits(design, s, adhesion),
+    traction: [],
+    stopping: null as unknown as StateLimits['stopping'],
+    tester: null as unknown as StateLimits['tester'],
   };
+  if (opts.deferLimits) {
+    let limits: StateLimits | undefined;
+    const once = () => (limits ??= stateLimits(design, s, adhesion));
+    computeOnRead(r, 'traction', () => once().traction);
+    computeOnRead(r, 'stopping', () => once().stopping);
+    computeOnRead(r, 'tester', () => once().tester);
+  } else Object.assign(r, stateLimits(design, s, adhesion));
   if (opts.curves) r.curves = curves(s, cross.rates, cross.critical);
   return r;
 }
@@ -157,18 +188,35 @@ export function stateModels(design: DesignFile): StateModel[] {
 
 export function evaluate(design: DesignFile, opts: EvaluateOptions & { warnings?: Warning[] } = {}): EvaluationResult {
   const models = stateModels(design);
-  return {
+  const adhesion = design.adhesion_coefficients ?? [...DEFAULT_ADHESION];
+  const failureModes = () => valveFailureModes(design, models, adhesion);
+  const travel = () => pedalTravel(design, models);
+  let limits: DesignLimits | undefined;
+  const once = () => (limits ??= designLimits(design, models, adhesion));
+  const r: EvaluationResult = {
     format: 'lockstep-result/1',
     lockstep_version: LOCKSTEP_VERSION,
     design_name: design.name,
-    adhesion_coefficients: design.adhesion_coefficients ?? [...DEFAULT_ADHESION],
+    adhesion_coefficients: [...adhesion],
     load_states: models.map((m) => evaluateState(design, m, opts)),
     checks: runChecks(design, models, { rules: opts.rules }),
     warnings: opts.warnings ?? [],
-    failure_modes: valveFailureModes(design, models, design.adhesion_coefficients ?? [...DEFAULT_ADHESION]),
-    pedal_travel: pedalTravel(design, models),
+    failure_modes: [],
+    pedal_travel: null as unknown as PedalTravelResult,
     pitfalls: pitfalls(design),
-    ...designLimits(design, models, design.adhesion_coefficients ?? [...DEFAULT_ADHESION]),
+    regen: null,
+    heat: null,
     caution: CAUTION,
   };
+  if (opts.deferLimits) {
+    computeOnRead(r, 'failure_modes', failureModes);
+    computeOnRead(r, 'pedal_travel', travel);
+    computeOnRead(r, 'regen', () => once().regen);
+    computeOnRead(r, 'heat', () => once().heat);
+  } else {
+    r.failure_modes = failureModes();
+    r.pedal_travel = travel();
+    Object.assign(r, once());
+  }
+  return r;
 }

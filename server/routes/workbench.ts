@@ -49,7 +49,8 @@ export function formValues(body: unknown): FormValues {
 export const unitsOf = (v: string | null | undefined): UnitSystem => (v === 'us' ? 'us' : 'metric');
 
 export function view(design: DesignFile, warnings: Warning[]): ValidView {
-  return { design, warnings, result: evaluate(design, { curves: true, warnings }) };
+  // the limits, pedal travel and failure modes feed deferred panels only: computed when one reads them
+  return { design, warnings, result: evaluate(design, { curves: true, warnings, deferLimits: true }) };
 }
 
 /** Control fields of the page; never part of the values that are rendered back. */

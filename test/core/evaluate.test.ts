@@ -4,6 +4,7 @@
  * utilisations and a warning, not a crash"; `at` defaults to 0.1 … 1.0); 71/320/EEC Annex II Appendix
  * point 3.1.3 for the lift-off hand derivation.
  */
+import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CAUTION } from '../../core/caution.ts';
@@ -69,6 +70,23 @@ describe('evaluate', () => {
       }),
       { numRuns: 100 },
     );
+  });
+
+  it('deferLimits computes the same result, key for key, when its parts are read (random valid designs and the examples)', () => {
+    // the deferred parts are the same functions called later: the JSON text must be identical (no source needed)
+    const same = (design: DesignFile) => {
+      const eager = JSON.stringify(evaluate(design, { curves: true }));
+      const lazy = evaluate(design, { curves: true, deferLimits: true });
+      expect(Object.getOwnPropertyDescriptor(lazy, 'regen')?.get).toBeTypeOf('function'); // not computed yet
+      expect(JSON.stringify(lazy)).toBe(eager);
+      expect(Object.getOwnPropertyDescriptor(lazy, 'regen')?.get).toBeUndefined(); // kept after the first read
+    };
+    for (const f of readdirSync('docs/examples')) {
+      const r = readDesign(JSON.parse(readFileSync(`docs/examples/${f}`, 'utf8')));
+      if (r.ok) same(r.design);
+    }
+    same(demoDesign());
+    fc.assert(fc.property(arbitraryDesign, same), { numRuns: 30 });
   });
 
   it('the demo result holds every key of the spec example, with the default `at` list 0.1 … 1.0', () => {

@@ -31,16 +31,18 @@ export function formatPath(path: ReadonlyArray<PropertyKey>): string {
   return out;
 }
 
-/** The unit a key carries in its name (design-file convention: `_kg`, `_m`, `_mm`, `_bar`, `_n`). */
+/**
+ * The unit a key carries in its name (design-file convention: `_kg`, `_m`, `_mm`, `_bar`, `_n`); the keys of an
+ * object named with a unit carry that unit (`wheels_kg.front_left` is in kg).
+ */
 export function unitOfKey(path: ReadonlyArray<PropertyKey>): string {
-  for (let i = path.length - 1; i >= 0; i--) {
-    const k = path[i];
-    if (typeof k !== 'string') continue;
-    const m = /_(per_bar_mm3|mm3|kg|m|mm|bar|n|deg|s|ms2|kmh|pct)$/.exec(k);
-    if (!m) return '';
-    return { per_bar_mm3: 'mm³/bar', mm3: 'mm³', kg: 'kg', m: 'm', mm: 'mm', bar: 'bar', n: 'N', deg: '°', s: 's', ms2: 'm/s²', kmh: 'km/h', pct: '%' }[m[1]!] ?? '';
-  }
-  return '';
+  const keys = path.filter((k): k is string => typeof k === 'string');
+  const unit = (k: string | undefined) => {
+    const m = k === undefined ? null : /_(per_bar_mm3|mm3|kg|m|mm|bar|n|deg|s|ms2|kmh|pct)$/.exec(k);
+    return m ? ({ per_bar_mm3: 'mm³/bar', mm3: 'mm³', kg: 'kg', m: 'm', mm: 'mm', bar: 'bar', n: 'N', deg: '°', s: 's', ms2: 'm/s²', kmh: 'km/h', pct: '%' }[m[1]!] ?? '') : '';
+  };
+  const own = unit(keys.at(-1));
+  return own === '' && keys.at(-2) === 'wheels_kg' ? 'kg' : own;
 }
 
 function valueAt(input: unknown, path: ReadonlyArray<PropertyKey>): unknown {

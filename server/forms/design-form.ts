@@ -8,7 +8,7 @@
  * - numbers: a key with a unit suffix (_kg, _m, _mm, _bar, _n, _kmh, _ms2, _deg, _s) is shown and typed in the
  *   user's unit system; any field also takes a typed unit ("58 in"). Keys whose schema is z.number() without a
  *   suffix are plain numbers. FIELD_QUANTITIES overrides the quantity for paths whose suffix does not tell
- *   (the rows of the load-sensing table). An empty number field leaves the key out.
+ *   (the rows of the load-sensing table, the corner weights). An empty number field leaves the key out.
  * - booleans (schema z.boolean()): a hidden input "false" followed by a checkbox "true"; the last value wins.
  *   Optional facts where "not stated" differs from "no" use a three-way select (views/fields.ts triStateField):
  *   "" (not stated) leaves the key out, "true" / "false" set it. Other text is reported on the field.
@@ -39,6 +39,7 @@ export type PathKey = string | number;
 export const FIELD_QUANTITIES: Array<{ pattern: RegExp; quantity: Quantity }> = [
   { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[0\]$/, quantity: 'mass' },
   { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[1\]$/, quantity: 'pressure' },
+  { pattern: /^build_up\.baseline\.wheels_kg\.(front|rear)_(left|right)$/, quantity: 'mass' },
 ];
 
 /** Key suffix -> quantity and the unit the design file stores it in. */

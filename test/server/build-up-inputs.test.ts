@@ -112,6 +112,38 @@ describe('conversion inputs', () => {
     expect(d.load_states[0]!.mass_kg).toBeCloseTo(2800, 6);
   });
 
+  it('corner weights typed on the page give the base vehicle\'s left/right split, in kg or lb', async () => {
+    const v = withBuildUp();
+    Object.assign(v, {
+      'build_up.track_m': '1.7',
+      'build_up.baseline.wheels_kg.front_left': '680',
+      'build_up.baseline.wheels_kg.front_right': '720',
+      'build_up.baseline.wheels_kg.rear_left': '590',
+      'build_up.baseline.wheels_kg.rear_right': '610',
+    });
+    const r = await post('/workbench/design.json', form(v));
+    expect(r.statusCode).toBe(200);
+    const d = JSON.parse(r.body) as ReturnType<typeof demoDesign>;
+    expect(d.build_up?.baseline.wheels_kg).toEqual({ front_left: 680, front_right: 720, rear_left: 590, rear_right: 610 });
+    const u = await post('/workbench/update', form(v));
+    expect(u.statusCode).toBe(200);
+    // hand-derived (docs/build-up.md, the item over the rear axle centreline loads both sides equally):
+    // base left 680 + 590 = 1270 kg, right 720 + 610 = 1330 kg; the 200 kg item adds 100 each: 1370 / 1430
+    expect(u.body).toContain('1270.0 / 1330.0');
+    expect(u.body).toContain('1370.0 / 1430.0');
+    // lb typed in US units is the same mass (NIST SP 811 B.8: 1 lb = 0.45359237 kg)
+    const us = withBuildUp('us');
+    Object.assign(us, { 'build_up.track_m': String(1.7 / 0.0254), 'build_up.baseline.wheels_kg.front_left': String(680 / 0.45359237) });
+    for (const k of ['front_right', 'rear_left', 'rear_right'] as const) us[`build_up.baseline.wheels_kg.${k}`] = String({ front_right: 720, rear_left: 590, rear_right: 610 }[k] / 0.45359237);
+    const ru = await post('/workbench/design.json', form(us, { _units: 'us', _shape: '' }));
+    expect((JSON.parse(ru.body) as ReturnType<typeof demoDesign>).build_up?.baseline.wheels_kg?.front_left).toBeCloseTo(680, 6);
+    // one corner left out: the others need it (the schema asks for all four), named on its field with kg
+    delete v['build_up.baseline.wheels_kg.rear_right'];
+    const bad = await post('/workbench/update', form(v));
+    expect(bad.statusCode).toBe(422);
+    expect(bad.body).toMatch(new RegExp(`id="${messageId('build_up.baseline.wheels_kg.rear_right')}"[^>]*>[^<]*required`));
+  });
+
   it('adds a first item to an empty list and removes the last one', async () => {
     const add = await post('/workbench/update', form(designToValues(demoDesign(), 'metric'), { _op: 'add:build_up.removed' }));
     expect(add.body).toContain('name="build_up.removed[0].mass_kg"');

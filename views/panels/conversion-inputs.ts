@@ -116,8 +116,16 @@ ${numberField(ctx, `${base}.rear_axle_kg`, 'Rear axle as weighed', { width: 's' 
 ${numberField(ctx, `${base}.cg_height_m`, 'CG height of the base vehicle', { width: 's', hint: 'above the ground' })}
 ${selectField(ctx, `${base}.cg_height_source`, 'CG height from', [['', '— choose —'], ...CG_HEIGHT_SOURCES.map((s) => [s, SOURCE_WORDS[s]] as const)])}
 ${numberField(ctx, `${base}.cg_height_uncertainty_m`, 'Its standard uncertainty', { width: 's', optional: true })}
-${numberField(ctx, `${B}.track_m`, 'Track width', { width: 's', optional: true, hint: 'needed for lateral offsets' })}
+${numberField(ctx, `${B}.track_m`, 'Track width', { width: 's', optional: true, hint: 'needed for lateral offsets and corner weights' })}
 </div>
+<fieldset class="table-field"><legend>Corner weights <span class="opt">optional</span></legend>
+<p class="hint">Each wheel on its own scale: they give the base vehicle's left/right split (with the track width). The axle masses above are used for everything else.</p>
+<div class="grid">
+${numberField(ctx, `${base}.wheels_kg.front_left`, 'Front left wheel', { width: 's', optional: true })}
+${numberField(ctx, `${base}.wheels_kg.front_right`, 'Front right wheel', { width: 's', optional: true })}
+${numberField(ctx, `${base}.wheels_kg.rear_left`, 'Rear left wheel', { width: 's', optional: true })}
+${numberField(ctx, `${base}.wheels_kg.rear_right`, 'Rear right wheel', { width: 's', optional: true })}
+</div>${blockMessage(ctx, `${base}.wheels_kg`)}</fieldset>
 ${blockMessage(ctx, base)}
 ${itemTable(ctx, 'removed', 'Items removed', 'Engine, fuel tank, seats … (their masses are subtracted).')}
 ${itemTable(ctx, 'added', 'Items added', 'Battery modules, motor, furniture, water tank shell …')}

@@ -198,6 +198,23 @@ describe('POST /workbench/update', () => {
     const page = await app.inject({ method: 'GET', url: '/' });
     expect(page.body).toContain('name="hydraulics.rear_valve.knee_bar_at_rear_axle_kg[1][1]"');
   });
+  it('a balance bar typed on the page becomes hydraulics.balance_bar; with a diagonal split it is marked on the split', async () => {
+    const page = await app.inject({ method: 'GET', url: '/' });
+    expect(page.body).toMatch(/name="hydraulics\.balance_bar\.rear_bore_mm"[^>]*value=""/); // empty on the demo
+    const bar = { 'hydraulics.balance_bar.rear_bore_mm': '22.2', 'hydraulics.balance_bar.setting_front_share': '0.55', 'hydraulics.balance_bar.driver_adjustable': 'false' };
+    const file = await app.inject({ method: 'POST', url: '/workbench/design.json', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(demoValues(), bar) });
+    expect(file.statusCode).toBe(200);
+    expect(JSON.parse(file.body).hydraulics.balance_bar).toEqual({ rear_bore_mm: 22.2, setting_front_share: 0.55, driver_adjustable: false });
+    expect((await update(form(demoValues(), bar))).statusCode).toBe(200);
+    // docs/design-file.md: a balance bar needs the front / rear split
+    const diagonal = await update(form(demoValues(), { ...bar, 'hydraulics.circuit_split': 'diagonal' }));
+    expect(diagonal.statusCode).toBe(422);
+    expect(diagonal.body).toMatch(/id="m-hydraulics-circuit_split"[^>]*>[^<]*balance bar/);
+    // one of the two numbers alone: the other is asked for on its own field
+    const half = await update(form(demoValues(), { 'hydraulics.balance_bar.rear_bore_mm': '22.2' }));
+    expect(half.statusCode).toBe(422);
+    expect(half.body).toMatch(/id="m-hydraulics-balance_bar-setting_front_share"[^>]*>[^<]*required/);
+  });
   it('add, duplicate and remove load states', async () => {
     const d = await update(form(demoValues(), { _op: 'dup:load_states[0]' }));
     expect(d.statusCode).toBe(200);

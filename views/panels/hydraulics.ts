@@ -1,7 +1,7 @@
 /** Master cylinder, pedal, booster, circuit split and the rear pressure valve (with the load-sensing table). */
 import type { UnitSystem } from '../../core/index.ts';
 import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
-import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField } from '../fields.ts';
+import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField, triStateField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -65,6 +65,19 @@ ${listButton(`add:${t}`, '+ row', 'Add a row (copy of the last)', rows.length >=
 ${blockMessage(ctx, t)}</fieldset>`;
 }
 
+const BAR = 'hydraulics.balance_bar';
+
+/** Two master cylinders on a balance bar (optional; all empty = none). The bore above is then the front one. */
+function balanceBarInputs(ctx: InputContext): SafeHtml {
+  return html`<fieldset class="valve"><legend>Balance bar <span class="opt">optional</span></legend>
+<p class="hint">Two master cylinders worked by one bar: the bore above is then the front cylinder's. Leave empty for a single tandem master cylinder. A balance bar needs the front / rear split.</p>
+<div class="grid">
+${numberField(ctx, `${BAR}.rear_bore_mm`, 'Rear master cylinder bore', { width: 's', optional: true })}
+${numberField(ctx, `${BAR}.setting_front_share`, 'Share of pushrod force to the front', { width: 's', optional: true, unitText: '0–1', hint: 'bar setting; 0.5 = centred' })}
+${triStateField(ctx, `${BAR}.driver_adjustable`, 'Driver can adjust it')}
+</div>${blockMessage(ctx, BAR)}</fieldset>`;
+}
+
 export const hydraulicsPanel: Panel = {
   id: 'hydraulics',
   title: 'Hydraulics and rear valve',
@@ -79,6 +92,7 @@ ${selectField(ctx, 'hydraulics.circuit_split', 'Circuit split', [['front_rear', 
 ${selectField(ctx, `${V}.type`, 'Valve type', VALVE_TYPES, { structural: true })}
 ${valveInputs(ctx)}
 ${blockMessage(ctx, V)}
-</fieldset>`,
+</fieldset>
+${balanceBarInputs(ctx)}`,
   normalise,
 };

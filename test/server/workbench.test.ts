@@ -55,6 +55,15 @@ describe('GET /', () => {
     expect(inlineScripts(r.body)).toEqual([]);
     expect(r.body).toMatch(/<div class="chart" data-chart="chart-a-data"/);
   });
+  it('gives every element its own id (labels, aria references and swaps depend on it)', async () => {
+    const page = await app.inject({ method: 'GET', url: '/' });
+    const ids = [...page.body.matchAll(/\sid="([^"]+)"/g)].map((m) => m[1]!);
+    expect(ids.filter((id, i) => ids.indexOf(id) !== i)).toEqual([]);
+    const upd = await update(form(demoValues()));
+    const updIds = [...upd.body.matchAll(/\sid="([^"]+)"/g)].map((m) => m[1]!);
+    expect(updIds.filter((id, i) => updIds.indexOf(id) !== i)).toEqual([]);
+  });
+
   it('sends a CSP without unsafe-eval and without inline script, and configures htmx to match', async () => {
     const r = await app.inject({ method: 'GET', url: '/' });
     const csp = String(r.headers['content-security-policy']);

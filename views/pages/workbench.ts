@@ -41,7 +41,11 @@ function renderInputs(values: FormValues, units: UnitSystem, errors: readonly Fi
   const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map() };
   const sections = panels
     .filter((p) => p.inputs)
-    .map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.inputs!(ctx)}</section>`);
+    .map((p) => {
+      // a panel with inputs and results has two sections: the input one takes the suffix (ids stay unique)
+      const id = p.results ? `panel-${p.id}-inputs` : `panel-${p.id}`;
+      return html`<section class="panel" id="${id}" aria-labelledby="${id}-h"><h2 id="${id}-h">${p.title}</h2>${p.inputs!(ctx)}</section>`;
+    });
   return { ctx, sections };
 }
 

@@ -24,7 +24,7 @@ export interface ResultContext {
 }
 
 export interface Panel {
-  /** Stable id; the panel's section gets id="panel-<id>". */
+  /** Stable id; the panel's section gets id="panel-<id>" (its input section "panel-<id>-inputs" when it has both). */
   id: string;
   title: string;
   /** Inputs, inside the design form. Field names are design paths (server/forms/design-form.ts). */

@@ -29,6 +29,33 @@
     return Object.prototype.hasOwnProperty.call(specs, id) ? specs[id] : null;
   }
 
+  // A legend below the plot sits at a share of the plot height under it, so on a short plot, or when its rows
+  // wrap on a narrow screen, it can run into the x-axis title. Measured after drawing: move it down by the
+  // overlap and make the figure taller by as much (the plot keeps its height); at most a few rounds.
+  function legendOverlap(el) {
+    var legend = el.querySelector('g.legend');
+    var title = el.querySelector('g.g-xtitle');
+    if (!legend || !title) return 0;
+    return title.getBoundingClientRect().bottom + 6 - legend.getBoundingClientRect().top;
+  }
+  function fitLegend(el, layout, rounds) {
+    var over = legendOverlap(el);
+    var size = el._fullLayout && el._fullLayout._size;
+    if (over <= 0 || rounds <= 0 || !size || !(size.h > 0) || !layout.legend || typeof layout.legend.y !== 'number') return null;
+    layout.legend.y -= over / size.h;
+    layout.height = (layout.height || el.clientHeight) + Math.ceil(over);
+    return window.Plotly.relayout(el, { 'legend.y': layout.legend.y, height: layout.height }).then(function () {
+      return fitLegend(el, layout, rounds - 1);
+    });
+  }
+
+  function fit(el) {
+    if (el.lockstepFitting || !el.layout) return null;
+    el.lockstepFitting = true;
+    var done = function () { el.lockstepFitting = false; };
+    return Promise.resolve(fitLegend(el, el.layout, 3)).then(done, done);
+  }
+
   function drawAll(root) {
     if (!window.Plotly) return;
     var scope = root && root.querySelectorAll ? root : document;
@@ -44,10 +71,19 @@
         el.textContent = 'Chart data could not be read.';
         return;
       }
-      window.Plotly.react(el, spec.data, spec.layout, CONFIG).then(function () {
-        drawn += 1;
-        el.setAttribute('data-drawn', String(drawn));
-      });
+      window.Plotly.react(el, spec.data, spec.layout, CONFIG)
+        .then(function () {
+          // again after every later redraw (a responsive resize can wrap the legend into more rows)
+          if (!el.lockstepFits && el.on) {
+            el.lockstepFits = true;
+            el.on('plotly_afterplot', function () { fit(el); });
+          }
+          return fit(el);
+        })
+        .then(function () {
+          drawn += 1;
+          el.setAttribute('data-drawn', String(drawn));
+        });
     });
   }
 

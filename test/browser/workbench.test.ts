@@ -7,7 +7,7 @@ import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
-import { type BrowserHarness, openBrowser, settled } from './harness.ts';
+import { type BrowserHarness, openBrowser, scrollIntoView, settled } from './harness.ts';
 
 let h: BrowserHarness;
 let page: Page;
@@ -36,6 +36,19 @@ async function typeInto(selector: string, text: string): Promise<void> {
   await page.fill(selector, text);
   await answer;
   await settled(page);
+}
+
+/** Charts whose legend starts above the bottom of their x-axis title (static/js/charts.js moves it clear). */
+async function legendOverlaps(): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('div.chart[data-drawn]')].flatMap((el) => {
+      const legend = el.querySelector('g.legend');
+      const title = el.querySelector('g.g-xtitle');
+      if (!legend || !title) return [];
+      const over = title.getBoundingClientRect().bottom - legend.getBoundingClientRect().top;
+      return over > 0 ? [`${el.closest('figure')?.id ?? '?'}: ${over.toFixed(0)} px`] : [];
+    }),
+  );
 }
 
 // the machine running the suite may be busy: a generous timeout per step, never a timed assertion
@@ -142,12 +155,18 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
   it('fits a 1366×768 screen without sideways scrolling, and produced no script or CSP errors', async () => {
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
+    // the pedal-travel chart (deferred panel): seven legend entries on a plot of the default height
+    await scrollIntoView(page, '#panel-hardware');
+    await page.waitForSelector('#panel-hardware .chart[data-drawn]', { timeout: 30000 });
+    expect(await legendOverlaps()).toEqual([]);
     mkdirSync('test-results', { recursive: true });
     await page.screenshot({ path: 'test-results/workbench-1366x768.png', fullPage: true });
     await page.setViewportSize({ width: 820, height: 1180 }); // tablet, portrait
     await page.waitForTimeout(400);
     const tabletOverflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(tabletOverflow).toBeLessThanOrEqual(0);
+    await page.waitForFunction(() => !document.querySelector('.chart[data-drawn]') || [...document.querySelectorAll('.chart[data-drawn] g.legend')].length > 0);
+    expect(await legendOverlaps()).toEqual([]);
     await page.screenshot({ path: 'test-results/workbench-tablet.png' });
     expect([...new Set(problems)]).toEqual([]);
   }, 60000);

@@ -154,7 +154,6 @@ export function chartC(ctx: ResultContext): ChartSpec {
   (layout.xaxis as Record<string, unknown>).range = [0, 1];
   layout.yaxis2 = { title: { text: `pedal force (${fu.label})` }, overlaying: 'y', side: 'right', zeroline: false, showgrid: false };
   layout.margin = { l: 56, r: 56, t: 36, b: 44 };
-  layout.legend = { orientation: 'h', y: -0.3, font: { size: 11 } };
   layout.height = 370;
   return { data, layout };
 }

@@ -53,6 +53,15 @@ export interface AxleLiftInput {
 
 export type BudgetSource = 'scale_resolution' | 'lift_height' | 'lift_angle' | 'wheelbase' | 'wheel_centre_height';
 
+/** How each source of the uncertainty budget is named for a person (page, command line, packet). */
+export const BUDGET_SOURCE_WORDS: Record<BudgetSource, string> = {
+  scale_resolution: 'scale readings (resolution)',
+  lift_height: 'lift heights',
+  lift_angle: 'lift angles',
+  wheelbase: 'wheelbase',
+  wheel_centre_height: 'wheel-centre height',
+};
+
 export interface BudgetEntry {
   /** What the input is, in words, e.g. "lift 2 (rear raised): front axle reading". */
   input: string;

@@ -123,14 +123,8 @@ export interface GroupSubtotal {
   rear_axle_kg: number;
 }
 
-export interface Change {
-  mass_kg: number;
-  front_axle_kg: number;
-  rear_axle_kg: number;
-  cg_x_m: number;
-  cg_height_m: number;
-  front_share: number;
-}
+/** The change of each quantity between two totals (no lateral part). */
+export type Change = Omit<MassTotals, 'lateral'>;
 
 export interface BuildUpResult {
   wheelbase_m: number;

@@ -6,20 +6,12 @@
  * The block (#cg-lift) is kept across recomputes of the results by static/js/workbench.js, so what was typed here
  * survives a change in the design form. Pasting a `lockstep-axle-lift/1` file is offered as a second way.
  */
-import { type AxleLiftResultFile, CAUTION, type FieldIssue, type UnitSystem } from '../core/index.ts';
+import { type AxleLiftResultFile, BUDGET_SOURCE_WORDS, CAUTION, type FieldIssue, type UnitSystem } from '../core/index.ts';
 import { cgLiftOp, LIFT_UNITS_FIELD, MAX_LIFTS } from '../server/forms/axle-lift-form.ts';
 import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../server/forms/design-form.ts';
 import { type InputContext, numberField, selectField } from './fields.ts';
 import { fixed, shownUnit } from './format.ts';
 import { html, type SafeHtml } from './html.ts';
-
-const SOURCE_WORDS: Record<string, string> = {
-  scale_resolution: 'scale readings (resolution)',
-  lift_height: 'lift heights',
-  lift_angle: 'lift angles',
-  wheelbase: 'wheelbase',
-  wheel_centre_height: 'wheel-centre height',
-};
 
 const AXLES = [['front', 'front'], ['rear', 'rear']] as const;
 
@@ -118,7 +110,7 @@ export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'met
 <tr><th scope="row">Vehicle mass (level)</th><td>${fixed(m.from(r.mass_kg), units === 'us' ? 0 : 1)} ${m.label}</td></tr>
 ${r.scatter_uncertainty_m !== null ? html`<tr><th scope="row">Scatter of the lifts about the fit</th><td>${fixed(len.from(r.scatter_uncertainty_m), ld)} ${len.label}</td></tr>` : ''}
 </tbody></table>
-${largest ? html`<p class="largest"><strong>Largest contribution: ${SOURCE_WORDS[largest] ?? largest}</strong> (single input: ${r.budget.largest_input}). Improve that measurement first to narrow the result.</p>` : ''}
+${largest ? html`<p class="largest"><strong>Largest contribution: ${BUDGET_SOURCE_WORDS[largest] ?? largest}</strong> (single input: ${r.budget.largest_input}). Improve that measurement first to narrow the result.</p>` : ''}
 ${r.warnings.length ? html`<ul class="warnings">${r.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
 ${loadStates.length
     ? html`<div class="apply-lift"><p>Write this CG height and its uncertainty into a load state (marked as measured; the results follow):</p>
@@ -129,7 +121,7 @@ ${loadStates.length
 <tbody>${r.lifts.map((l) => html`<tr><td>${l.index + 1}</td><td>${l.raised_axle}</td><td>${l.read_axle}</td><td>${fixed(l.lift_angle_deg, 2)}</td><td>${fixed(m.from(l.reading_change_kg), 1)}</td><td>${fixed(len.from(l.cg_height_m), ld)}</td><td>${fixed(len.from(l.standard_uncertainty_m), ld)}</td></tr>`)}</tbody></table></div>
 <h4>Uncertainty budget</h4>
 <div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Source</th><th scope="col">Contribution<br><span class="unit">${len.label}</span></th><th scope="col">Share of variance<br><span class="unit">%</span></th></tr></thead>
-<tbody>${r.budget.by_source.map((b) => html`<tr${b.source === largest ? html` class="largest"` : ''}><td>${SOURCE_WORDS[b.source] ?? b.source}${b.source === largest ? html` <strong>(largest)</strong>` : ''}</td><td>${fixed(len.from(b.contribution_m), units === 'us' ? 3 : 4)}</td><td>${fixed(100 * b.variance_share, 1)}</td></tr>`)}</tbody></table></div>
+<tbody>${r.budget.by_source.map((b) => html`<tr${b.source === largest ? html` class="largest"` : ''}><td>${BUDGET_SOURCE_WORDS[b.source] ?? b.source}${b.source === largest ? html` <strong>(largest)</strong>` : ''}</td><td>${fixed(len.from(b.contribution_m), units === 'us' ? 3 : 4)}</td><td>${fixed(100 * b.variance_share, 1)}</td></tr>`)}</tbody></table></div>
 <p class="hint">In a design file, the same is written into the load state as <code>${snippet}</code>.</p>
 <p class="hint">${CAUTION}</p>`;
 }

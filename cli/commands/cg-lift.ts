@@ -1,18 +1,10 @@
 /** `lockstep cg-lift FILE [--json]`: CG height from axle-lift weighings. Exit 0 on a result, 2 on invalid input. */
 import { parseArgs } from 'node:util';
-import { type AxleLiftResultFile, axleLiftResultFile, readAxleLift } from '../../core/index.ts';
+import { type AxleLiftResultFile, axleLiftResultFile, BUDGET_SOURCE_WORDS, readAxleLift } from '../../core/index.ts';
 import { cliErrors } from '../errors.ts';
 import type { CommandOutput } from '../main.ts';
 import { readJsonFile } from '../read-json.ts';
 import { fmt, textTable } from '../table.ts';
-
-const SOURCE_WORDS: Record<string, string> = {
-  scale_resolution: 'scale readings (resolution)',
-  lift_height: 'lift heights',
-  lift_angle: 'lift angles',
-  wheelbase: 'wheelbase',
-  wheel_centre_height: 'wheel-centre height',
-};
 
 export function axleLiftText(r: AxleLiftResultFile): string {
   const out: string[] = [];
@@ -59,12 +51,12 @@ export function axleLiftText(r: AxleLiftResultFile): string {
   out.push(
     textTable(
       ['by source', 'contribution m', 'share %'],
-      r.budget.by_source.map((b) => [SOURCE_WORDS[b.source] ?? b.source, fmt(b.contribution_m, 4), fmt(b.variance_share * 100, 1)]),
+      r.budget.by_source.map((b) => [BUDGET_SOURCE_WORDS[b.source] ?? b.source, fmt(b.contribution_m, 4), fmt(b.variance_share * 100, 1)]),
       '    ',
     ),
   );
   if (r.budget.largest_source) {
-    out.push(`  Largest contribution: ${SOURCE_WORDS[r.budget.largest_source]} (single largest input: ${r.budget.largest_input}).`);
+    out.push(`  Largest contribution: ${BUDGET_SOURCE_WORDS[r.budget.largest_source]} (single largest input: ${r.budget.largest_input}).`);
   }
   out.push('');
   out.push(`  Method: ${r.method}`);

@@ -9,6 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../cli/main.ts';
+import { KNOWN_LIFT, knownLiftFile } from '../fixtures/known-lift.ts';
 
 function capture() {
   const out = { stdout: '', stderr: '' };
@@ -22,25 +23,9 @@ function file(name: string, body: unknown): string {
   return p;
 }
 
-// Known vehicle: L = 3.4 m, r = 0.34 m, h = 0.95 m, W = 2600 kg, CG 1.7 m behind the front axle.
-const L = 3.4;
-const r = 0.34;
-const h = 0.95;
-const W = 2600;
-const gain = (H: number) => (W * (h - r) * (H / Math.sqrt(L * L - H * H))) / L;
-const good = {
-  format: 'lockstep-axle-lift/1',
-  wheelbase_m: L,
-  wheel_centre_height_m: r,
-  level: { front_axle_kg: 1300, rear_axle_kg: 1300 },
-  lifts: [
-    { raised_axle: 'rear', lift_height_m: 0.6, front_axle_kg: 1300 + gain(0.6) },
-    { raised_axle: 'front', lift_height_m: 0.6, rear_axle_kg: 1300 + gain(0.6) },
-  ],
-  scale_resolution_kg: 1,
-  lift_height_uncertainty_m: 0.002,
-  wheelbase_uncertainty_m: 0.003,
-};
+// The known vehicle of test/fixtures/known-lift.ts: CG height 0.95 m.
+const { h } = KNOWN_LIFT;
+const good = knownLiftFile();
 
 describe('lockstep cg-lift', () => {
   it('--json gives lockstep-axle-lift-result/1 with the known CG height, budget, warnings and caution', async () => {

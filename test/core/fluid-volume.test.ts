@@ -19,25 +19,12 @@ import {
   readDesign,
   stateModels,
 } from '../../core/index.ts';
+import { simpleSystemInput } from './hand-cases.ts';
 
-/** A simple system: one 50 mm sliding caliper piston front, 20 mm wheel cylinders rear, 20 mm master cylinder. */
+/** The simple hand-check system of test/core/hand-cases.ts with its hydraulic hardware stated. */
 function simpleDesign(): DesignFile {
   const input = {
-    format: 'lockstep-design/1',
-    name: 'Simple hand-check system',
-    vehicle: { category: 'N1', wheelbase_m: 3, abs: false, drive: 'rear' },
-    load_states: [{ id: 'laden', label: 'Laden', kind: 'laden', mass_kg: 2000, front_axle_kg: 1000, cg_height_m: 0.6 }],
-    axles: {
-      front: {
-        tyre_radius_m: 0.3,
-        brake: { type: 'disc', caliper: 'sliding', piston_diameters_mm: [50], effective_radius_m: 0.12, pad_friction: 0.4, threshold_pressure_bar: 0 },
-      },
-      rear: {
-        tyre_radius_m: 0.3,
-        brake: { type: 'drum', wheel_cylinder_diameter_mm: 20, drum_radius_m: 0.12, brake_factor: 2, threshold_pressure_bar: 0 },
-      },
-    },
-    hydraulics: { master_cylinder_bore_mm: 20, pedal_ratio: 4, booster_ratio: 1, circuit_split: 'front_rear', rear_valve: { type: 'none' } },
+    ...simpleSystemInput(),
     hardware: {
       front: { running_clearance_mm: 0.2, knock_back_mm: 0, expansion_per_bar_mm3: 10, fluid_volume_mm3: 20000 },
       rear: { shoe_travel_mm: 0.5, expansion_per_bar_mm3: 10, fluid_volume_mm3: 20000 },

@@ -17,25 +17,15 @@ import {
   stateModels,
   valveFailureModes,
 } from '../../core/index.ts';
+import { simpleSystemInput } from './hand-cases.ts';
 
-/** Sliding-caliper front (one 50 mm piston), drum rear (20 mm), master cylinder 20 mm, pedal ratio 4, no booster. */
+/** The simple hand-check system of test/core/hand-cases.ts with the given rear valve (and load states). */
 function design(rearValve: unknown, loadStates?: unknown[]): DesignFile {
+  const base = simpleSystemInput(rearValve);
   const r = readDesign({
-    format: 'lockstep-design/1',
+    ...base,
     name: 'Valve failure hand-check system',
-    vehicle: { category: 'N1', wheelbase_m: 3, abs: false, drive: 'rear' },
-    load_states: loadStates ?? [{ id: 'laden', label: 'Laden', kind: 'laden', mass_kg: 2000, front_axle_kg: 1000, cg_height_m: 0.6 }],
-    axles: {
-      front: {
-        tyre_radius_m: 0.3,
-        brake: { type: 'disc', caliper: 'sliding', piston_diameters_mm: [50], effective_radius_m: 0.12, pad_friction: 0.4, threshold_pressure_bar: 0 },
-      },
-      rear: {
-        tyre_radius_m: 0.3,
-        brake: { type: 'drum', wheel_cylinder_diameter_mm: 20, drum_radius_m: 0.12, brake_factor: 2, threshold_pressure_bar: 0 },
-      },
-    },
-    hydraulics: { master_cylinder_bore_mm: 20, pedal_ratio: 4, booster_ratio: 1, circuit_split: 'front_rear', rear_valve: rearValve },
+    load_states: loadStates ?? base.load_states,
     adhesion_coefficients: [0.2, 0.5, 0.8],
   });
   if (!r.ok) throw new Error(JSON.stringify(r.errors));

@@ -8,30 +8,25 @@ import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
 import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
 import { messageId } from '../../views/fields.ts';
+import { formBody, openPage, postForm, unescapeAttr } from './form-post.ts';
 
 let app: FastifyInstance;
 let shape = '';
 let pageFieldNames: string[] = [];
-const unescapeAttr = (s: string) => s.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
 
 beforeAll(async () => {
   app = buildApp();
   await app.ready();
-  const page = await app.inject({ method: 'GET', url: '/' });
-  shape = unescapeAttr(/name="_shape" value="([^"]*)"/.exec(page.body)![1]!);
+  const page = await openPage(app);
+  shape = page.shape;
   pageFieldNames = [...page.body.matchAll(/name="((?:build_up|ratings)\.[^"]+)"/g)].map((m) => unescapeAttr(m[1]!));
 });
 afterAll(async () => {
   await app.close();
 });
 
-function form(values: FormValues, extra: FormValues = {}): string {
-  const p = new URLSearchParams();
-  for (const [k, v] of Object.entries({ _units: 'metric', _shape: shape, ...values, ...extra })) p.append(k, v);
-  return p.toString();
-}
-const post = (url: string, body: string) =>
-  app.inject({ method: 'POST', url, headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: body });
+const form = (values: FormValues, extra: FormValues = {}) => formBody(shape, values, extra);
+const post = (url: string, body: string) => postForm(app, url, body);
 
 const L = demoDesign().vehicle.wheelbase_m; // 3.665 m
 /** Demo form plus a base vehicle and one added item placed over the rear axle; load state 1 from the build-up. */

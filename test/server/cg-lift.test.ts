@@ -9,6 +9,7 @@ import { buildApp } from '../../server/app.ts';
 import { applyCgLiftOp, cgLiftOp } from '../../server/forms/axle-lift-form.ts';
 import { designToValues, type FormValues, readForm } from '../../server/forms/design-form.ts';
 import { update } from '../../server/routes/workbench.ts';
+import { KNOWN_LIFT, knownLiftFile, knownLiftGain } from '../fixtures/known-lift.ts';
 
 let app: FastifyInstance;
 beforeAll(async () => {
@@ -19,22 +20,10 @@ afterAll(async () => {
   await app.close();
 });
 
-// Known vehicle: L = 3.4 m, r = 0.34 m, h = 0.95 m, W = 2600 kg split evenly.
-const L = 3.4;
-const gain = (H: number) => (2600 * (0.95 - 0.34) * (H / Math.sqrt(L * L - H * H))) / L;
-const good = {
-  format: 'lockstep-axle-lift/1',
-  wheelbase_m: L,
-  wheel_centre_height_m: 0.34,
-  level: { front_axle_kg: 1300, rear_axle_kg: 1300 },
-  lifts: [
-    { raised_axle: 'rear', lift_height_m: 0.6, front_axle_kg: 1300 + gain(0.6) },
-    { raised_axle: 'front', lift_height_m: 0.6, rear_axle_kg: 1300 + gain(0.6) },
-  ],
-  scale_resolution_kg: 1,
-  lift_height_uncertainty_m: 0.002,
-  wheelbase_uncertainty_m: 0.003,
-};
+// The known vehicle of test/fixtures/known-lift.ts: CG height 0.95 m.
+const { L } = KNOWN_LIFT;
+const gain = knownLiftGain;
+const good = knownLiftFile();
 const post = (text: string) =>
   app.inject({ method: 'POST', url: '/workbench/cg-lift', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: new URLSearchParams({ axle_lift: text }).toString() });
 

@@ -9,6 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
 import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
+import { postForm } from './form-post.ts';
 
 let app: FastifyInstance;
 beforeAll(async () => {
@@ -20,8 +21,7 @@ afterAll(async () => {
 });
 
 const demo = () => designToValues(demoDesign(), 'metric');
-const post = (url: string, values: FormValues) =>
-  app.inject({ method: 'POST', url, headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: new URLSearchParams(values).toString() });
+const post = (url: string, values: FormValues) => postForm(app, url, new URLSearchParams(values).toString());
 
 describe('three-way yes/no facts in the hardware panel', () => {
   it('the page offers not stated / yes / no for the facts, "not stated" chosen for the demo', async () => {

@@ -10,33 +10,25 @@ import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
 import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
 import { HTMX_CONFIG } from '../../views/layout.ts';
+import { formBody, openPage, postForm } from './form-post.ts';
 
 let app: FastifyInstance;
 let shape = '';
 const EVIL = `<script>alert("x")</script> & 'q'`;
 const EVIL_ESCAPED = '&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt; &amp; &#39;q&#39;';
 
-const unescapeAttr = (s: string) => s.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
-
 beforeAll(async () => {
   app = buildApp();
   await app.ready();
-  const page = await app.inject({ method: 'GET', url: '/' });
-  shape = unescapeAttr(/name="_shape" value="([^"]*)"/.exec(page.body)![1]!);
+  shape = (await openPage(app)).shape;
 });
 afterAll(async () => {
   await app.close();
 });
 
-function form(values: FormValues, extra: FormValues = {}): string {
-  const p = new URLSearchParams();
-  for (const [k, v] of Object.entries({ _units: 'metric', _shape: shape, ...values, ...extra })) p.append(k, v);
-  return p.toString();
-}
+const form = (values: FormValues, extra: FormValues = {}) => formBody(shape, values, extra);
 const demoValues = (): FormValues => designToValues(demoDesign(), 'metric');
-async function update(body: string) {
-  return app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: body });
-}
+const update = (body: string) => postForm(app, '/workbench/update', body);
 /** Every <script> in a body is either external (src) or a JSON data block: no inline code (CSP). */
 function inlineScripts(body: string): string[] {
   return [...body.matchAll(/<script\b([^>]*)>/g)].map((m) => m[1]!).filter((a) => !/\bsrc="/.test(a) && !/type="application\/json"/.test(a));

@@ -1,25 +1,58 @@
-/** Reads a JSON input file for a command, refusing what cannot be a design file before parsing it. */
-import { readFileSync, statSync } from 'node:fs';
+/**
+ * Reads a JSON input file for a command, refusing what cannot be a design file before parsing it. The byte cap
+ * holds whatever the path is (a file, a pipe, /dev/stdin, /dev/zero): at most the cap plus one byte is ever
+ * read. `-` means standard input.
+ */
+import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
 import { cliErrors, MAX_INPUT_BYTES } from './errors.ts';
 
+const CHUNK = 64 * 1024;
+
+/** Reads up to `cap + 1` bytes of an open file; waits (briefly, repeatedly) while a non-blocking pipe is empty. */
+function readCapped(fd: number, cap: number): Buffer {
+  const buf = Buffer.alloc(cap + 1);
+  let n = 0;
+  while (n < buf.length) {
+    let got: number;
+    try {
+      got = readSync(fd, buf, n, Math.min(CHUNK, buf.length - n), null);
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code !== 'EAGAIN') throw e;
+      Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, 10);
+      continue;
+    }
+    if (got === 0) break;
+    n += got;
+  }
+  return buf.subarray(0, n);
+}
+
 export function readJsonFile(file: string): unknown {
-  let size: number;
+  const stdin = file === '-';
+  let fd: number;
   try {
-    const st = statSync(file);
-    if (st.isDirectory()) throw cliErrors.fileUnreadable(file, 'it is a folder');
-    size = st.size;
+    fd = stdin ? 0 : openSync(file, 'r');
   } catch (e) {
-    if ((e as NodeJS.ErrnoException).code === 'ENOENT') throw cliErrors.fileMissing(file);
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') throw cliErrors.fileMissing(file);
+    if (code === 'EISDIR') throw cliErrors.fileUnreadable(file, 'it is a folder');
+    throw cliErrors.fileUnreadable(file, (e as Error).message);
+  }
+  let bytes: Buffer;
+  try {
+    const st = fstatSync(fd);
+    if (st.isDirectory()) throw cliErrors.fileUnreadable(file, 'it is a folder');
+    // a regular file's size is known: refuse it before reading anything
+    if (st.isFile() && st.size > MAX_INPUT_BYTES) throw cliErrors.fileTooLarge(file, st.size);
+    bytes = readCapped(fd, MAX_INPUT_BYTES);
+  } catch (e) {
     if (e instanceof Error && e.name === 'CliError') throw e;
     throw cliErrors.fileUnreadable(file, (e as Error).message);
+  } finally {
+    if (!stdin) closeSync(fd);
   }
-  if (size > MAX_INPUT_BYTES) throw cliErrors.fileTooLarge(file, size);
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    throw cliErrors.fileUnreadable(file, (e as Error).message);
-  }
+  if (bytes.length > MAX_INPUT_BYTES) throw cliErrors.fileTooLarge(file, null);
+  const text = bytes.toString('utf8');
   if (text.replace(/^\uFEFF/, '').trim() === '') throw cliErrors.fileEmpty(file);
   try {
     return JSON.parse(text.replace(/^\uFEFF/, ''));

@@ -16,12 +16,13 @@ import fastifyStatic from '@fastify/static';
 import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
 import type { AssetUrls } from '../views/layout.ts';
 import { messagePage, statusBlock } from '../views/pages/workbench.ts';
-import { AppError, appErrors, BODY_LIMIT } from './errors.ts';
+import { AppError, appErrors, BODY_LIMIT, fromFrameworkError } from './errors.ts';
 import { sendHtml } from './html-reply.ts';
 import { workbenchRoutes } from './routes/workbench.ts';
 import { cgLiftRoutes } from './routes/cg-lift.ts';
 import { packetRoutes } from './routes/packet.ts';
 import { storeRoutes } from './routes/store.ts';
+import { requestGuard, SERVER_LIMITS } from './plugins/request-guard.ts';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
 const STATIC_DIR = join(ROOT, 'static');
@@ -29,6 +30,8 @@ const require = createRequire(import.meta.url);
 
 export interface AppOptions {
   logger?: boolean;
+  /** Host names answered besides the loopback names and the bound address (server/plugins/request-guard.ts). */
+  allowedHosts?: readonly string[];
 }
 
 function packageDir(name: string): { dir: string; version: string } {
@@ -78,7 +81,8 @@ function sendError(req: FastifyRequest, reply: FastifyReply, e: AppError, assets
 }
 
 export function buildApp(opts: AppOptions = {}): FastifyInstance {
-  const app = Fastify({ logger: opts.logger ?? false, bodyLimit: BODY_LIMIT });
+  const app = Fastify({ logger: opts.logger ?? false, bodyLimit: BODY_LIMIT, ...SERVER_LIMITS });
+  requestGuard(app, { allowedHosts: opts.allowedHosts }); // Host, cross-site changes, media types, connection cap
   const htmx = packageDir('htmx.org');
   const plotly = packageDir('plotly.js-dist-min');
   const assets: AssetUrls = {
@@ -122,8 +126,7 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
   app.setErrorHandler((err: FastifyError | AppError, req, reply) => {
     let e: AppError;
     if (err instanceof AppError) e = err;
-    else if (err.code === 'FST_ERR_CTP_BODY_TOO_LARGE') e = appErrors.bodyTooLarge();
-    else if (err.code === 'FST_ERR_CTP_INVALID_MEDIA_TYPE') e = appErrors.unsupportedMediaType(String(req.headers['content-type'] ?? 'none'));
+    else if (fromFrameworkError(err, req.headers['content-type'])) e = fromFrameworkError(err, req.headers['content-type'])!;
     else if (typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 500) e = appErrors.badRequest(err.message);
     else {
       req.log.error(err);

@@ -1,8 +1,10 @@
 /**
  * Starts the web app: `npm start`. Listens on 127.0.0.1 and PORT (default 3000). The app has no login, so
- * binding to any other address needs an explicit HOST and prints a warning.
+ * binding to any other address needs an explicit HOST and prints a warning. Requests are answered only at the
+ * bound address (and the loopback names) or a name in ALLOWED_HOSTS (server/plugins/request-guard.ts).
  */
 import { buildApp } from './app.ts';
+import { parseAllowedHosts } from './plugins/request-guard.ts';
 
 export const DEFAULT_PORT = 3000;
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
@@ -20,7 +22,8 @@ if (!LOOPBACK.has(host)) {
   );
 }
 
-const app = buildApp({ logger: process.env.LOG === '1' });
+// the app answers only at its own address; ALLOWED_HOSTS="name, name:port" adds names (docs/threat-model.md)
+const app = buildApp({ logger: process.env.LOG === '1', allowedHosts: parseAllowedHosts(process.env.ALLOWED_HOSTS) });
 try {
   await app.listen({ host, port });
   const shown = host.includes(':') ? `[${host}]` : host;

@@ -22,8 +22,10 @@ import {
   type FormValues,
   listIndices,
   parseFieldNumber,
+  parseHiddenJson,
   withShownRange,
 } from './design-form.ts';
+import { fieldNameProblem } from './field-names.ts';
 
 export const LIFT_PREFIX = 'lift.';
 export const MAX_LIFTS = 30;
@@ -72,7 +74,7 @@ function setAt(root: Record<string, unknown>, path: string, value: unknown): voi
   keys.forEach((k, i) => {
     if (i === keys.length - 1) cur[k] = value;
     else {
-      cur[k] ??= typeof keys[i + 1] === 'number' ? [] : {};
+      if (!Object.hasOwn(cur, k)) cur[k] = typeof keys[i + 1] === 'number' ? [] : {};
       cur = cur[k] as Record<PropertyKey, unknown>;
     }
   });
@@ -86,9 +88,16 @@ function formPathOf(filePath: string): string {
 export type LiftReading = { ok: true; input: AxleLiftFile } | { ok: false; errors: FieldIssue[] };
 
 /** The lift fields -> a checked `lockstep-axle-lift/1` input; every problem keyed by the form field it belongs to. */
-export function readLiftForm(values: FormValues, units: UnitSystem): LiftReading {
+export function readLiftForm(posted: FormValues, units: UnitSystem): LiftReading {
   const input: Record<string, unknown> = { format: 'lockstep-axle-lift/1' };
   const errors: FieldIssue[] = [];
+  // the route refuses such names outright (APP_ERR_FIELD_NAME); read directly, each is a problem of its field
+  const values: FormValues = {};
+  for (const [name, text] of Object.entries(posted)) {
+    const refused = name.startsWith(LIFT_PREFIX) ? fieldNameProblem(name) : null;
+    if (refused === null) values[name] = text;
+    else errors.push({ path: name.slice(0, 80), message: `this is not an input of the tool: ${refused}` });
+  }
   const readAxle: Record<number, string> = {};
   for (const [name, text] of Object.entries(values)) {
     if (!name.startsWith(LIFT_PREFIX)) continue;
@@ -189,7 +198,8 @@ export function applyCgLiftOp(values: FormValues, op: string, units: UnitSystem)
   const out: FormValues = { ...values };
   let exact: Record<string, [string, number]> = {};
   try {
-    exact = values._exact ? (JSON.parse(values._exact) as Record<string, [string, number]>) : {};
+    const e = values._exact ? parseHiddenJson(values._exact) : {};
+    exact = e !== null && typeof e === 'object' && !Array.isArray(e) ? (e as Record<string, [string, number]>) : {};
   } catch {
     exact = {};
   }

@@ -30,6 +30,7 @@ import {
   parseQuantity,
   readDesign,
 } from '../../core/index.ts';
+import { FORBIDDEN_KEYS, fieldNameProblem } from './field-names.ts';
 
 /** Field name -> text as shown or typed. */
 export type FormValues = Record<string, string>;
@@ -83,7 +84,7 @@ export function unitOfField(name: string): FieldUnit | null {
     const k = path[i];
     if (typeof k !== 'string') continue;
     const m = /_([a-z0-9]+)$/.exec(k);
-    const s = m ? SUFFIX[m[1]!] : undefined;
+    const s = m && Object.hasOwn(SUFFIX, m[1]!) ? SUFFIX[m[1]!] : undefined;
     return s ? { quantity: s.quantity, fileUnit: s.unit } : null;
   }
   return null;
@@ -205,10 +206,18 @@ export function parseFieldNumber(name: string, text: string, units: UnitSystem):
  */
 type ExactValues = Record<string, [shown: string, exact: number]>;
 
+/** JSON.parse for the page's hidden fields: a reserved key (`__proto__`, ...) makes the text unreadable. */
+export function parseHiddenJson(text: string): unknown {
+  return JSON.parse(text, (k, v: unknown) => {
+    if (FORBIDDEN_KEYS.has(k)) throw new SyntaxError(`reserved key "${k}"`);
+    return v;
+  });
+}
+
 function exactOf(values: FormValues): ExactValues {
   if (!values._exact) return {};
   try {
-    const e = JSON.parse(values._exact) as unknown;
+    const e = parseHiddenJson(values._exact);
     return e && typeof e === 'object' && !Array.isArray(e) ? (e as ExactValues) : {};
   } catch {
     return {};
@@ -217,8 +226,8 @@ function exactOf(values: FormValues): ExactValues {
 
 /** A numeric field's text -> design-file number, using the exact value when the text is the one shown. */
 function readNumber(name: string, text: string, units: UnitSystem, exact: ExactValues): ReturnType<typeof parseFieldNumber> {
-  const e = exact[name];
-  if (e && e[0] === text.trim() && typeof e[1] === 'number' && Number.isFinite(e[1])) return { ok: true, value: e[1] };
+  const e = Object.hasOwn(exact, name) ? exact[name] : undefined;
+  if (Array.isArray(e) && e[0] === text.trim() && typeof e[1] === 'number' && Number.isFinite(e[1])) return { ok: true, value: e[1] };
   return parseFieldNumber(name, text, units);
 }
 
@@ -252,7 +261,7 @@ function setAt(root: Record<string, unknown>, path: readonly PathKey[], value: u
   for (let i = 0; i < path.length - 1; i++) {
     const k = path[i]!;
     const nextIsIndex = typeof path[i + 1] === 'number';
-    let next = cur[k];
+    let next = Object.hasOwn(cur, k) ? cur[k] : undefined;
     if (next === undefined || next === null || typeof next !== 'object') {
       next = nextIsIndex ? [] : {};
       cur[k] = next;
@@ -303,6 +312,12 @@ export function valuesToInput(values: FormValues, units: UnitSystem): { input: R
   const exact = exactOf(values);
   for (const [name, text] of Object.entries(values)) {
     if (name.startsWith('_')) continue;
+    // the routes refuse such a name outright (APP_ERR_FIELD_NAME); read directly, it is a problem of that field
+    const refused = fieldNameProblem(name);
+    if (refused !== null) {
+      errors.push({ path: name.slice(0, 80), message: `this is not an input of the design: ${refused}` });
+      continue;
+    }
     const path = pathOf(name);
     if (path.length === 0) continue;
     const kind = kindOfField(name);
@@ -328,11 +343,11 @@ export function valuesToInput(values: FormValues, units: UnitSystem): { input: R
           setAt(input, path, undefined);
         }
       }
-    } else setAt(input, path, t === '' ? undefined : text);
+    } else setAt(input, path, text === '' ? undefined : text); // as typed, like the file: only an empty field is left out
   }
   if (values._provenance) {
     try {
-      input.provenance = JSON.parse(values._provenance) as unknown;
+      input.provenance = parseHiddenJson(values._provenance);
     } catch {
       /* a damaged hidden field only loses the provenance notes */
     }

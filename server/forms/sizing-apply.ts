@@ -37,7 +37,14 @@ export function applySizingOp(values: FormValues, op: string, units: UnitSystem)
   const reading = readForm(values, units);
   if (!reading.ok) return values;
   const old = valueAt(reading.design, path);
-  const next = designToValues(applySizingChange(reading.design, path, value), units);
+  let changed: ReturnType<typeof applySizingChange>;
+  try {
+    changed = applySizingChange(reading.design, path, value);
+  } catch {
+    // the proposal names a part the design no longer has (e.g. a balance bar setting without a balance bar)
+    throw appErrors.sizingNotApplicable(`it changes a part this design does not have`);
+  }
+  const next = designToValues(changed, units);
   // other carried page data (names starting with "_") travel along, except what the rebuilt form states anew
   // (`_exact`, `_provenance` come from the design itself) and the undo slot
   for (const [k, v] of Object.entries(values)) if (k.startsWith('_') && k !== SIZING_UNDO_FIELD && k !== '_exact' && !(k in next)) next[k] = v;

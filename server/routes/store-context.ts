@@ -9,6 +9,8 @@ import { type FormValues, readForm } from '../forms/design-form.ts';
 import { type DesignStore, openStore } from '../store/design-store.ts';
 import { StoreError } from '../store/errors.ts';
 import { errorView } from '../../views/store-views.ts';
+import { fromFrameworkError } from '../errors.ts';
+import { checkFieldNames } from '../forms/field-names.ts';
 
 export interface StoreRouteOptions {
   /** An open store (tests); otherwise one is opened in `dataDir` (default LOCKSTEP_DATA_DIR or ./data). */
@@ -58,6 +60,7 @@ export function designFromBody(body: unknown): DesignFromBody {
       throw new RequestError('STORE_ERR_NOT_JSON', `design_json is not valid JSON (${(e as Error).message})`, 400);
     }
   } else {
+    checkFieldNames(Object.keys(b));
     const values: FormValues = {};
     for (const [k, v] of Object.entries(b)) if (typeof v === 'string') values[k] = v;
     const units: UnitSystem = b._units === 'us' ? 'us' : 'metric';
@@ -78,7 +81,8 @@ export function field(obj: unknown, key: string): string | undefined {
 }
 
 /** Error handler of the store and packet plugins: coded JSON for /api, an HTML fragment otherwise. */
-export function storeErrorHandler(err: Error & { statusCode?: number; code?: string }, req: FastifyRequest, reply: FastifyReply): FastifyReply {
+export function storeErrorHandler(thrown: Error & { statusCode?: number; code?: string }, req: FastifyRequest, reply: FastifyReply): FastifyReply {
+  const err = fromFrameworkError(thrown, req.headers['content-type']) ?? thrown; // framework codes become the documented APP_ERR_*
   const isStore = err instanceof StoreError;
   const status = isStore ? err.status : (err.statusCode ?? 500);
   const code = isStore ? err.code : status < 500 ? (err.code ?? 'APP_ERR_BAD_REQUEST') : 'APP_ERR_INTERNAL';

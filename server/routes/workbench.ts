@@ -31,6 +31,7 @@ import {
   readForm,
 } from '../forms/design-form.ts';
 import { sendHtml } from '../html-reply.ts';
+import { checkFieldNames } from '../forms/field-names.ts';
 import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
 import { applyCgLiftOp, CG_LIFT_OP } from '../forms/axle-lift-form.ts';
 import { ResponseCache, sendCached } from '../response-cache.ts';
@@ -38,6 +39,7 @@ import { ResponseCache, sendCached } from '../response-cache.ts';
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
   if (body === null || typeof body !== 'object' || Array.isArray(body)) throw appErrors.badRequest('Expected the design form as the request body.');
+  checkFieldNames(Object.keys(body)); // prototype keys, odd names, positions beyond a list's limit (server/forms/field-names.ts)
   const out: FormValues = {};
   for (const [k, v] of Object.entries(body as Record<string, unknown>)) {
     const last = Array.isArray(v) ? v[v.length - 1] : v;
@@ -77,7 +79,7 @@ export function update(posted: FormValues): UpdateOutcome {
       status: e.statusCode,
       body: statusBlock('upload-error', { message: e.message, code: e.code, errors }),
     });
-    if (text.length > UPLOAD_LIMIT) return fail(appErrors.uploadTooLarge());
+    if (Buffer.byteLength(text) > UPLOAD_LIMIT) return fail(appErrors.uploadTooLarge());
     try {
       parsed = JSON.parse(text);
     } catch (e) {
@@ -148,7 +150,7 @@ export function cachedResults(design: DesignFile, warnings: Warning[], units: Un
 
 /**
  * Rendered answers of the recompute and of the deferred panels, by the whole posted form (server/response-cache.ts).
- * An upload (up to 512 KiB of text) is answered but not kept.
+ * An upload (up to UPLOAD_LIMIT of text) is answered but not kept.
  */
 export const answers = new ResponseCache(200);
 const CACHE_SOURCE_LIMIT = 64 * 1024;

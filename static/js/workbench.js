@@ -98,8 +98,9 @@
     upload.addEventListener('change', function () {
       var f = upload.files && upload.files[0];
       if (!f) return;
-      if (f.size > 512 * 1024) {
-        fileMessage('That file is larger than 512 KiB; a design file is a few kilobytes. Nothing was changed.', true);
+      // the limit comes from the server (core/file-limits.ts), so the page and the server agree
+      if (f.size > Number(upload.getAttribute('data-max-bytes'))) {
+        fileMessage('That file is larger than ' + upload.getAttribute('data-max-text') + '; a design file is a few kilobytes. Nothing was changed.', true);
         upload.value = '';
         return;
       }

@@ -12,6 +12,7 @@ import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
 import { panels, type ResultContext } from '../panels/index.ts';
+import { DESIGN_FILE_MAX_BYTES, DESIGN_FILE_MAX_TEXT } from '../../core/file-limits.ts';
 
 export interface ValidView {
   design: DesignFile;
@@ -168,7 +169,7 @@ export function workbenchPage(
 <nav class="file" aria-label="Design file">
 <a class="jump button" href="#results-col">Jump to results</a>
 <button type="button" class="download" data-download="/workbench/design.json" data-filename="lockstep-design.json">Download design</button>
-<label class="upload button">Upload design<input type="file" id="upload" accept="application/json,.json" class="sr-file"></label>
+<label class="upload button">Upload design<input type="file" id="upload" accept="application/json,.json" class="sr-file" data-max-bytes="${DESIGN_FILE_MAX_BYTES}" data-max-text="${DESIGN_FILE_MAX_TEXT}"></label>
 <button type="button" name="_op" value="demo" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" class="secondary" data-reset-draft="1">Start again from the demo</button>
 </nav>
 </header>

@@ -5,6 +5,7 @@ import { fmt } from './table.ts';
 
 export function verdictWord(c: CheckResult): string {
   if (!c.applies) return 'n/a';
+  if (c.passed === null) return 'NOT CHECKED';
   if (c.passed) return 'PASS';
   return c.advisory ? 'fail (info)' : 'FAIL';
 }
@@ -30,7 +31,7 @@ export function failingText(c: CheckResult): string {
 function entry(c: CheckResult): string[] {
   const scen = SCENARIO_LABELS[c.scenario];
   const head = [`${verdictWord(c).padEnd(11)} ${c.rule}${scen ? ` (${scen})` : ''}`];
-  if (c.applies) {
+  if (c.applies && c.passed !== null) {
     head.push(`margin ${marginText(c)}`);
     if (c.worst_at_braking_rate !== null) head.push(`worst at z = ${fmt(c.worst_at_braking_rate, 3)}`);
     const f = failingText(c);
@@ -58,7 +59,7 @@ export function checksSection(r: EvaluationResult): string[] {
     out.push(`  Load state "${s.id}" (${s.kind}):`);
     for (const c of mine) out.push(...entry(c));
   }
-  const failed = r.checks.filter((c) => c.applies && !c.advisory && c.passed === false).length;
-  out.push(failed === 0 ? '  Every applicable check passes.' : `  ${failed} check${failed === 1 ? '' : 's'} failed.`);
+  // the one verdict (regeneration and failed-valve cases included), in the same words as at the top
+  out.push(`  Verdict: ${r.verdict.summary}`);
   return out;
 }

@@ -10,6 +10,7 @@ import { sizeCommand } from './commands/size.ts';
 import { packetCommand } from './commands/packet.ts';
 import { storeCommand } from './commands/store.ts';
 import { CliError } from './errors.ts';
+import { EXIT_CODES_TEXT } from './exit-code.ts';
 
 export interface CommandOutput {
   stdout(text: string): void;
@@ -35,7 +36,7 @@ export function usage(): string {
     '',
     ...Object.values(commands).map((c) => `  lockstep ${c.summary}`),
     '',
-    'Exit codes: 0 every check passes, 1 a check fails, 2 the input is invalid.',
+    `${EXIT_CODES_TEXT} lockstep packet writes the packet and exits with the verdict's code too.`,
     `Caution: ${CAUTION}`,
   ].join('\n');
 }

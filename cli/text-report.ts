@@ -1,10 +1,11 @@
-/** The human-readable form of `lockstep evaluate`: one block per load state, then checks and the caution. */
+/** The human-readable form of `lockstep evaluate`: the verdict, one block per load state, then checks and the caution. */
 import type { EvaluationResult, LoadStateResult } from '../core/index.ts';
 import { fmt, textTable } from './table.ts';
 import { pedalTravelSection, pitfallSection, valveFailureSection } from './hardware-report.ts';
 import { checksSection } from './checks-report.ts';
 import { limitsSection } from './limits-report.ts';
 import { conversionLines } from './conversion-report.ts';
+import { verdictSection } from './verdict-report.ts';
 
 function stateBlock(s: LoadStateResult): string {
   const out: string[] = [];
@@ -61,6 +62,7 @@ export function textReport(r: EvaluationResult): string {
   const out: string[] = [];
   out.push(`Lockstep ${r.lockstep_version}: ${r.design_name}`);
   out.push('');
+  out.push(...verdictSection(r.verdict), '');
   for (const w of r.warnings) out.push(`Warning: ${w.path ? `${w.path}: ` : ''}${w.message}`);
   if (r.warnings.length) out.push('');
   const pit = pitfallSection(r);

@@ -2,6 +2,11 @@
  * The demo design: an invented scenario (no real make or model). A 3.5 t long-wheelbase panel van,
  * converted from diesel to battery-electric drive and fitted out as a camper; the traction battery
  * sits in the floor between the axles, which lowers the CG, and the rear axle carries the motor.
+ *
+ * The demo fails on purpose: the regenerative torque as set in the motor controller (90 N·m) makes the rear
+ * axle lock first when the van is unladen at 20 and 50 km/h. Every other check passes, and the verdict names
+ * the largest regenerative force that keeps them passing (about 2200 N, 80 N·m at the motor) — the finding a
+ * battery-electric conversion most needs to see (issue 12 point 4).
  */
 import type { DesignFile } from './design.ts';
 
@@ -57,6 +62,8 @@ export function demoDesign(): DesignFile {
       },
     },
     adhesion_coefficients: [0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1.0],
+    // Hand lever and cables to drum-in-hat shoes in the rear discs (invented figures).
+    parking_brake: { axle: 'rear', control: 'hand', lever_ratio: 45, efficiency: 0.7, brake_factor: 2.2, effective_radius_m: 0.09 },
     // Rear drive unit: regenerative torque as set in the motor controller (invented figures).
     regen: { max_motor_torque_nm: 90, gear_ratio: 9.5, max_power_kw: 40, blending: { type: 'regen_first' } },
     // Rotor masses as weighed; base vehicle = the diesel van laden as it left the factory (invented figures).

@@ -22,6 +22,7 @@ import { type Pitfall, pitfalls } from './pitfalls.ts';
 import { designLimits, type DesignLimits, stateLimits, type StateLimits } from './limits.ts';
 import { type LoadStateOrigin, loadStateOrigin } from './build-up.ts';
 import { type RatingMargins, ratingMargins, ratingWarnings } from './ratings.ts';
+import { buildVerdict, type Verdict } from './verdict.ts';
 
 export interface LoadStateResult {
   id: string;
@@ -63,6 +64,11 @@ export interface EvaluationResult {
   format: 'lockstep-result/1';
   lockstep_version: string;
   design_name: string;
+  /**
+   * The one verdict (core/verdict.ts): pass / fail / incomplete from every check that applies, the failed-valve
+   * cases and the regeneration cases; every output opens with it.
+   */
+  verdict: Verdict;
   adhesion_coefficients: number[];
   load_states: LoadStateResult[];
   /** Regulation checks per rule, load state and scenario (core/checks). */
@@ -197,6 +203,7 @@ export function evaluate(design: DesignFile, opts: EvaluateOptions & { warnings?
     format: 'lockstep-result/1',
     lockstep_version: LOCKSTEP_VERSION,
     design_name: design.name,
+    verdict: null as unknown as Verdict,
     adhesion_coefficients: [...adhesion],
     load_states: models.map((m) => evaluateState(design, m, opts)),
     checks: runChecks(design, models, { rules: opts.rules }),
@@ -213,10 +220,13 @@ export function evaluate(design: DesignFile, opts: EvaluateOptions & { warnings?
     computeOnRead(r, 'pedal_travel', travel);
     computeOnRead(r, 'regen', () => once().regen);
     computeOnRead(r, 'heat', () => once().heat);
+    // reading the verdict forces the failure modes and the regeneration cases (not the other limits)
+    computeOnRead(r, 'verdict', () => buildVerdict(r));
   } else {
     r.failure_modes = failureModes();
     r.pedal_travel = travel();
     Object.assign(r, once());
+    r.verdict = buildVerdict(r);
   }
   return r;
 }

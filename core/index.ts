@@ -54,3 +54,4 @@ export * from './checks/run-checks.ts';
 export * from './checks/limit-series.ts';
 export * from './checks/polynomial.ts';
 export * from './sizing/index.ts';
+export * from './verdict.ts';

@@ -1,6 +1,7 @@
-/** `lockstep evaluate FILE [--at z1,z2,...] [--rules id,id] [--json]`: exit 0 all checks pass, 1 a check fails, 2 invalid input. */
+/** `lockstep evaluate FILE [--at z1,z2,...] [--rules id,id] [--json]`: exit code from the verdict (cli/exit-code.ts: 0 pass, 1 fail, 2 invalid input, 3 incomplete). */
 import { parseArgs } from 'node:util';
-import { evaluate, failedChecks, readDesign, RULE_SELECTORS } from '../../core/index.ts';
+import { evaluate, readDesign, RULE_SELECTORS } from '../../core/index.ts';
+import { exitCodeFor } from '../exit-code.ts';
 import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
 import { textReport } from '../text-report.ts';
@@ -43,7 +44,6 @@ export function evaluateCommand(argv: string[], out: CommandOutput): number {
   if (!reading.ok) throw cliErrors.invalid(file, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
   const result = evaluate(reading.design, { at, curves: values.curves, rules, warnings: reading.warnings });
   out.stdout(values.json ? JSON.stringify(result, null, 2) : textReport(result));
-  // A failed distribution device (71/320 Annex II Appendix point 6) is a check like the others.
-  const failedModes = result.failure_modes.filter((f) => !f.passed).length;
-  return failedChecks(result.checks).length > 0 || failedModes > 0 ? 1 : 0;
+  // the verdict counts the failed distribution device (71/320 Annex II Appendix point 6) and regeneration too
+  return exitCodeFor(result.verdict);
 }

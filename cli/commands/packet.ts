@@ -1,6 +1,7 @@
 /**
  * `lockstep packet FILE --out packet.pdf [--date ISO] [--rules id,...]` (rules as for `lockstep evaluate`) or `lockstep packet --revision ID --out packet.pdf`:
- * writes the evidence packet PDF of a design file or of a saved revision (see docs/evidence-packet.md).
+ * writes the evidence packet PDF of a design file or of a saved revision (see docs/evidence-packet.md). The packet is
+ * written whatever the verdict; the exit code is the verdict's (cli/exit-code.ts), as for `lockstep evaluate`.
  */
 import { writeFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
@@ -8,6 +9,7 @@ import { readDesign } from '../../core/index.ts';
 import { buildPacket } from '../../server/packet/build-packet.ts';
 import { openStore } from '../../server/store/design-store.ts';
 import { CliError, cliErrors } from '../errors.ts';
+import { exitCodeFor } from '../exit-code.ts';
 import { readJsonFile } from '../read-json.ts';
 import type { CommandOutput } from '../main.ts';
 import { parseRuleSelection } from './evaluate.ts';
@@ -45,12 +47,12 @@ export async function packetCommand(argv: string[], out: CommandOutput): Promise
   }
   const reading = readDesign(input);
   if (!reading.ok) throw cliErrors.invalid(label, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
-  const { pdf, revisionId } = await buildPacket(reading.design, { date, warnings: reading.warnings, ...(rules ? { rules } : {}) });
+  const { pdf, revisionId, result } = await buildPacket(reading.design, { date, warnings: reading.warnings, ...(rules ? { rules } : {}) });
   try {
     writeFileSync(values.out, pdf);
   } catch (e) {
     throw new CliError('CLI_ERR_FILE_UNWRITABLE', `cannot write "${values.out}": ${(e as Error).message} (choose another --out path)`);
   }
-  out.stdout(`wrote ${values.out} (${pdf.length} bytes), revision ${revisionId}`);
-  return 0;
+  out.stdout(`wrote ${values.out} (${pdf.length} bytes), revision ${revisionId}\nVERDICT ${result.verdict.summary}`);
+  return exitCodeFor(result.verdict);
 }

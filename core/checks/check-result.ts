@@ -29,9 +29,12 @@ export interface CheckResult {
   /** Load-state id; null for a verdict about the whole design (rule not applicable). */
   load_state: string | null;
   scenario: CheckScenario;
-  /** False when the rule does not apply (ABS, category, mass, load state); then passed is null. */
+  /** False when the rule does not apply (ABS, category, mass); then passed is null. */
   applies: boolean;
+  /** Null with applies true: the check could not be made (see missing_inputs); never counted as a pass. */
   passed: boolean | null;
+  /** Design-file paths of the inputs a check that applies could not be made without (then passed is null). */
+  missing_inputs?: string[];
   /** True for results shown for information that do not decide the exit status (the ABS-failed case). */
   advisory: boolean;
   /** Signed: positive = met with room to spare. */
@@ -57,6 +60,11 @@ export function verifyNoteFor(status: RuleStatus): { verify_note?: string } {
 /** Checks that decide the outcome and did not pass (advisory and not-applicable results excluded). */
 export function failedChecks(checks: readonly CheckResult[]): CheckResult[] {
   return checks.filter((c) => c.applies && !c.advisory && c.passed === false);
+}
+
+/** Checks that apply but could not be made because an input is missing (advisory results excluded). */
+export function notCheckedChecks(checks: readonly CheckResult[]): CheckResult[] {
+  return checks.filter((c) => c.applies && !c.advisory && c.passed === null);
 }
 
 /** Words for each scenario, shared by the command line, the page and the evidence packet ('' = as designed). */

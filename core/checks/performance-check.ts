@@ -13,7 +13,7 @@
  * N_front = P (ψ cos θ − χ sin θ), N_rear = P ((1 − ψ) cos θ + χ sin θ), and the reverse facing
  * downhill (moments about the lower contact patch). The adhesion that axle needs is
  * m g sin θ / N_axle, compared with test_adhesion; the parking brake's capacity where the design
- * gives it.
+ * gives it. Without a parking_brake block nothing is assumed: the check is "not checked" (issue 12).
  */
 import { G_N } from '../constants.ts';
 import type { DesignFile } from '../design.ts';
@@ -129,7 +129,9 @@ export function checkDeceleration(design: DesignFile, s: StateModel, rule: Decel
 
 export interface ParkingOutcome {
   scenario: CheckScenario;
-  passed: boolean;
+  /** Null: not checked, an input is missing (missing_inputs). */
+  passed: boolean | null;
+  missing_inputs?: string[];
   margin: number | null;
   margin_unit: 'adhesion' | 'N';
   note: string;
@@ -156,10 +158,19 @@ export function parkingBrakeCapacity(design: DesignFile, rule: ParkingRule): { f
   return { force_n: (control * b.lever_ratio * b.efficiency * b.brake_factor * b.effective_radius_m) / tyre, control_force_n: control };
 }
 
+/** Not checked: the design does not describe the parking brake (issue 12 point 5: never an assumed axle). */
+export const PARKING_NOT_DESCRIBED =
+  'not checked: the parking brake is not described (which axle it brakes, hand or foot control, and its holding force or mechanism)';
+
+export const PARKING_CAPACITY_MISSING =
+  "not checked: the parking brake's holding force is not given (give the holding force at the tyres, or the lever ratio, efficiency, brake factor and effective radius)";
+
 export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRule): ParkingOutcome[] {
   const k = design.test_adhesion ?? DEFAULT_TEST_ADHESION;
-  const axle = design.parking_brake?.axle ?? 'rear';
-  const assumed = design.parking_brake ? '' : ' (no parking_brake block: rear axle assumed)';
+  if (!design.parking_brake) {
+    return [{ scenario: 'as_designed', passed: null, missing_inputs: ['parking_brake'], margin: null, margin_unit: 'N', note: PARKING_NOT_DESCRIBED, details: { gradient_pct: rule.gradient_pct } }];
+  }
+  const axle = design.parking_brake.axle;
   const theta = Math.atan(rule.gradient_pct / 100);
   const hold = s.loads.P * Math.sin(theta);
   const out: ParkingOutcome[] = [];
@@ -175,7 +186,7 @@ export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRul
       note:
         need === null
           ? `the ${axle} axle carries no load facing ${facing} on ${rule.gradient_pct} %`
-          : `facing ${facing} on ${rule.gradient_pct} %: the ${axle} axle${assumed} needs adhesion ${need.toFixed(3)} (test surface ${k})`,
+          : `facing ${facing} on ${rule.gradient_pct} %: the ${axle} axle needs adhesion ${need.toFixed(3)} (test surface ${k})`,
       details: {
         gradient_pct: rule.gradient_pct,
         holding_force_n: hold,
@@ -187,7 +198,17 @@ export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRul
     });
   }
   const cap = parkingBrakeCapacity(design, rule);
-  if (cap) {
+  if (!cap) {
+    out.push({
+      scenario: 'parking_brake_capacity',
+      passed: null,
+      missing_inputs: ['parking_brake.holding_force_n'],
+      margin: null,
+      margin_unit: 'N',
+      note: PARKING_CAPACITY_MISSING,
+      details: { gradient_pct: rule.gradient_pct, holding_force_n: hold },
+    });
+  } else {
     const margin = cap.force_n - hold;
     out.push({
       scenario: 'parking_brake_capacity',

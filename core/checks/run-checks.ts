@@ -90,6 +90,7 @@ function parkingResults(design: DesignFile, rule: ParkingRule, s: StateModel): C
     Object.assign(base(rule, s.state.id, o.scenario), verifyNoteFor(rule.status), {
       applies: true,
       passed: o.passed,
+      ...(o.missing_inputs ? { missing_inputs: o.missing_inputs } : {}),
       worst_margin: o.margin,
       margin_unit: o.margin_unit,
       note: o.note,
@@ -126,7 +127,15 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
     }
     const states = rule.load_states === 'all' ? models : models.filter((m) => (rule.load_states as readonly string[]).includes(m.state.kind));
     if (states.length === 0) {
-      out.push(notApplicable(rule, null, `not checked: needs a load state of kind ${(rule.load_states as readonly string[]).join(' or ')}`));
+      // The rule applies to every vehicle of the category: without the load state it needs it is not checked (never a pass).
+      const kinds = (rule.load_states as readonly string[]).join(' or ');
+      out.push(
+        Object.assign(notApplicable(rule, null, `not checked: needs a load state of kind ${kinds}`), {
+          applies: true,
+          missing_inputs: ['load_states'],
+          details: { needs_load_state_kind: kinds },
+        }),
+      );
       continue;
     }
     for (const s of states) {

@@ -14,8 +14,10 @@ import {
   type EvaluationResult,
   type LoadStateResult,
   LOCKSTEP_VERSION,
+  overallWord,
   unitOfDiffPath,
   VERIFY_NOTE,
+  verdictItems,
 } from '../../core/index.ts';
 import { type ChartSeries, chartSvg } from './chart-svg.ts';
 
@@ -285,7 +287,7 @@ export function recordTables(list: Record<string, unknown>[]): Block[] {
 
 /** Result keys printed by dedicated sections; everything else is printed generically. */
 const BASE_RESULT_KEYS = new Set([
-  'format', 'lockstep_version', 'design_name', 'adhesion_coefficients', 'load_states', 'checks', 'warnings', 'caution',
+  'format', 'lockstep_version', 'design_name', 'verdict', 'adhesion_coefficients', 'load_states', 'checks', 'warnings', 'caution',
 ]);
 const BASE_STATE_KEYS = new Set([
   'id', 'label', 'kind', 'mass_kg', 'front_axle_kg', 'cg_height_m', 'front_axle_static_n', 'rear_axle_static_n',
@@ -412,6 +414,7 @@ function sourceText(s: unknown): string {
 
 export function verdictOf(c: Record<string, unknown>): string {
   if (c.applies === false || c.applicable === false) return 'NOT APPLICABLE';
+  if (c.applies === true && c.passed === null) return 'NOT CHECKED';
   if (c.passed === true) return 'PASS';
   if (c.passed === false) return 'FAIL';
   if (typeof c.verdict === 'string') return c.verdict.toUpperCase();
@@ -538,6 +541,13 @@ export function packetContent(input: PacketInput): PacketContent {
   // Cover
   b.push({ kind: 'title', text: 'Brake distribution evidence packet' });
   b.push({ kind: 'p', text: design.name, style: 'bold' });
+  // The one verdict (core/verdict.ts), in the words the command line and the workbench print
+  const v = result.verdict;
+  b.push({ kind: 'h2', text: `Verdict: ${overallWord(v)}` });
+  b.push({ kind: 'p', text: v.summary, style: 'bold' });
+  for (const f of v.failed) b.push({ kind: 'p', text: `FAIL  ${f.description}` });
+  for (const n of v.not_checked) b.push({ kind: 'p', text: `NOT CHECKED  ${n.description}` });
+  for (const a of v.advisories) b.push({ kind: 'p', text: `For information (does not decide): ${a.description}`, style: 'small' });
   b.push({
     kind: 'kv',
     rows: [
@@ -562,10 +572,17 @@ export function packetContent(input: PacketInput): PacketContent {
 
   // Summary of verdicts
   b.push({ kind: 'h1', text: '1. Summary of verdicts' });
-  const checks = Array.isArray(result.checks) ? result.checks : [];
-  if (checks.length === 0) {
+  // the failed-valve and regeneration cases of the verdict are rows like the checks
+  const cases = verdictItems(result)
+    .filter((it) => it.ref.kind !== 'check')
+    .map((it) => ({ ...it.ref, applies: true, advisory: it.advisory, worst_margin: it.ref.margin, note: it.ref.description }));
+  const regulation = Array.isArray(result.checks) ? result.checks : [];
+  const checks = [...regulation, ...cases];
+  b.push({ kind: 'p', text: `Verdict: ${v.summary}`, style: 'bold' });
+  if (regulation.length === 0) {
     b.push({ kind: 'p', text: 'No regulation checks selected: this packet reports the braking distribution only, without verdicts against a rule.' });
-  } else {
+  }
+  if (checks.length > 0) {
     const rows = checkRows(checks);
     const failed = rows.filter((r) => r.verdict === 'FAIL').length;
     b.push({ kind: 'p', text: `${rows.length} check result${rows.length === 1 ? '' : 's'}; ${failed} fail${failed === 1 ? 's' : ''}.`, style: 'bold' });

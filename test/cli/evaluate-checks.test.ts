@@ -1,6 +1,7 @@
 /**
  * `lockstep evaluate` with the regulation checks, run in process: exit 1 when a selected check fails,
- * 0 when all pass, 2 for an unknown --rules id; the text report's checks section.
+ * 0 when all pass, 2 for an unknown --rules id, 3 when a check could not be made; the verdict at the top of the
+ * text report and its checks section.
  * Designs: hand-built fixed splits (test/core/checks/fixed-split.ts). φ = 0.6 fails the M1 lock order
  * of 71/320/EEC Annex II Appendix point 3.1.1 from z* = (0.6 − 0.5)/0.2 = 0.50 to 0.80; φ = 0.7 passes.
  */
@@ -24,15 +25,44 @@ describe('lockstep evaluate: checks decide the exit status', () => {
     expect(lock.worst_margin).toBeLessThan(0);
   });
 
-  it('a design passing every default check exits 0; the text report shows verdicts, sources and the verify note', async () => {
-    const r = await run(['evaluate', file('pass.json', splitDesign({ frontPistons: 7, rearPistons: 3 }))]);
+  // A parking brake declared to hold 3000 N at the tyres: more than m g sin θ = 1000 · 9.80665 · 0.18/√1.0324 = 1737 N
+  // on the 18 % of the parking rule (hand derivation; the laden state is 1000 kg).
+  const parked = { parking_brake: { axle: 'rear' as const, control: 'hand' as const, holding_force_n: 3000 } };
+
+  it('a design passing every default check exits 0; the text report opens with the verdict, then shows verdicts, sources and the verify note', async () => {
+    const r = await run(['evaluate', file('pass.json', splitDesign({ frontPistons: 7, rearPistons: 3, extra: parked }))]);
     expect(r.code).toBe(0);
+    // the verdict comes first: right after the title line, before any table
+    const lines = r.stdout.split('\n');
+    expect(lines[2]).toMatch(/^VERDICT PASS: every check that applies passes \(\d+ checks made, 0 failed\)\.$/);
+    expect(r.stdout.indexOf('VERDICT')).toBeLessThan(r.stdout.indexOf('----'));
     expect(r.stdout).toContain('Regulation checks');
     expect(r.stdout).toMatch(/PASS\s+eu-appendix\/lock-order/);
     expect(r.stdout).toContain('71/320/EEC Annex II Appendix, point 3.1.1');
     // efficiency coefficient 0.85 is [P] in the reference sheet → the verify note
     expect(r.stdout).toMatch(/point 3\.1\.1 \(coefficient 0\.85\) \[partial: verify against the current official text\]/);
-    expect(r.stdout).toContain('Every applicable check passes.');
+    expect(r.stdout).toContain('Verdict: PASS: every check that applies passes');
+  });
+
+  it('the same design without a parking brake is incomplete: exit 3, the missing input named in words on the second line (issue 12 point 5)', async () => {
+    const r = await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3 }))]);
+    expect(r.code).toBe(3);
+    const lines = r.stdout.split('\n');
+    expect(lines[2]).toMatch(/^VERDICT INCOMPLETE: nothing fails, but not everything could be checked \(.*1 check could not be made/);
+    expect(lines[3]).toMatch(/^  NOT CHECKED  .*Parking brake holds the laden vehicle on 18 %: not checked: needs the parking brake \(which axle it brakes/);
+    expect(lines[3]).not.toMatch(/parking_brake/); // words, not the design-file path
+    expect(r.stdout).toMatch(/NOT CHECKED\s+performance\/parking/);
+    const j = JSON.parse((await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3 })), '--json'])).stdout);
+    expect(j.verdict.not_checked).toEqual([expect.objectContaining({ rule: 'performance/parking', load_state: 'laden', passed: null, missing_inputs: ['parking_brake'] })]);
+  });
+
+  it('a failing design prints FAIL and each failing item on its own line before any table (exit 1)', async () => {
+    const r = await run(['evaluate', file('fail-text.json', splitDesign({ frontPistons: 3, rearPistons: 2, extra: parked }))]);
+    expect(r.code).toBe(1);
+    const top = r.stdout.slice(0, r.stdout.indexOf('----'));
+    expect(top).toMatch(/VERDICT FAIL: at least one check fails/);
+    // φ = 0.6 fails the M1 lock order laden from z = 0.50 (header comment)
+    expect(top).toMatch(/\n  FAIL         .*Front axle locks first \(front curve above rear\): fails by \d\.\d{3} \(adhesion\)\n/);
   });
 
   it('--rules chooses the sets: the failing design passes when only the service check is asked for', async () => {
@@ -47,7 +77,12 @@ describe('lockstep evaluate: checks decide the exit status', () => {
 
   it('ABS on every axle: the lock-order failure is shown for the ABS-failed case but does not fail the run', async () => {
     const r = await run(['evaluate', file('abs.json', splitDesign({ frontPistons: 3, rearPistons: 2, abs: true })), '--rules', 'eu-appendix']);
-    expect(r.code).toBe(0);
+    // no rule selected applies with ABS on every axle: nothing is shown to comply, so "incomplete" (exit 3), not a pass
+    expect(r.code).toBe(3);
+    expect(r.stdout).toMatch(/VERDICT INCOMPLETE: no check that applies to this design was selected/);
+    expect(r.stdout).toMatch(/\n  for information \(does not decide\): .*ABS failed/);
+    const withService = await run(['evaluate', file('abs2.json', splitDesign({ frontPistons: 3, rearPistons: 2, abs: true })), '--rules', 'eu-appendix,performance/service']);
+    expect(withService.code).toBe(0);
     expect(r.stdout).toMatch(/n\/a\s+eu-appendix\/lock-order/);
     expect(r.stdout).toMatch(/fail \(info\)\s+eu-appendix\/lock-order \(ABS failed: checked as a vehicle without ABS, for information\)/);
   });

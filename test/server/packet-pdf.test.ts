@@ -82,6 +82,24 @@ describe('evidence packet PDF', () => {
     }
     if (result.checks.some((c) => c.status !== 'verified')) expect(f).toContain(VERIFY_NOTE);
   });
+  it('states the verdict on its first page, in the words of the command line and the workbench (issue 12)', async () => {
+    const page1 = flat(execFileSync('/usr/bin/pdftotext', ['-enc', 'UTF-8', '-f', '1', '-l', '1', path.join(dir, 'packet.pdf'), '-'], { encoding: 'utf8' }));
+    // the demo fails on purpose: regeneration makes the unladen rear axle lock first at 20 and 50 km/h (core/demo.ts)
+    expect(page1).toContain('Verdict: FAIL');
+    expect(page1).toContain(result.verdict.summary);
+    expect(result.verdict.failed.length).toBeGreaterThan(0);
+    for (const f of result.verdict.failed) expect(page1).toContain(`FAIL ${f.description}`);
+    // a passing design (no regeneration, the parking brake stated) says PASS on page 1 and nothing else
+    const d = design();
+    delete d.regen;
+    const ok = await buildPacket(d, { date: DATE });
+    expect(ok.result.verdict.overall).toBe('pass');
+    const okFile = path.join(dir, 'pass.pdf');
+    writeFileSync(okFile, ok.pdf);
+    const okPage1 = flat(execFileSync('/usr/bin/pdftotext', ['-enc', 'UTF-8', '-f', '1', '-l', '1', okFile, '-'], { encoding: 'utf8' }));
+    expect(okPage1).toContain('Verdict: PASS PASS: every check that applies passes');
+    expect(okPage1).not.toMatch(/\bFAIL\b|NOT CHECKED/);
+  });
   it('carries the caution', () => {
     expect(flat(text)).toContain(CAUTION);
   });

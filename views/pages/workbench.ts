@@ -13,6 +13,7 @@ import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
 import { panels, type ResultContext } from '../panels/index.ts';
 import { DESIGN_FILE_MAX_BYTES, DESIGN_FILE_MAX_TEXT } from '../../core/file-limits.ts';
+import { overallVerdict } from '../panels/verdict.ts';
 
 export interface ValidView {
   design: DesignFile;
@@ -88,6 +89,7 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>
 ${staleNote(null)}
 <div class="result-body">
+${overallVerdict(v.result)}
 ${isDemo(v.design) ? INTRO : ''}
 <p class="for">Results for <strong>${v.design.name}</strong></p>
 ${panels.filter((p) => p.results).map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.deferred ? deferredSlot(p.id) : p.results!(ctx)}</section>`)}
@@ -153,6 +155,9 @@ const INTRO = html`<details class="intro" open><summary>What you are looking at<
 The left column holds the design: vehicle, load states, brakes, hydraulics with a load-sensing rear valve, and the
 surfaces to analyse. The right column answers, for each load state, which axle locks first on each surface and at
 what braking rate, with the curves behind it.</p>
+<p>The verdict at the top reads FAIL on purpose: the regenerative braking of the rear motor, as set in its controller,
+makes the rear axle lock first when the van is unladen at 20 and 50 km/h. Each line links to its check, and names the
+largest regenerative force that keeps the checks passing.</p>
 <p>Change any value and the results follow within a moment. A good design has the front axle lock first on every
 surface (the installed curve below the ideal curve in chart A, f1 above f2 in chart B). Start your own vehicle by
 overwriting the numbers, or upload a design file.</p></details>`;

@@ -12,6 +12,7 @@ import { hardwarePanel, pitfallsPanel } from './hardware.ts';
 import { hydraulicsPanel } from './hydraulics.ts';
 import { limitsInputsPanel, limitsPanel } from './limits.ts';
 import { loadStatesPanel } from './load-states.ts';
+import { parkingBrakePanel } from './parking-brake.ts';
 import { sizingInputsPanel, sizingPanel } from './sizing.ts';
 import { storeInputsPanel, storePanel } from './store.ts';
 import type { Panel } from './panel.ts';
@@ -27,6 +28,7 @@ export const panels: Panel[] = [
   loadStatesPanel,
   brakesPanel,
   hydraulicsPanel,
+  parkingBrakePanel,
   surfacesPanel,
   verdictPanel,
   chartsPanel,

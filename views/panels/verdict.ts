@@ -1,5 +1,9 @@
-/** The verdict per load state: lock order on every surface, critical braking rate, lowest efficiency, warnings. */
-import type { LoadStateResult, LockResult } from '../../core/index.ts';
+/**
+ * The verdict: first the one overall verdict of the design (core/verdict.ts: every check, the failed-valve and the
+ * regeneration cases), green only when it is "pass", each failing or not-checked item linked to its row in the checks
+ * table; then per load state the lock order on every surface, critical braking rate, lowest efficiency, warnings.
+ */
+import { type CheckRef, type EvaluationResult, type LoadStateResult, type LockResult, overallWord } from '../../core/index.ts';
 import { fixed } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
@@ -21,12 +25,32 @@ export function lockSummary(s: LoadStateResult): { tone: 'ok' | 'warn'; text: st
   return { tone: 'warn', text: `Attention: ${parts.join('; ')}.` };
 }
 
-function stateVerdict(s: LoadStateResult, i: number): SafeHtml {
+function itemLine(ref: CheckRef, word: string, cls: string): SafeHtml {
+  return html`<li class="ov-${cls}"><a href="#${ref.anchor}"><strong class="ov-word">${word}</strong> ${ref.description}</a></li>`;
+}
+
+/**
+ * The overall verdict, shown above everything else in the results column: the summary, then one line per failing and
+ * per not-checked item (each a link to its row in the checks table), then the results shown for information.
+ */
+export function overallVerdict(result: EvaluationResult): SafeHtml {
+  const v = result.verdict;
+  return html`<section class="overall-verdict ov-is-${v.overall}" id="overall-verdict" aria-labelledby="overall-verdict-h">
+<h2 id="overall-verdict-h"><span class="ov-badge">${overallWord(v)}</span> Verdict of the whole design</h2>
+<p class="ov-summary">${v.summary}</p>
+${v.failed.length || v.not_checked.length ? html`<ul class="ov-items">${v.failed.map((f) => itemLine(f, 'FAIL', 'fail'))}${v.not_checked.map((n) => itemLine(n, 'NOT CHECKED', 'nc'))}</ul>` : ''}
+${v.advisories.length ? html`<details class="ov-info"><summary>For information, not deciding (${v.advisories.length})</summary><ul class="ov-items">${v.advisories.map((a) => itemLine(a, 'INFO', 'info'))}</ul></details>` : ''}
+</section>`;
+}
+
+function stateVerdict(s: LoadStateResult, i: number, overallPass: boolean): SafeHtml {
   const sum = lockSummary(s);
   const crit = s.critical_braking_rate;
-  return html`<article class="verdict ${sum.tone}" id="verdict-${i}" aria-labelledby="verdict-${i}-h">
+  // green only when the whole design passes (a load state whose lock order is right can still fail a check)
+  const tone = sum.tone === 'ok' ? (overallPass ? 'ok' : 'neutral') : 'warn';
+  return html`<article class="verdict ${tone}" id="verdict-${i}" aria-labelledby="verdict-${i}-h">
 <h3 id="verdict-${i}-h"><span class="swatch s${i % 8}" aria-hidden="true"></span>${s.label} <small>(${s.kind}, id ${s.id})</small></h3>
-<p class="sum"><strong>${sum.tone === 'ok' ? 'Front first' : 'Check'}</strong> ${sum.text}</p>
+<p class="sum"><strong>${sum.tone === 'ok' ? 'Front first' : 'Check'}</strong> ${sum.text}${sum.tone === 'ok' && !overallPass ? ' Lock order only: see the verdict above.' : ''}</p>
 <dl class="facts">
 <div><dt>Critical braking rate</dt><dd>${crit === null ? 'none' : `z = ${fixed(crit, 3)}`}</dd></div>
 <div><dt>Lowest braking efficiency</dt><dd>${s.lowest_efficiency ? `${fixed(s.lowest_efficiency.efficiency * 100, 1)} % on k = ${s.lowest_efficiency.adhesion}` : '–'}</dd></div>
@@ -45,8 +69,9 @@ ${s.warnings.length ? html`<ul class="warnings">${s.warnings.map((w) => html`<li
 }
 
 export function verdicts(ctx: ResultContext): SafeHtml {
-  return html`<div class="verdicts">${ctx.result.load_states.map((s, i) => stateVerdict(s, i))}</div>
+  const pass = ctx.result.verdict.overall === 'pass';
+  return html`<div class="verdicts">${ctx.result.load_states.map((s, i) => stateVerdict(s, i, pass))}</div>
 ${ctx.warnings.length ? html`<ul class="warnings design-warnings">${ctx.warnings.map((w) => html`<li><code>${w.code}</code> ${w.path ? html`<span class="path">${w.path}</span>: ` : ''}${w.message}</li>`)}</ul>` : ''}`;
 }
 
-export const verdictPanel: Panel = { id: 'verdict', title: 'Verdict', results: verdicts };
+export const verdictPanel: Panel = { id: 'verdict', title: 'Lock order per load state', results: verdicts };

@@ -114,16 +114,28 @@ describe('performance/parking (18 %, laden, status memory)', () => {
   const needDown = s / (0.5 * c - 0.2 * s); // 0.38793
   const needUp = s / (0.5 * c + 0.2 * s); // 0.33582
 
+  // The braked axle and the control are stated; without a holding force or mechanism the capacity is not checked.
+  const rearHand = { parking_brake: { axle: 'rear' as const, control: 'hand' as const } };
+
   it('rear parking brake on test adhesion 0.8 passes both ways; on 0.35 facing downhill it fails', () => {
-    const ok = run(splitDesign({ frontPistons: 3, rearPistons: 2 }), 'performance/parking');
-    expect(ok.map((x) => x.scenario)).toEqual(['facing_uphill', 'facing_downhill']);
+    const ok = run(splitDesign({ frontPistons: 3, rearPistons: 2, extra: rearHand }), 'performance/parking');
+    expect(ok.map((x) => x.scenario)).toEqual(['facing_uphill', 'facing_downhill', 'parking_brake_capacity']);
     expect(ok[0]!.load_state).toBe('laden');
     expect(ok[0]!.worst_margin!).toBeCloseTo(0.8 - needUp, 10);
     expect(ok[1]!.worst_margin!).toBeCloseTo(0.8 - needDown, 10);
-    const low = run(splitDesign({ frontPistons: 3, rearPistons: 2, extra: { test_adhesion: 0.35 } }), 'performance/parking');
+    // issue 12 point 5: the capacity rests on a holding force nobody gave: not checked, never a pass
+    expect(ok[2]!).toMatchObject({ applies: true, passed: null, missing_inputs: ['parking_brake.holding_force_n'] });
+    const low = run(splitDesign({ frontPistons: 3, rearPistons: 2, extra: { test_adhesion: 0.35, ...rearHand } }), 'performance/parking');
     expect(low[0]!.passed).toBe(true);
     expect(low[1]!.passed).toBe(false);
     expect(low[1]!.worst_margin!).toBeCloseTo(0.35 - needDown, 10);
+  });
+
+  it('without a parking_brake block nothing is assumed: one "not checked" result naming the missing block (issue 12 point 5)', () => {
+    const none = run(splitDesign({ frontPistons: 3, rearPistons: 2 }), 'performance/parking');
+    expect(none).toHaveLength(1);
+    expect(none[0]!).toMatchObject({ load_state: 'laden', applies: true, passed: null, worst_margin: null, missing_inputs: ['parking_brake'] });
+    expect(none[0]!.note).toMatch(/^not checked: the parking brake is not described/);
   });
 
   it('capacity: declared 1500 N < m g sin θ = 1737 N fails; a hand lever giving 400·10·0.8·2·0.1/0.3 = 2133 N passes', () => {

@@ -8,7 +8,7 @@ import { PA_PER_BAR } from './constants.ts';
 import type { DesignFile, LoadState } from './design.ts';
 import type { Distribution } from './distribution.ts';
 import { installedDistribution } from './installed-distribution.ts';
-import { type PedalModel, pedalModel } from './pedal-force.ts';
+import { hydraulicPedalModel, type PedalModel } from './pedal-force.ts';
 import { type ValveLaw, valveLaw } from './rear-valve.ts';
 import { balanceBarPressureRatio } from './sizing/sizing-schema.ts';
 
@@ -49,7 +49,6 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
   const valve = bar ? { knee: law.knee / lambda, ratio: law.ratio } : law;
   const dist = installedDistribution({ P: loads.P, G1, G2, threshold1, threshold2, valve });
   if (bar) dist.p2 = dist.p2!.map((q) => q * lambda);
-  const bore = bar ? h.master_cylinder_bore_mm / Math.sqrt(bar.setting_front_share) : h.master_cylinder_bore_mm;
   return {
     state,
     loads,
@@ -59,7 +58,7 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
     threshold2,
     valve,
     dist,
-    pedal: pedalModel(bore, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar),
+    pedal: hydraulicPedalModel(h),
     rearMasterRatio: lambda,
   };
 }

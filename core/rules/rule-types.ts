@@ -117,6 +117,8 @@ export interface DecelerationFigures {
 export interface DecelerationRule extends RuleBase {
   kind: 'service' | 'secondary' | 'booster_failure';
   figures: DecelerationFigures;
+  /** The test surface the text names; absent: the dry-road default of the performance checks. */
+  test_surface?: TestSurface;
 }
 
 export interface ParkingRule extends RuleBase {
@@ -126,6 +128,16 @@ export interface ParkingRule extends RuleBase {
   /** Control-force limits, N. */
   max_hand_force_n: number;
   max_foot_force_n: number;
+  test_surface?: TestSurface;
+}
+
+/**
+ * The surface a performance rule is judged on. `adhesion` is the tyre–road adhesion coefficient the
+ * checks use (the design's `test_adhesion` overrides it); `words` say where the figure comes from.
+ */
+export interface TestSurface {
+  adhesion: number;
+  words: string;
 }
 
 export type Rule = CurveRule | DecelerationRule | ParkingRule;

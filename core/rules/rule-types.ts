@@ -87,6 +87,10 @@ export interface CurveRule extends RuleBase {
   /** Lock-order rules do not apply when ABS directly controls the wheels of every axle. */
   abs_exempt: boolean;
   branches: readonly Branch[];
+  /** Set when this record stands in for another one (the M1 requirement on a light N1 vehicle): the record replaced, shown for information. */
+  replaces?: CurveRule;
+  /** Which requirement applies and why, where the design decides it (light N1 vehicles). */
+  requirement_words?: string;
 }
 
 /** Stopping distance limit s ≤ a·v + b·v² (v in km/h, s in m). */

@@ -77,6 +77,12 @@ export const RearValve = z.discriminatedUnion('type', [
   z.strictObject({
     type: z.literal('load_sensing'),
     ratio: numAbove(0, 1),
+    /**
+     * What the valve's linkage follows: "dynamic" (default) the suspension travel, so the rear axle load
+     * while braking, N2 = P2 − z·(h/E)·P; "static" the rear axle load at rest (a valve that reads it only
+     * when standing, or a check of the table alone).
+     */
+    senses: z.enum(['static', 'dynamic']).optional(),
     knee_bar_at_rear_axle_kg: z.array(z.tuple([numAbove(0, 60000), numAbove(0, 300)])).min(1).max(20),
   }),
 ]);

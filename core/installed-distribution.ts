@@ -4,7 +4,7 @@
  * T(p) = T1 + T2 is piecewise linear and non-decreasing in p; its kinks are the thresholds and the
  * valve knee, so the distribution in z is exact at those breakpoints and linear between them.
  */
-import type { Distribution } from './distribution.ts';
+import { type Distribution, forcesAt } from './distribution.ts';
 import { masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
 
 export interface HydraulicAxles {
@@ -37,4 +37,98 @@ export function installedDistribution(h: HydraulicAxles): Distribution {
     d.p2!.push(p2);
   }
   return d;
+}
+
+/**
+ * A load-sensing valve that senses suspension travel follows the rear axle load while braking:
+ * N2 = P2 − z·(h/E)·P (Appendix 3.1.3), so its knee is K(z) = knee(m2 − z·χ·m), the table read at the
+ * dynamic rear load (kg), divided by `referTo` (λ of a balance bar, else 1). Knee pressures in Pa.
+ */
+export interface DynamicSensing {
+  /** Knee pressure (Pa, referred to the master pressure) at braking rate z. */
+  kneeAt(z: number): number;
+  /** Braking rates at which kneeAt changes slope (the table points reached by the dynamic load), ascending. */
+  kinks: readonly number[];
+  ratio: number;
+}
+
+/**
+ * The installed distribution with a travel-sensing valve, exact and piecewise linear in z.
+ * At a fixed z the knee is fixed, so the forces at z are those of the static distribution with the knee
+ * K(z) (installedDistribution), read at z. Between breakpoints T1(z), T2(z) are linear: on a table piece
+ * K(z) = a + b·z, and with the pressure above the knee z·P = G1(p − t1) + G2(r·p + (1 − r)·K(z) − t2) is
+ * linear in p and z together. The breakpoints are the thresholds, the table points, and the knee crossing
+ * z*: the fixed point z = zs(K(z)), where zs(p) = [G1(p − t1)⁺ + G2(p − t2)⁺]/P is the rate at pressure p
+ * below the knee. z − zs(K(z)) is increasing (K falls as z rises) and piecewise linear, so z* is found
+ * exactly by bracketing between its kinks and interpolating on the bracketing piece.
+ */
+export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sensing: DynamicSensing): Distribution {
+  const zs = (p: number) => (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+  const at = (z: number) => {
+    const d = installedDistribution({ ...h, valve: { knee: sensing.kneeAt(z), ratio: sensing.ratio } });
+    return forcesAt(d, z);
+  };
+  // Knee crossing: kinks of g(z) = z − zs(K(z)) are the table kinks and where K(z) meets a threshold.
+  const g = (z: number) => z - zs(sensing.kneeAt(z));
+  const cand = [0, ...sensing.kinks];
+  for (let i = 0; i + 1 < cand.length; i++) {
+    for (const t of [h.threshold1, h.threshold2]) {
+      const [za, zb] = [cand[i]!, cand[i + 1]!];
+      const [ka, kb] = [sensing.kneeAt(za), sensing.kneeAt(zb)];
+      if ((ka - t) * (kb - t) < 0) cand.push(za + ((t - ka) * (zb - za)) / (kb - ka));
+    }
+  }
+  const last = Math.max(...cand);
+  cand.push(last + zs(sensing.kneeAt(last)) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
+  cand.sort((a, b) => a - b);
+  let zStar = NaN;
+  for (let i = 0; i + 1 < cand.length; i++) {
+    const [za, zb] = [cand[i]!, cand[i + 1]!];
+    const [ga, gb] = [g(za), g(zb)];
+    if (ga <= 0 && gb > 0) {
+      zStar = za - (ga * (zb - za)) / (gb - ga);
+      break;
+    }
+  }
+  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].filter((z) => Number.isFinite(z) && z >= 0);
+  const zsSorted = [...new Set(bps)].sort((a, b) => a - b);
+  zsSorted.push(zsSorted[zsSorted.length - 1]! + 1);
+  const d: Distribution = { P: h.P, z: [], t1: [], t2: [], p: [], p2: [] };
+  const push = (z: number) => {
+    const f = at(z);
+    d.z.push(z);
+    d.t1.push(f.front);
+    d.t2.push(f.rear);
+    d.p!.push(f.p);
+    d.p2!.push(f.p2);
+  };
+  push(0);
+  // a threshold at or above some knee value is the only case with breakpoints not listed above
+  const kneeMin = Math.min(...cand.map((z) => sensing.kneeAt(z)));
+  const listed = Math.max(h.threshold1, h.threshold2) < kneeMin;
+  for (let i = 1; i < zsSorted.length; i++) {
+    if (listed) push(zsSorted[i]!);
+    else refine(zsSorted[i - 1]!, zsSorted[i]!, 0);
+  }
+  return d;
+
+  /**
+   * Adds the breakpoint zb after za. With thresholds below the knee (every practical valve) the pieces
+   * are linear already; a threshold above the knee moves its own breakpoint with z, and those pieces are
+   * split until the midpoint lies on the chord (to 1e-9 of the force).
+   */
+  function refine(za: number, zb: number, depth: number) {
+    if (!(zb > za)) return;
+    const zm = (za + zb) / 2;
+    const fa = at(za);
+    const fb = at(zb);
+    const fm = at(zm);
+    const off = Math.abs(fm.front - (fa.front + fb.front) / 2);
+    if (depth < 40 && off > 1e-9 * Math.max(1, Math.abs(fb.front))) {
+      refine(za, zm, depth + 1);
+      refine(zm, zb, depth + 1);
+      return;
+    }
+    push(zb);
+  }
 }

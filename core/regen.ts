@@ -26,7 +26,8 @@ import type { DesignFile, Regen } from './design.ts';
 import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
-import { type CurveRule, type RuleStatus, selectRules } from './rules/index.ts';
+import { type CurveRule, type RuleStatus } from './rules/index.ts';
+import { selectDesignRules } from './rules/light-n1.ts';
 import type { StateModel } from './state-model.ts';
 
 /** Defaults for the optional keys (engineering choices, documented in docs/design-file.md). */
@@ -265,7 +266,7 @@ export interface RegenResult {
 /** The curve rules of the design's rule selection that cover its category and this load-state kind. */
 export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
   const out: CurveRule[] = [];
-  for (const { rule, covers_category } of selectRules(ruleSelection(design), design.vehicle.category)) {
+  for (const { rule, covers_category } of selectDesignRules(ruleSelection(design), design)) {
     if (!covers_category || rule.kind !== 'curve') continue;
     if (rule.load_states !== 'all' && !(rule.load_states as readonly string[]).includes(kind)) continue;
     out.push(rule);

@@ -7,9 +7,9 @@ import { brakeGain } from './brake-gain.ts';
 import { PA_PER_BAR } from './constants.ts';
 import type { DesignFile, LoadState } from './design.ts';
 import type { Distribution } from './distribution.ts';
-import { installedDistribution } from './installed-distribution.ts';
-import { type PedalModel, pedalModel } from './pedal-force.ts';
-import { type ValveLaw, valveLaw } from './rear-valve.ts';
+import { type DynamicSensing, dynamicSensingDistribution, installedDistribution } from './installed-distribution.ts';
+import { hydraulicPedalModel, type PedalModel } from './pedal-force.ts';
+import { loadSensingKneeBar, type ValveLaw, valveLaw } from './rear-valve.ts';
 import { balanceBarPressureRatio } from './sizing/sizing-schema.ts';
 
 export interface StateModel {
@@ -28,6 +28,23 @@ export interface StateModel {
    * pressure is λ · rearPressure(valve, p) and a valve knee read from the design is referred as knee / λ.
    */
   rearMasterRatio: number;
+  /**
+   * A load-sensing valve that follows the rear axle load while braking (`senses` "dynamic", the default):
+   * its knee as a function of z. `valve` then holds the knee at the static load (the vehicle at rest, as
+   * on a roller tester). Undefined for every other valve.
+   */
+  sensing?: DynamicSensing;
+}
+
+/** The knee of a travel-sensing load-sensing valve as a function of z (core/installed-distribution.ts), or undefined. */
+export function dynamicSensing(design: DesignFile, state: LoadState, lambda: number): DynamicSensing | undefined {
+  const v = design.hydraulics.rear_valve;
+  if (v.type !== 'load_sensing' || v.senses === 'static') return undefined;
+  const m2 = state.mass_kg - state.front_axle_kg;
+  const perZ = (state.mass_kg * state.cg_height_m) / design.vehicle.wheelbase_m; // kg of rear load moved per unit z
+  const table = v.knee_bar_at_rear_axle_kg;
+  const kinks = table.map(([kg]) => (m2 - kg) / perZ).filter((z) => z > 0).sort((a, b) => a - b);
+  return { kneeAt: (z) => (loadSensingKneeBar(table, m2 - z * perZ) * PA_PER_BAR) / lambda, kinks, ratio: v.ratio };
 }
 
 export function stateModel(design: DesignFile, state: LoadState): StateModel {
@@ -47,9 +64,10 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
   const G2 = G2own * lambda;
   const threshold2 = threshold2own / lambda;
   const valve = bar ? { knee: law.knee / lambda, ratio: law.ratio } : law;
-  const dist = installedDistribution({ P: loads.P, G1, G2, threshold1, threshold2, valve });
+  const sensing = dynamicSensing(design, state, lambda);
+  const axles = { P: loads.P, G1, G2, threshold1, threshold2 };
+  const dist = sensing ? dynamicSensingDistribution(axles, sensing) : installedDistribution({ ...axles, valve });
   if (bar) dist.p2 = dist.p2!.map((q) => q * lambda);
-  const bore = bar ? h.master_cylinder_bore_mm / Math.sqrt(bar.setting_front_share) : h.master_cylinder_bore_mm;
   return {
     state,
     loads,
@@ -59,7 +77,8 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
     threshold2,
     valve,
     dist,
-    pedal: pedalModel(bore, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar),
+    pedal: hydraulicPedalModel(h),
     rearMasterRatio: lambda,
+    ...(sensing ? { sensing } : {}),
   };
 }

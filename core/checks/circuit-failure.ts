@@ -11,7 +11,7 @@
  * Also: the braking rate a master-cylinder pressure gives, and the pressure a braking rate needs.
  */
 import type { Distribution } from '../distribution.ts';
-import { installedDistribution } from '../installed-distribution.ts';
+import { dynamicSensingDistribution, installedDistribution } from '../installed-distribution.ts';
 import type { StateModel } from '../state-model.ts';
 
 export type CircuitCase = 'front_circuit_only' | 'rear_circuit_only' | 'one_diagonal';
@@ -23,7 +23,10 @@ export function circuitCases(split: 'front_rear' | 'diagonal'): CircuitCase[] {
 export function failedCircuitDistribution(s: StateModel, which: CircuitCase): Distribution {
   const G1 = which === 'rear_circuit_only' ? 0 : which === 'one_diagonal' ? s.G1 / 2 : s.G1;
   const G2 = which === 'front_circuit_only' ? 0 : which === 'one_diagonal' ? s.G2 / 2 : s.G2;
-  return installedDistribution({ P: s.loads.P, G1, G2, threshold1: s.threshold1, threshold2: s.threshold2, valve: s.valve });
+  const axles = { P: s.loads.P, G1, G2, threshold1: s.threshold1, threshold2: s.threshold2 };
+  // a travel-sensing valve follows the (smaller) load transfer of the weaker stop too
+  const d = s.sensing && G2 > 0 ? dynamicSensingDistribution(axles, s.sensing) : installedDistribution({ ...axles, valve: s.valve });
+  return d;
 }
 
 /** Adhesion to pass to firstLock so that it finds the lock of the braked wheels on a surface of adhesion k. */

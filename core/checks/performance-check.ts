@@ -18,7 +18,7 @@
 import { G_N } from '../constants.ts';
 import type { DesignFile } from '../design.ts';
 import { firstLock } from '../lock-order.ts';
-import { pedalForce, pedalModel, pressureForPedalForce } from '../pedal-force.ts';
+import { hydraulicPedalModel, pedalForce, pressureForPedalForce } from '../pedal-force.ts';
 import type { DecelerationFigures, DecelerationRule, ParkingRule } from '../rules/rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import type { CheckScenario } from './check-result.ts';
@@ -26,6 +26,16 @@ import { brakingRateAtPressure, type CircuitCase, failedCircuitDistribution, loc
 
 /** Test-surface adhesion when the design does not give test_adhesion (issue 4, common practice for a dry test surface). */
 export const DEFAULT_TEST_ADHESION = 0.8;
+
+/**
+ * The test-surface adhesion a performance rule is judged on: the design's `test_adhesion` when given,
+ * else the surface the rule's text names, else DEFAULT_TEST_ADHESION; with words saying which.
+ */
+export function testSurfaceFor(design: DesignFile, rule: DecelerationRule | ParkingRule): { k: number; source: 'design' | 'rule' | 'default'; words: string } {
+  if (design.test_adhesion !== undefined) return { k: design.test_adhesion, source: 'design', words: 'the design\'s test-surface adhesion' };
+  if (rule.test_surface) return { k: rule.test_surface.adhesion, source: 'rule', words: rule.test_surface.words };
+  return { k: DEFAULT_TEST_ADHESION, source: 'default', words: 'dry test surface, common practice (the text names no figure)' };
+}
 
 /** Decelerations within this of the requirement count as met, m/s². */
 export const DECELERATION_TOLERANCE = 1e-9;
@@ -75,10 +85,11 @@ const LIMIT_WORDS = { pedal: 'the pedal-force limit', lock: 'the first wheel loc
  */
 export function checkDeceleration(design: DesignFile, s: StateModel, rule: DecelerationRule, which: CircuitCase | null): DecelerationOutcome {
   const f = rule.figures;
-  const k = design.test_adhesion ?? DEFAULT_TEST_ADHESION;
+  const surface = testSurfaceFor(design, rule);
+  const k = surface.k;
   const h = design.hydraulics;
   const dist = which ? failedCircuitDistribution(s, which) : s.dist;
-  const pedal = rule.kind === 'booster_failure' ? pedalModel(h.master_cylinder_bore_mm, h.pedal_ratio, 1) : s.pedal;
+  const pedal = rule.kind === 'booster_failure' ? hydraulicPedalModel(h, { assisted: false }) : s.pedal;
   const zPedal = brakingRateAtPressure(dist, pressureForPedalForce(pedal, f.max_pedal_force_n));
   const absWorking = design.vehicle.abs && which === null && rule.kind === 'service';
   const lock = firstLock(s.loads, dist, lockAdhesionFor(which ?? 'intact', k));
@@ -94,7 +105,7 @@ export function checkDeceleration(design: DesignFile, s: StateModel, rule: Decel
   const distance = a > 0 ? (f.distance?.v_coeff ?? 0) * v + (v * v) / (KMH2_PER_M_TO_MS2 * a) : null;
   const margin = a - req.required_ms2;
   const passed = margin >= -DECELERATION_TOLERANCE;
-  const notes = [`${a.toFixed(2)} m/s² reached at ${f.max_pedal_force_n} N, limited by ${LIMIT_WORDS[limitedBy]} (adhesion ${k})`];
+  const notes = [`${a.toFixed(2)} m/s² reached at ${f.max_pedal_force_n} N, limited by ${LIMIT_WORDS[limitedBy]} (test surface adhesion ${k}: ${surface.words})`];
   if (forceReq === null) {
     const why = zReq > cap ? `before ${absWorking ? 'the adhesion limit' : 'a wheel locks'}` : 'with these brakes at any pedal force';
     notes.push(`the required ${req.required_ms2.toFixed(2)} m/s² is not reachable ${why}`);
@@ -112,6 +123,7 @@ export function checkDeceleration(design: DesignFile, s: StateModel, rule: Decel
     details: {
       test_speed_kmh: v,
       test_adhesion: k,
+      test_adhesion_source: surface.source,
       pedal_force_limit_n: f.max_pedal_force_n,
       braking_rate_at_pedal_limit: zPedal,
       first_lock_braking_rate: lock.first_axle === 'none' ? null : lock.braking_rate,
@@ -166,7 +178,8 @@ export const PARKING_CAPACITY_MISSING =
   "not checked: the parking brake's holding force is not given (give the holding force at the tyres, or the lever ratio, efficiency, brake factor and effective radius)";
 
 export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRule): ParkingOutcome[] {
-  const k = design.test_adhesion ?? DEFAULT_TEST_ADHESION;
+  const surface = testSurfaceFor(design, rule);
+  const k = surface.k;
   if (!design.parking_brake) {
     return [{ scenario: 'as_designed', passed: null, missing_inputs: ['parking_brake'], margin: null, margin_unit: 'N', note: PARKING_NOT_DESCRIBED, details: { gradient_pct: rule.gradient_pct } }];
   }
@@ -186,7 +199,7 @@ export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRul
       note:
         need === null
           ? `the ${axle} axle carries no load facing ${facing} on ${rule.gradient_pct} %`
-          : `facing ${facing} on ${rule.gradient_pct} %: the ${axle} axle needs adhesion ${need.toFixed(3)} (test surface ${k})`,
+          : `facing ${facing} on ${rule.gradient_pct} %: the ${axle} axle needs adhesion ${need.toFixed(3)} (test surface adhesion ${k}: ${surface.words})`,
       details: {
         gradient_pct: rule.gradient_pct,
         holding_force_n: hold,
@@ -194,6 +207,7 @@ export function checkParking(design: DesignFile, s: StateModel, rule: ParkingRul
         braked_axle_load_n: n,
         adhesion_needed: need,
         test_adhesion: k,
+        test_adhesion_source: surface.source,
       },
     });
   }

@@ -4,7 +4,8 @@
  * default for the category and ABS (core/rules/index.ts).
  */
 import type { DesignFile } from '../design.ts';
-import { defaultRuleSelection, selectRules } from '../rules/index.ts';
+import { defaultRuleSelection } from '../rules/index.ts';
+import { selectDesignRules } from '../rules/light-n1.ts';
 import type { CurveRule, DecelerationRule, ParkingRule, Rule } from '../rules/rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-result.ts';
@@ -56,6 +57,18 @@ function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, ad
   const notes = [rule.note ?? ''];
   if (advisory) notes.unshift(ABS_FAILED_NOTE);
   if (lift) notes.push(`the rear axle lifts off at z = ${s.loads.zLift.toFixed(3)}, inside the checked range (counted as failing above it)`);
+  const extra: Pick<CheckResult, 'details'> = {};
+  if (rule.requirement_words) {
+    // light N1 (core/rules/light-n1.ts): which requirement decided, and the one it replaced for information
+    const replaced = rule.replaces ? checkCurveRule(rule.replaces, s.loads, s.dist) : null;
+    extra.details = {
+      requirement_applied: rule.replaces ? 'M1' : 'N1',
+      requirement_reason: rule.requirement_words,
+      replaced_requirement_passed: replaced ? replaced.passed : null,
+      replaced_requirement_margin: replaced ? replaced.worst_margin : null,
+    };
+    if (replaced) notes.push(`the N1 requirement alone would ${replaced.passed ? 'pass' : 'fail'}, margin ${replaced.worst_margin === null ? 'none' : replaced.worst_margin.toFixed(3)} (for information)`);
+  }
   return Object.assign(base(rule, s.state.id, scenario), { status: v.status }, verifyNoteFor(v.status), {
     applies: true,
     passed: v.passed,
@@ -67,7 +80,7 @@ function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, ad
     branch: v.branch,
     branches: v.branches,
     note: notes.filter(Boolean).join('; '),
-  });
+  }, extra);
 }
 
 function decelerationResults(design: DesignFile, rule: DecelerationRule, s: StateModel): CheckResult[] {
@@ -116,7 +129,7 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
   const heaviest = rated ?? Math.max(...models.map((m) => m.state.mass_kg));
   const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
   const out: CheckResult[] = [];
-  for (const { rule, covers_category } of selectRules(ruleSelection(design, opts), category)) {
+  for (const { rule, covers_category } of selectDesignRules(ruleSelection(design, opts), design)) {
     if (!covers_category) {
       out.push(notApplicable(rule, null, `not applicable: ${rule.rule_set} has no requirement "${rule.id}" for category ${category} (covers ${rule.categories.join(', ')})`));
       continue;

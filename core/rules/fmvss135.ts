@@ -8,6 +8,9 @@ import type { RuleSet } from './rule-types.ts';
 const DOC = 'FMVSS No. 135 (49 CFR 571.135)';
 const ALL = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'] as const;
 
+/** The high-friction test surface of the standard: peak friction coefficient 0.9 (from memory). */
+export const FMVSS_TEST_SURFACE = { adhesion: 0.9, words: 'peak friction coefficient 0.9 of the standard\'s test surface, from memory' } as const;
+
 export const fmvss135: RuleSet = {
   id: 'fmvss135',
   title: 'FMVSS No. 135: light vehicle brake systems (design guidance where from memory)',
@@ -37,6 +40,7 @@ export const fmvss135: RuleSet = {
       load_states: 'all',
       max_mass_kg: 3500,
       figures: { speed_kmh: 100, max_pedal_force_n: 500, min_pedal_force_n: 65, max_distance_m: 70, distance: { v_coeff: 0.1, v2_coeff: 0.006 } },
+      test_surface: FMVSS_TEST_SURFACE,
     },
     {
       kind: 'secondary',
@@ -49,6 +53,7 @@ export const fmvss135: RuleSet = {
       load_states: 'all',
       max_mass_kg: 3500,
       figures: { speed_kmh: 100, max_pedal_force_n: 500, max_distance_m: 168, distance: { v_coeff: 0.1, v2_coeff: 0.0158 } },
+      test_surface: FMVSS_TEST_SURFACE,
     },
     {
       kind: 'booster_failure',
@@ -61,6 +66,7 @@ export const fmvss135: RuleSet = {
       load_states: 'all',
       max_mass_kg: 3500,
       figures: { speed_kmh: 100, max_pedal_force_n: 500, max_distance_m: 168, distance: { v_coeff: 0.1, v2_coeff: 0.0158 } },
+      test_surface: FMVSS_TEST_SURFACE,
     },
     {
       kind: 'parking',
@@ -75,6 +81,7 @@ export const fmvss135: RuleSet = {
       gradient_pct: 20,
       max_hand_force_n: 400,
       max_foot_force_n: 500,
+      test_surface: FMVSS_TEST_SURFACE,
     },
   ],
 };

@@ -87,6 +87,10 @@ export interface CurveRule extends RuleBase {
   /** Lock-order rules do not apply when ABS directly controls the wheels of every axle. */
   abs_exempt: boolean;
   branches: readonly Branch[];
+  /** Set when this record stands in for another one (the M1 requirement on a light N1 vehicle): the record replaced, shown for information. */
+  replaces?: CurveRule;
+  /** Which requirement applies and why, where the design decides it (light N1 vehicles). */
+  requirement_words?: string;
 }
 
 /** Stopping distance limit s ≤ a·v + b·v² (v in km/h, s in m). */
@@ -117,6 +121,8 @@ export interface DecelerationFigures {
 export interface DecelerationRule extends RuleBase {
   kind: 'service' | 'secondary' | 'booster_failure';
   figures: DecelerationFigures;
+  /** The test surface the text names; absent: the dry-road default of the performance checks. */
+  test_surface?: TestSurface;
 }
 
 export interface ParkingRule extends RuleBase {
@@ -126,6 +132,16 @@ export interface ParkingRule extends RuleBase {
   /** Control-force limits, N. */
   max_hand_force_n: number;
   max_foot_force_n: number;
+  test_surface?: TestSurface;
+}
+
+/**
+ * The surface a performance rule is judged on. `adhesion` is the tyre–road adhesion coefficient the
+ * checks use (the design's `test_adhesion` overrides it); `words` say where the figure comes from.
+ */
+export interface TestSurface {
+  adhesion: number;
+  words: string;
 }
 
 export type Rule = CurveRule | DecelerationRule | ParkingRule;

@@ -10,10 +10,10 @@
  */
 import { G_N, PA_PER_BAR } from '../constants.ts';
 import { pressureAtBrakingRate } from '../checks/circuit-failure.ts';
-import { DEFAULT_TEST_ADHESION, requiredDeceleration } from '../checks/performance-check.ts';
+import { requiredDeceleration, testSurfaceFor } from '../checks/performance-check.ts';
 import type { DesignFile } from '../design.ts';
 import { firstLock } from '../lock-order.ts';
-import { pedalForce, pedalModel, pressureForPedalForce } from '../pedal-force.ts';
+import { hydraulicPedalModel, pedalForce, pressureForPedalForce } from '../pedal-force.ts';
 import { stateModel } from '../state-model.ts';
 import { catalogueSizes } from './catalogue.ts';
 import { serviceRule } from './sizing-rules.ts';
@@ -69,7 +69,7 @@ export function masterCylinderBore(design: DesignFile, opts: BoreOptions = {}): 
   const margin = opts.pedal_force_margin ?? DEFAULT_PEDAL_FORCE_MARGIN;
   const req = requiredDeceleration(rule.figures);
   const zReq = req.required_ms2 / G_N;
-  const k = design.test_adhesion ?? DEFAULT_TEST_ADHESION;
+  const k = testSurfaceFor(design, rule).k;
   const h = design.hydraulics;
   const bore = h.master_cylinder_bore_mm;
   const target = (1 - margin) * rule.figures.max_pedal_force_n;
@@ -98,14 +98,8 @@ export function masterCylinderBore(design: DesignFile, opts: BoreOptions = {}): 
   }
   // the pedal's equivalent area is proportional to the front bore area (also with a balance bar)
   const maxBore = Number.isFinite(ratio) ? bore * Math.sqrt(ratio) : null;
-  const forceAt = (b: number) => {
-    const scaled = pedalModel(b, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar);
-    return pedalForce(scaled, pReq) * (h.balance_bar ? 1 / h.balance_bar.setting_front_share : 1);
-  };
-  const pressureAtLimit = (b: number) => {
-    const eq = h.balance_bar ? b / Math.sqrt(h.balance_bar.setting_front_share) : b;
-    return pressureForPedalForce(pedalModel(eq, h.pedal_ratio, h.booster_ratio, h.booster_runout_bar), rule.figures.max_pedal_force_n) / PA_PER_BAR;
-  };
+  const forceAt = (b: number) => pedalForce(hydraulicPedalModel({ ...h, master_cylinder_bore_mm: b }), pReq);
+  const pressureAtLimit = (b: number) => pressureForPedalForce(hydraulicPedalModel({ ...h, master_cylinder_bore_mm: b }), rule.figures.max_pedal_force_n) / PA_PER_BAR;
   // pressure at the limit ∝ 1/A above and below runout only piecewise: find the smallest bore by bisection
   let minBore: number | null = null;
   if (pressureAtLimit(60) <= pMaxBar) {

@@ -5,7 +5,8 @@
  * exempts are kept: a design is sized for the ABS-failed vehicle too (the caution says so).
  */
 import type { DesignFile, LoadState } from '../design.ts';
-import { defaultRuleSelection, selectRules } from '../rules/index.ts';
+import { defaultRuleSelection } from '../rules/index.ts';
+import { selectDesignRules } from '../rules/light-n1.ts';
 import type { CurveRule, DecelerationRule } from '../rules/rule-types.ts';
 import { type CompiledRule, compileRule } from './rule-margin.ts';
 
@@ -30,7 +31,7 @@ function withinMass(rule: CurveRule | DecelerationRule, design: DesignFile): boo
 
 export function sizingCurveRules(design: DesignFile, selection?: readonly string[]): SizingRule[] {
   const out: SizingRule[] = [];
-  for (const { rule, covers_category } of selectRules(sizingRuleSelection(design, selection), design.vehicle.category)) {
+  for (const { rule, covers_category } of selectDesignRules(sizingRuleSelection(design, selection), design)) {
     if (rule.kind !== 'curve' || !covers_category || !withinMass(rule, design)) continue;
     const states = design.load_states.flatMap((s, i) => (coversState(rule, s) ? [i] : []));
     if (states.length > 0) out.push({ compiled: compileRule(rule), states });
@@ -40,7 +41,7 @@ export function sizingCurveRules(design: DesignFile, selection?: readonly string
 
 /** The service-braking rule of the selection for the design's category (the pedal-force target), or null. */
 export function serviceRule(design: DesignFile, selection?: readonly string[]): DecelerationRule | null {
-  for (const { rule, covers_category } of selectRules(sizingRuleSelection(design, selection), design.vehicle.category)) {
+  for (const { rule, covers_category } of selectDesignRules(sizingRuleSelection(design, selection), design)) {
     if (rule.kind === 'service' && covers_category && withinMass(rule, design)) return rule;
   }
   return null;

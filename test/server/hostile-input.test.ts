@@ -19,6 +19,7 @@ import { MAX_INPUT_BYTES } from '../../cli/errors.ts';
 import { buildApp } from '../../server/app.ts';
 import { UPLOAD_LIMIT } from '../../server/errors.ts';
 import { designToValues, readForm } from '../../server/forms/design-form.ts';
+import { MAX_FIELDS } from '../../server/forms/field-names.ts';
 import { MAX_CONNECTIONS, SERVER_LIMITS } from '../../server/plugins/request-guard.ts';
 import { FORM_ROUTES, freshDemoBody, hostileRequest, PROTOTYPE_NAMES } from '../../scripts/hostile-form.ts';
 
@@ -118,6 +119,13 @@ describe('hostile field names (issue 16, points 1 to 3)', () => {
     expect(r.json().message).toContain('is a list');
     const plain = await post('/workbench/design.json', demoForm());
     expect(plain.json().load_states).toHaveLength(demoDesign().load_states.length);
+  });
+
+  it('a form with more fields than any page sends (over 5000) is refused with 400 APP_ERR_TOO_MANY_FIELDS', async () => {
+    const body = Array.from({ length: MAX_FIELDS + 1 }, (_, i) => `notes${i}=x`).join('&');
+    const r = await post('/workbench/update', body);
+    expect(r.statusCode).toBe(400);
+    expect(r.json().code).toBe('APP_ERR_TOO_MANY_FIELDS');
   });
 
   it('a sizing proposal for a part the design does not have (a balance bar) is a 422 APP_ERR_SIZING_NOT_APPLICABLE', async () => {

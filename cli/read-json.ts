@@ -28,7 +28,8 @@ function readCapped(fd: number, cap: number): Buffer {
 }
 
 export function readJsonFile(file: string): unknown {
-  const stdin = file === '-';
+  // /dev/stdin is read as the open descriptor 0: opening it again fails when standard input is a socket
+  const stdin = file === '-' || file === '/dev/stdin' || file === '/dev/fd/0';
   let fd: number;
   try {
     fd = stdin ? 0 : openSync(file, 'r');

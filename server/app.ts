@@ -125,8 +125,9 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
   app.setNotFoundHandler((req, reply) => sendError(req, reply, appErrors.notFound(req.url.split('?')[0]!.slice(0, 200)), assets));
   app.setErrorHandler((err: FastifyError | AppError, req, reply) => {
     let e: AppError;
+    const framework = err instanceof AppError ? null : fromFrameworkError(err, req.headers['content-type']);
     if (err instanceof AppError) e = err;
-    else if (fromFrameworkError(err, req.headers['content-type'])) e = fromFrameworkError(err, req.headers['content-type'])!;
+    else if (framework) e = framework;
     else if (typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 500) e = appErrors.badRequest(err.message);
     else {
       req.log.error(err);

@@ -12,7 +12,10 @@
  * - booleans (schema z.boolean()): a hidden input "false" followed by a checkbox "true"; the last value wins.
  *   Optional facts where "not stated" differs from "no" use a three-way select (views/fields.ts triStateField):
  *   "" (not stated) leaves the key out, "true" / "false" set it. Other text is reported on the field.
- * - everything else is text, sent as typed (enums are <select>s); empty text leaves the key out.
+ * - everything else is text, sent as typed (enums are <select>s); empty text leaves the key out. White space is
+ *   kept as typed, as in the design file (a label of spaces is valid in both; the form never refuses a file's value).
+ * - names are checked first (server/forms/field-names.ts): prototype words, odd names and list positions beyond
+ *   the schema's list limits are refused.
  * - objects that end up without keys are left out (an optional block nobody filled in stays absent).
  */
 import { z } from 'zod';

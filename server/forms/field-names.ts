@@ -95,8 +95,21 @@ function segments(name: string): Key[] | null {
   return out.length > 0 && typeof out[0] === 'string' && formatPath(out) === name ? out : null;
 }
 
+/** Answers by name: the same names come with every recompute. */
+const answers = new Map<string, string | null>();
+
 /** Why a posted field name is refused, or null when it may be read. */
 export function fieldNameProblem(name: string): string | null {
+  let a = answers.get(name);
+  if (a === undefined) {
+    a = findProblem(name);
+    if (answers.size >= MAX_FIELDS) answers.clear();
+    answers.set(name, a);
+  }
+  return a;
+}
+
+function findProblem(name: string): string | null {
   if (name.length > MAX_FIELD_NAME) return `the name is longer than ${MAX_FIELD_NAME} characters`;
   if (name.startsWith('_')) return /^_[A-Za-z0-9_]+$/.test(name) && !FORBIDDEN_KEYS.has(name) ? null : 'not a control of the page';
   const path = segments(name);

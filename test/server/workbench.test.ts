@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
+import { BODY_LIMIT } from '../../server/errors.ts';
 import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
 import { HTMX_CONFIG } from '../../views/layout.ts';
 import { formBody, openPage, postForm } from './form-post.ts';
@@ -112,7 +113,7 @@ describe('errors', () => {
     expect(h.body).not.toContain('<script>x');
   });
   it('refuses a body over the limit with 413 APP_ERR_BODY_TOO_LARGE', async () => {
-    const r = await app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: `name=${'x'.repeat(1_100_000)}` });
+    const r = await app.inject({ method: 'POST', url: '/workbench/update', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: `name=${'x'.repeat(BODY_LIMIT + 1)}` });
     expect(r.statusCode).toBe(413);
     expect(r.json()).toMatchObject({ code: 'APP_ERR_BODY_TOO_LARGE' });
   });

@@ -92,6 +92,7 @@ export function overallWord(v: Pick<Verdict, 'overall'>): string {
 /** Words for the design-file paths a check can be missing. */
 const MISSING_WORDS: Record<string, string> = {
   parking_brake: 'the parking brake (which axle it brakes, hand or foot control, and its holding force or mechanism)',
+  'hydraulics.booster_runout_bar': 'the booster runout pressure (the assist runs out above it; the check passes with unlimited assist and fails without any)',
   'parking_brake.holding_force_n':
     "the parking brake's holding force at the tyres, or its mechanism (lever ratio, efficiency, brake factor and effective radius)",
 };

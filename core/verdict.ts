@@ -92,6 +92,7 @@ export function overallWord(v: Pick<Verdict, 'overall'>): string {
 /** Words for the design-file paths a check can be missing. */
 const MISSING_WORDS: Record<string, string> = {
   parking_brake: 'the parking brake (which axle it brakes, hand or foot control, and its holding force or mechanism)',
+  'hydraulics.booster_runout_bar': 'the booster runout pressure (the assist runs out above it; the check passes with unlimited assist and fails without any)',
   'parking_brake.holding_force_n':
     "the parking brake's holding force at the tyres, or its mechanism (lever ratio, efficiency, brake factor and effective radius)",
 };
@@ -198,13 +199,21 @@ function matchingCheck(checks: readonly CheckResult[], rule: string, loadState: 
   return checks.find((c) => c.rule === rule && c.load_state === loadState && c.applies) ?? null;
 }
 
-function regenRefs(regen: RegenResult, checks: readonly CheckResult[], labels: ReadonlyMap<string, string>): { ref: CheckRef; advisory: boolean }[] {
-  const out: { ref: CheckRef; advisory: boolean }[] = [];
+/** One item of the verdict; the ref (words and all) is built only when asked for (most items pass). */
+interface Item {
+  passed: boolean | null;
+  advisory: boolean;
+  ref: () => CheckRef;
+  /** Not checked: the missing inputs in words and their paths. */
+  missing?: () => { missing: string[]; missing_inputs: string[] };
+}
+
+function regenItems(regen: RegenResult, checks: readonly CheckResult[], labels: ReadonlyMap<string, string>, out: Item[]): void {
   for (const st of regen.load_states) {
     const label = labels.get(st.id) ?? st.id;
     const limit = st.max_force_passing_checks_n;
     const motor = limit === null ? null : (limit * regen.tyre_radius_m) / regen.gear_ratio;
-    const limitWords =
+    const limitWords = () =>
       st.max_force_basis === 'full_force_passes'
         ? `; the full ${fixed(regen.max_force_n, 0)} N keeps the checks passing`
         : limit !== null
@@ -216,8 +225,9 @@ function regenRefs(regen: RegenResult, checks: readonly CheckResult[], labels: R
       if (!match) continue;
       const passed = rc.passed;
       out.push({
+        passed,
         advisory: match.advisory,
-        ref: {
+        ref: () => ({
           kind: 'regeneration',
           rule: rc.rule,
           title: rc.title,
@@ -236,27 +246,34 @@ function regenRefs(regen: RegenResult, checks: readonly CheckResult[], labels: R
           margin_unit: 'adhesion',
           description:
             `${label}, ${rc.speed_kmh} km/h with ${fixed(rc.regen_force_n, 0)} N regeneration: ${rc.title}: ` +
-            `${outcomeWords(passed, rc.worst_margin, 'adhesion')}${passed ? '' : limitWords}${match.advisory ? ' (for information)' : ''}`,
+            `${outcomeWords(passed, rc.worst_margin, 'adhesion')}${passed ? '' : limitWords()}${match.advisory ? ' (for information)' : ''}`,
           anchor: checkAnchor(rc.rule, st.id, 'regen', rc.speed_kmh),
-        },
+        }),
       });
     }
   }
+}
+
+function items(r: VerdictInput): Item[] {
+  const labels = new Map(r.load_states.map((s) => [s.id, s.label]));
+  const out: Item[] = [];
+  for (const c of r.checks) {
+    if (!c.applies) continue;
+    out.push({
+      passed: c.passed,
+      advisory: c.advisory,
+      ref: () => checkRef(c, labels),
+      ...(c.passed === null ? { missing: () => ({ missing: missingWords(c), missing_inputs: c.missing_inputs ?? [] }) } : {}),
+    });
+  }
+  for (const f of r.failure_modes) out.push({ passed: f.passed, advisory: false, ref: () => failureModeRef(f, labels) });
+  if (r.regen) regenItems(r.regen, r.checks, labels, out);
   return out;
 }
 
-/** Every item the verdict is made of, in order: checks, failed-valve cases, regeneration cases. */
-export function verdictItems(r: VerdictInput): { ref: CheckRef; advisory: boolean; missing?: string[]; missing_inputs?: string[] }[] {
-  const labels = new Map(r.load_states.map((s) => [s.id, s.label]));
-  const items: { ref: CheckRef; advisory: boolean; missing?: string[]; missing_inputs?: string[] }[] = [];
-  for (const c of r.checks) {
-    if (!c.applies) continue;
-    const ref = checkRef(c, labels);
-    items.push(c.passed === null ? { ref, advisory: c.advisory, missing: missingWords(c), missing_inputs: c.missing_inputs ?? [] } : { ref, advisory: c.advisory });
-  }
-  for (const f of r.failure_modes) items.push({ ref: failureModeRef(f, labels), advisory: false });
-  if (r.regen) items.push(...regenRefs(r.regen, r.checks, labels));
-  return items;
+/** Every item the verdict is made of, in order: checks, failed-valve cases, regeneration cases (for tables). */
+export function verdictItems(r: VerdictInput): { ref: CheckRef; advisory: boolean }[] {
+  return items(r).map((it) => ({ ref: it.ref(), advisory: it.advisory }));
 }
 
 function plural(n: number, one: string, many: string): string {
@@ -269,16 +286,16 @@ export function buildVerdict(r: VerdictInput): Verdict {
   const advisories: CheckRef[] = [];
   let checked = 0;
   let passedCount = 0;
-  for (const it of verdictItems(r)) {
+  for (const it of items(r)) {
     if (it.advisory) {
-      if (it.ref.passed !== true) advisories.push(it.ref);
+      if (it.passed !== true) advisories.push(it.ref());
       continue;
     }
-    if (it.ref.passed === null) notChecked.push({ ...it.ref, missing: it.missing ?? [], missing_inputs: it.missing_inputs ?? [] });
+    if (it.passed === null) notChecked.push({ ...it.ref(), ...(it.missing?.() ?? { missing: [], missing_inputs: [] }) });
     else {
       checked++;
-      if (it.ref.passed) passedCount++;
-      else failed.push(it.ref);
+      if (it.passed) passedCount++;
+      else failed.push(it.ref());
     }
   }
   // Nothing checked at all (every selected rule is not applicable) is no pass either.

@@ -62,11 +62,6 @@ export function failedChecks(checks: readonly CheckResult[]): CheckResult[] {
   return checks.filter((c) => c.applies && !c.advisory && c.passed === false);
 }
 
-/** Checks that apply but could not be made because an input is missing (advisory results excluded). */
-export function notCheckedChecks(checks: readonly CheckResult[]): CheckResult[] {
-  return checks.filter((c) => c.applies && !c.advisory && c.passed === null);
-}
-
 /** Words for each scenario, shared by the command line, the page and the evidence packet ('' = as designed). */
 export const SCENARIO_LABELS: Record<CheckScenario, string> = {
   as_designed: '',

@@ -83,10 +83,35 @@ function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, ad
   }, extra);
 }
 
+/**
+ * A booster without a stated runout pressure is modelled as never running out. Whether that decides a verdict is
+ * tested with the lowest possible runout (0: no assist at all, which any real booster beats): when the two readings
+ * disagree the verdict rests on the missing runout, and the check is "not checked" (issue 12 point 5).
+ */
+function restsOnRunout(design: DesignFile, rule: DecelerationRule, s: StateModel, which: Parameters<typeof checkDeceleration>[3], passed: boolean): boolean {
+  const h = design.hydraulics;
+  if (rule.kind === 'booster_failure' || h.booster_ratio <= 1 || h.booster_runout_bar !== undefined || !passed) return false;
+  const none = { ...s, pedal: { ...s.pedal, runout: 0 } };
+  return !checkDeceleration(design, none, rule, which).passed;
+}
+
+export const RUNOUT_MISSING_NOTE = 'not checked: the verdict depends on the booster runout pressure, which is not given';
+
 function decelerationResults(design: DesignFile, rule: DecelerationRule, s: StateModel): CheckResult[] {
   const cases = rule.kind === 'secondary' ? circuitCases(design.hydraulics.circuit_split) : [null];
   return cases.map((which) => {
     const o = checkDeceleration(design, s, rule, which);
+    if (restsOnRunout(design, rule, s, which, o.passed)) {
+      return Object.assign(base(rule, s.state.id, o.scenario), verifyNoteFor(rule.status), {
+        applies: true,
+        passed: null,
+        missing_inputs: ['hydraulics.booster_runout_bar'],
+        worst_margin: null,
+        margin_unit: 'm/s²' as const,
+        note: `${RUNOUT_MISSING_NOTE} (with unlimited assist: ${o.note})`,
+        details: o.details,
+      });
+    }
     return Object.assign(base(rule, s.state.id, o.scenario), verifyNoteFor(rule.status), {
       applies: true,
       passed: o.passed,

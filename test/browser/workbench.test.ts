@@ -53,6 +53,27 @@ async function legendOverlaps(): Promise<string[]> {
 
 // the machine running the suite may be busy: a generous timeout per step, never a timed assertion
 describe('workbench in chromium', { timeout: 60000 }, () => {
+  it('opens with the overall verdict above every result: FAIL for the demo (its regeneration), each line leading to its row', async () => {
+    // the demo fails on purpose: regeneration unladen at 20 and 50 km/h (core/demo.ts)
+    expect(await page.textContent('#overall-verdict .ov-badge')).toBe('FAIL');
+    const first = await page.evaluate(() => {
+      const results = document.querySelector('#results .result-body')!;
+      return results.firstElementChild?.id;
+    });
+    expect(first).toBe('overall-verdict');
+    await page.click('#overall-verdict li a');
+    const target = await page.evaluate(() => {
+      const t = document.querySelector(':target');
+      if (!t) return null;
+      const r = t.getBoundingClientRect();
+      return { tag: t.tagName, text: t.textContent ?? '', visible: r.top >= 0 && r.top < innerHeight };
+    });
+    expect(target).toMatchObject({ tag: 'TR', visible: true });
+    expect(target!.text).toContain('FAIL');
+    expect(target!.text).toContain('20 km/h');
+    await page.evaluate(() => window.scrollTo(0, 0));
+  });
+
   it('opens on the demo with the verdict, three charts and the caution', async () => {
     expect(await page.textContent('#verdict-0')).toContain('front axle locks first');
     for (const id of ['chart-a', 'chart-b', 'chart-c']) expect(await drawn(id)).not.toBeNull();

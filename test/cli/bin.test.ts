@@ -18,7 +18,7 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const lockstep = (...args: string[]) => spawnSync(process.execPath, [bin, ...args], { cwd: root, encoding: 'utf8', timeout: 60000 });
 
 describe('bin/lockstep.mjs', () => {
-  it('demo > file, then evaluate file --json: a lockstep-result/1 (exit 0/1 by the checks); a broken file: exit 2', () => {
+  it('demo > file, then evaluate file --json: a lockstep-result/1 (exit code by its verdict); a broken file: exit 2', () => {
     const demo = lockstep('demo');
     expect(demo.status).toBe(0);
     const p = join(dir, 'demo.json');

@@ -8,6 +8,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { run, tempFiles } from './run-cli.ts';
 import { splitDesign } from '../core/checks/fixed-split.ts';
+import { exitCodeFor } from '../../cli/exit-code.ts';
 
 const tmp = tempFiles('lockstep-checks-');
 afterAll(() => tmp.remove());
@@ -111,5 +112,17 @@ describe('lockstep evaluate: a failed distribution device also decides the exit 
     expect(res.checks.every((c: any) => c.passed !== false)).toBe(true);
     expect(res.failure_modes.some((f: any) => f.passed === false)).toBe(true);
     expect(r.code).toBe(1);
+  });
+});
+
+describe('exit codes (README "Exit codes", issue 12): 0 pass, 1 fail, 2 invalid input, 3 incomplete', () => {
+  it('one mapping from the verdict, and an invalid file exits 2 with nothing on stdout', async () => {
+    expect([exitCodeFor({ overall: 'pass' }), exitCodeFor({ overall: 'fail' }), exitCodeFor({ overall: 'incomplete' })]).toEqual([0, 1, 3]);
+    const bad = splitDesign({ frontPistons: 7, rearPistons: 3 });
+    (bad.vehicle as { wheelbase_m: number }).wheelbase_m = 0.1;
+    const r = await run(['evaluate', file('invalid.json', bad)]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/vehicle\.wheelbase_m/);
   });
 });

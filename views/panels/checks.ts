@@ -48,7 +48,7 @@ function row(c: CheckResult): SafeHtml {
 function refRow(r: CheckRef, advisory: boolean): SafeHtml {
   const v = verdict({ applies: true, passed: r.passed, advisory });
   const limit =
-    r.kind === 'regeneration' && r.regen_limit_n !== undefined && r.regen_limit_n !== null
+    r.kind === 'regeneration' && r.passed === false && r.regen_limit_n !== undefined && r.regen_limit_n !== null
       ? html`<br><small>largest regenerative force keeping the checks passing: ${fixed(r.regen_limit_n, 0)} N (${fixed(r.regen_limit_motor_nm ?? 0, 1)} N·m at the motor)</small>`
       : '';
   return html`<tr class="check-${v.cls}" id="${r.anchor}">

@@ -18,10 +18,10 @@ ${selectField(ctx, `${P}.axle`, 'Braked axle', [['', 'not described'], ['rear', 
 ${selectField(ctx, `${P}.control`, 'Control', [['', 'not described'], ['hand', 'hand lever'], ['foot', 'foot pedal']], { optional: true })}
 ${numberField(ctx, `${P}.control_force_n`, 'Control force applied', { optional: true, hint: 'empty = the rule’s limit for the control (held to it)' })}
 </div>
-<fieldset class="valve"><legend>Holding force <span class="opt">give this, or the mechanism below</span></legend>
+<fieldset class="valve"><legend>Holding force, or the mechanism below</legend>
 ${numberField(ctx, `${P}.holding_force_n`, 'Holding force at the tyres', { optional: true, hint: 'declared by the maker or measured' })}
 </fieldset>
-<fieldset class="valve"><legend>Mechanism <span class="opt">all four, or the holding force above</span></legend>
+<fieldset class="valve"><legend>Mechanism: all four, or the holding force above</legend>
 <p class="hint">Control force × lever ratio × efficiency = the actuating force into the axle’s two brakes; × brake factor × effective radius ÷ tyre radius = the force at the tyres.</p>
 <div class="grid">
 ${numberField(ctx, `${P}.lever_ratio`, 'Lever ratio (control to brakes)', { optional: true, unitText: '–' })}

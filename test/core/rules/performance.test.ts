@@ -157,3 +157,27 @@ describe('performance/parking (18 %, laden, status memory)', () => {
     expect(lever.passed).toBe(true);
   });
 });
+
+describe('a booster without a stated runout (issue 12 point 5: a default the user never confirmed)', () => {
+  // splitDesign: bore 25 mm (A = π/4·0.025² = 4.909e-4 m²), pedal ratio 4, booster 4, one 40 mm piston per axle,
+  // 3000 kg. At 500 N with assist p = 500·4·4/A = 163.0 bar: lock-capped, passes M1 service (5.8 m/s²).
+  // Without any assist p = 500·4/A = 40.7 bar, z = 2·gain(1)·p/(m g) = 2·8.04e-4·40.7e5/29420 = 0.223, a = 2.18 m/s²:
+  // fails. The verdict depends on where the assist runs out, which the design does not say: not checked.
+  it('service braking that passes only with unlimited assist is "not checked", naming the runout pressure', () => {
+    const d = splitDesign({ frontPistons: 1, rearPistons: 1, mass_kg: 3000 });
+    const z0 = (gainOf(2) * pressureFor(500, 1)) / (3000 * g);
+    expect(z0 * g).toBeLessThan(5.8); // the unassisted reading fails (hand figure above)
+    const open = run(d, 'performance/service');
+    expect(open.every((c) => c.applies && c.passed === null && c.missing_inputs?.[0] === 'hydraulics.booster_runout_bar')).toBe(true);
+    // a runout above the 163 bar needed leaves the assist unlimited up to the pedal limit: then it is checked and passes
+    d.hydraulics.booster_runout_bar = 200;
+    expect(run(d, 'performance/service').every((c) => c.passed === true)).toBe(true);
+  });
+
+  it('a design that passes even without any assist needs no runout: it is checked', () => {
+    // 7 + 3 pistons, 1000 kg: unassisted 40.7 bar gives z = gain(10)·p/(m g) far above the lock cap
+    const d = splitDesign({ frontPistons: 7, rearPistons: 3 });
+    expect((gainOf(10) * pressureFor(500, 1)) / (1000 * g)).toBeGreaterThan(1);
+    expect(run(d, 'performance/service').every((c) => c.passed === true && c.missing_inputs === undefined)).toBe(true);
+  });
+});

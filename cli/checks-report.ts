@@ -5,6 +5,7 @@ import { fmt } from './table.ts';
 
 export function verdictWord(c: CheckResult): string {
   if (!c.applies) return 'n/a';
+  if (c.passed === null) return 'not checked';
   if (c.passed) return 'PASS';
   return c.advisory ? 'fail (info)' : 'FAIL';
 }
@@ -31,7 +32,7 @@ function entry(c: CheckResult): string[] {
   const scen = SCENARIO_LABELS[c.scenario];
   const head = [`${verdictWord(c).padEnd(11)} ${c.rule}${scen ? ` (${scen})` : ''}`];
   if (c.applies) {
-    head.push(`margin ${marginText(c)}`);
+    if (c.passed !== null) head.push(`margin ${marginText(c)}`);
     if (c.worst_at_braking_rate !== null) head.push(`worst at z = ${fmt(c.worst_at_braking_rate, 3)}`);
     const f = failingText(c);
     if (f) head.push(f);
@@ -57,6 +58,11 @@ export function checksSection(r: EvaluationResult): string[] {
     if (mine.length === 0) continue;
     out.push(`  Load state "${s.id}" (${s.kind}):`);
     for (const c of mine) out.push(...entry(c));
+  }
+  const own = new Set(r.load_states.map((s) => s.id));
+  for (const id of new Set(r.checks.map((c) => c.load_state).filter((x): x is string => x !== null && !own.has(x)))) {
+    out.push(`  Derived load state "${id}" (made from the lightly loaded or towing inputs):`);
+    for (const c of r.checks.filter((x) => x.load_state === id)) out.push(...entry(c));
   }
   const failed = r.checks.filter((c) => c.applies && !c.advisory && c.passed === false).length;
   out.push(failed === 0 ? '  Every applicable check passes.' : `  ${failed} check${failed === 1 ? '' : 's'} failed.`);

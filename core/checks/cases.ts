@@ -99,7 +99,7 @@ function failureStopResults(design: DesignFile, rule: FailureStopRule, s: StateM
   const as = asDecelerationRule(rule, rule.figures, 'secondary');
   if (rule.kind === 'abs_failure_stop') {
     if (!design.vehicle.abs) return [notApplicable(rule, s.state.id, 'not applicable: no working antilock; the other checks already treat the vehicle as without antilock')];
-    return [decelerationCheck(rule, s.state.id, 'abs_failed', checkDeceleration(design, s, as, null), rule.status, 'antilock failed: the hydraulic distribution alone, up to the first wheel lock')];
+    return [decelerationCheck(rule, s.state.id, 'antilock_failed', checkDeceleration(design, s, as, null), rule.status, 'capped by the first wheel lock on the test surface')];
   }
   const out: CheckResult[] = [];
   for (const f of failedValves(design.hydraulics.rear_valve)) {

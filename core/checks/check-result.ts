@@ -21,6 +21,7 @@ export type CheckScenario =
   | 'valve_linkage_lowest_knee'
   | 'valve_linkage_highest_knee'
   | 'ebd_failed'
+  | 'antilock_failed'
   | 'hot_brakes'
   | 'with_trailer'
   | 'regeneration_on';
@@ -85,6 +86,7 @@ export const SCENARIO_LABELS: Record<CheckScenario, string> = {
   valve_stuck_shut: 'proportioning valve stuck shut: no rear braking',
   valve_linkage_lowest_knee: 'load-sensing linkage broken: valve reads the vehicle as empty',
   valve_linkage_highest_knee: 'load-sensing linkage broken: valve reads the vehicle as fully laden',
+  antilock_failed: 'antilock failed: the hydraulic distribution alone',
   ebd_failed: 'electronic brake-force distribution failed: hydraulic split as installed',
   hot_brakes: 'hot brakes after the heating sequence',
   with_trailer: 'towing the trailer',

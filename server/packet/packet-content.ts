@@ -412,6 +412,7 @@ function sourceText(s: unknown): string {
 
 export function verdictOf(c: Record<string, unknown>): string {
   if (c.applies === false || c.applicable === false) return 'NOT APPLICABLE';
+  if (c.applies === true && c.passed === null) return 'NOT CHECKED';
   if (c.passed === true) return 'PASS';
   if (c.passed === false) return 'FAIL';
   if (typeof c.verdict === 'string') return c.verdict.toUpperCase();

@@ -11,6 +11,7 @@ import type { Panel, ResultContext } from './panel.ts';
 
 function verdict(c: CheckResult): { cls: string; text: string } {
   if (!c.applies) return { cls: 'na', text: 'not applicable' };
+  if (c.passed === null) return { cls: 'na', text: 'not checked' };
   if (c.passed) return { cls: 'ok', text: 'pass' };
   return c.advisory ? { cls: 'info', text: 'fails (information)' } : { cls: 'fail', text: 'FAIL' };
 }
@@ -60,7 +61,14 @@ ${general.length ? table('Whole design', general) : ''}
 ${ctx.result.load_states.map((s) => {
   const mine = checks.filter((c) => c.load_state === s.id);
   return mine.length ? table(`${s.label} (${s.kind}, id ${s.id})`, mine) : '';
-})}`;
+})}
+${derivedStateIds(ctx).map((id) => table(`Derived load state ${id} (lightly loaded vehicle or towing, made from the inputs)`, checks.filter((c) => c.load_state === id)))}`;
+}
+
+/** Load states the checks derived themselves (FMVSS lightly loaded vehicle, towing), in order of appearance. */
+function derivedStateIds(ctx: ResultContext): string[] {
+  const own = new Set(ctx.result.load_states.map((s) => s.id));
+  return [...new Set(ctx.result.checks.map((c) => c.load_state).filter((id): id is string => id !== null && !own.has(id)))];
 }
 
 export const checksPanel: Panel = { id: 'checks', title: 'Regulation checks', results: checksTables };

@@ -122,7 +122,7 @@ function systemFittedResult(design: DesignFile, rule: SystemFittedRule): CheckRe
     return factResult(rule, design.vehicle.abs, design.vehicle.abs ? `${what} fitted and working` : `no working ${what}${status ? ` (stated: ${status.replace('_', ' ')})` : ''}`);
   }
   const working = status !== undefined ? systemWorks(status) : design.conversion?.stability_control_working;
-  if (working === undefined) return notChecked(rule, null, ['systems.esc'], `not checked: state whether ${what} is fitted and working (systems, stability control)`);
+  if (working === undefined) return notChecked(rule, null, ['systems.esc'], `not checked: state whether ${what} is fitted and working (braking-aid status inputs)`);
   return factResult(rule, working, working ? `${what} fitted and working` : `no working ${what}${status ? ` (stated: ${status.replace('_', ' ')})` : ''}`);
 }
 

@@ -48,8 +48,7 @@ export function factResult(rule: Rule, passed: boolean, note: string, details?: 
     worst_margin: null,
     margin_unit: 'none' as const,
     note,
-    ...(details ? { details } : {}),
-  });
+  }, details ? { details } : {});
 }
 
 /** A deceleration outcome as a CheckResult of a case rule. */
@@ -103,7 +102,7 @@ function failureStopResults(design: DesignFile, rule: FailureStopRule, s: StateM
   }
   const out: CheckResult[] = [];
   for (const f of failedValves(design.hydraulics.rear_valve)) {
-    const failed: StateModel = { ...s, dist: failedDistribution(s, f) };
+    const failed: StateModel = Object.assign({}, s, { dist: failedDistribution(s, f) });
     out.push(decelerationCheck(rule, s.state.id, VALVE_SCENARIO[f.mode], checkDeceleration(design, failed, as, null), rule.status, NO_ABS_CREDIT));
   }
   if (systemWorks(design.systems?.ebd)) {

@@ -22,6 +22,7 @@ import { installedDistribution } from '../installed-distribution.ts';
 import type { HotRule } from '../rules/case-rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult } from './check-result.ts';
+// Object.assign rather than object spread below: on Node 20 a spread of a result-sized object costs far more (bench/evaluate.ts).
 import { asDecelerationRule, decelerationCheck, notChecked } from './cases.ts';
 import { checkDeceleration, DECELERATION_TOLERANCE, requiredDeceleration } from './performance-check.ts';
 
@@ -56,7 +57,7 @@ export function hotStateModel(s: StateModel, frontFactor: number, rearFactor: nu
   const G2 = s.G2 * rearFactor;
   const dist = installedDistribution({ P: s.loads.P, G1, G2, threshold1: s.threshold1, threshold2: s.threshold2, valve: s.valve });
   if (s.rearMasterRatio !== 1 && dist.p2) dist.p2 = dist.p2.map((q) => q * s.rearMasterRatio); // real rear line pressure (balance bar)
-  return { ...s, G1, G2, dist };
+  return Object.assign({}, s, { G1, G2, dist });
 }
 
 export function hotPerformanceResults(design: DesignFile, rule: HotRule, states: readonly StateModel[]): CheckResult[] {
@@ -93,8 +94,7 @@ export function hotPerformanceResults(design: DesignFile, rule: HotRule, states:
       passed: margin >= -DECELERATION_TOLERANCE,
       worst_margin: margin,
       note,
-      details: {
-        ...hot.details,
+      details: Object.assign({}, hot.details, {
         estimate: true,
         front_rotor_end_c: run.front_final_peak_c,
         rear_rotor_end_c: run.rear_final_peak_c,
@@ -105,7 +105,7 @@ export function hotPerformanceResults(design: DesignFile, rule: HotRule, states:
         prescribed_deceleration_ms2: prescribed,
         hot_required_ms2: need,
         hot_deceleration_ms2: aHot,
-      },
+      }),
     }),
   ];
 }

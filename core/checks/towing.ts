@@ -66,7 +66,7 @@ export function towingCase(design: DesignFile, all: readonly StateModel[]): Towi
   const sm = stateModel(design, state);
   const mf = t.trailer_braked ? 0 : t.trailer_mass_kg - n;
   const chi = (mass * state.cg_height_m + mf * hc) / ((mass + mf) * E);
-  const loads: AxleLoadModel = { ...sm.loads, chi, h: chi * E, zLift: sm.loads.P2 / (chi * sm.loads.P) };
+  const loads: AxleLoadModel = Object.assign({}, sm.loads, { chi, h: chi * E, zLift: sm.loads.P2 / (chi * sm.loads.P) });
   return { state: sm, loads, towing_mass_kg: mass, free_mass_kg: mf, trailer_mass_kg: t.trailer_mass_kg, hitch_height_m: hc, base_state: st.id };
 }
 
@@ -158,7 +158,7 @@ export function combinationParkingResults(design: DesignFile, rule: CombinationP
       }),
     );
   }
-  const asParking: ParkingRule = { ...rule, kind: 'parking' };
+  const asParking: ParkingRule = Object.assign({}, rule, { kind: 'parking' as const });
   const cap = parkingBrakeCapacity(design, asParking);
   if (cap) {
     const margin = cap.force_n - hold;

@@ -31,8 +31,8 @@ export function failingText(c: CheckResult): string {
 function entry(c: CheckResult): string[] {
   const scen = SCENARIO_LABELS[c.scenario];
   const head = [`${verdictWord(c).padEnd(11)} ${c.rule}${scen ? ` (${scen})` : ''}`];
-  if (c.applies && c.passed !== null) {
-    head.push(`margin ${marginText(c)}`);
+  if (c.applies) {
+    if (c.passed !== null) head.push(`margin ${marginText(c)}`);
     if (c.worst_at_braking_rate !== null) head.push(`worst at z = ${fmt(c.worst_at_braking_rate, 3)}`);
     const f = failingText(c);
     if (f) head.push(f);
@@ -58,6 +58,11 @@ export function checksSection(r: EvaluationResult): string[] {
     if (mine.length === 0) continue;
     out.push(`  Load state "${s.id}" (${s.kind}):`);
     for (const c of mine) out.push(...entry(c));
+  }
+  const own = new Set(r.load_states.map((s) => s.id));
+  for (const id of new Set(r.checks.map((c) => c.load_state).filter((x): x is string => x !== null && !own.has(x)))) {
+    out.push(`  Derived load state "${id}" (made from the lightly loaded or towing inputs):`);
+    for (const c of r.checks.filter((x) => x.load_state === id)) out.push(...entry(c));
   }
   // the one verdict (regeneration and failed-valve cases included), in the same words as at the top
   out.push(`  Verdict: ${r.verdict.summary}`);

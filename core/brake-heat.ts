@@ -42,6 +42,12 @@ export function typeIParameters(category: Vehicle['category']): { vCapKmh: numbe
   return { vCapKmh, intervalS, cycles };
 }
 
+/** Type-I start speed v1, km/h: 80 % of the maximum speed, not above the category cap (the cap when no maximum is given). */
+export function typeIStartSpeedKmh(category: Vehicle['category'], maxSpeedKmh: number | undefined): number {
+  const cap = typeIParameters(category).vCapKmh;
+  return maxSpeedKmh !== undefined ? Math.min(0.8 * maxSpeedKmh, cap) : cap;
+}
+
 /** Type-I braking deceleration, m/s² (control force set for 3 m/s² at the first application). */
 export const TYPE_I_DECELERATION = 3;
 
@@ -257,7 +263,7 @@ export function heatAnalysis(design: DesignFile, models: readonly StateModel[]):
   const rows = models.map((m) => stopHeat(m.state.id, m.state.mass_kg, m.dist, stopKmh / 3.6, 0, zStop, s));
   if (base) rows.push(stopHeat('base_vehicle', base.mass, base.dist, stopKmh / 3.6, 0, zStop, s));
   const t = typeIParameters(cat);
-  const v1Kmh = h.max_speed_kmh !== undefined ? Math.min(0.8 * h.max_speed_kmh, t.vCapKmh) : t.vCapKmh;
+  const v1Kmh = typeIStartSpeedKmh(cat, h.max_speed_kmh);
   const v1 = v1Kmh / 3.6;
   const v2 = v1 / 2;
   const notes = [

@@ -8,6 +8,7 @@ import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
 import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
+import { casesIssues, LightlyLoaded, Systems, Towing } from './cases-schema.ts';
 
 export { describeValue };
 
@@ -135,6 +136,10 @@ export const Regen = z
     blending: RegenBlending,
     front_share: num(0, 1).optional(),
     speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
+    // R13-H regeneration category (core/checks/regen-category.ts): A not part of service braking, B part of it
+    category: z.enum(['A', 'B']).optional(),
+    abs_controls_regen_axle: z.boolean().optional(),
+    failure_warning: z.boolean().optional(),
   })
   .superRefine((r, ctx) => {
     const fade = r.fade_start_kmh ?? 15;
@@ -167,6 +172,8 @@ export const HeatOptions = z.strictObject({
   stop_speed_kmh: numAbove(0, 300).optional(),
   base_vehicle_mass_kg: num(50, 60000).optional(),
   base_vehicle_front_axle_kg: numAbove(0, 60000).optional(),
+  // pad friction factor against rotor temperature for the hot stop (core/checks/hot-performance.ts)
+  hot_friction_factor_at_c: z.array(z.tuple([num(-40, 1200), num(0.1, 1.5)])).min(1).max(12).optional(),
 }).superRefine((h, ctx) => {
   const m = h.base_vehicle_mass_kg;
   const f = h.base_vehicle_front_axle_kg;
@@ -179,6 +186,12 @@ export const HeatOptions = z.strictObject({
           ? `${f} needs base_vehicle_mass_kg beside it (the base vehicle's mass)`
           : `${f} is not below base_vehicle_mass_kg ${m} (the front axle load must be between 0 and the mass)`,
     });
+  }
+  const t = h.hot_friction_factor_at_c ?? [];
+  for (let i = 1; i < t.length; i++) {
+    if (t[i]![0] <= t[i - 1]![0]) {
+      ctx.addIssue({ code: 'custom', path: ['hot_friction_factor_at_c', i, 0], message: `${t[i]![0]} is not above the previous temperature ${t[i - 1]![0]} °C (sorted by temperature, ascending, without repeats)` });
+    }
   }
 });
 
@@ -243,6 +256,9 @@ export const designShape = {
   test_adhesion: num(0.05, 1.5).optional(),
   parking_brake: ParkingBrake.optional(),
   tolerances: Tolerances.optional(), // robustness analysis of the sizing assistant (core/sizing/sizing-schema.ts)
+  lightly_loaded: LightlyLoaded.optional(), // FMVSS 135 lightly loaded vehicle (core/cases-schema.ts)
+  towing: Towing.optional(), // trailer for the towing load state and the combination gradient
+  systems: Systems.optional(), // ABS, ESC, EBD status
 };
 
 /** Cross-field rules: each issue lands on the field a person has to change. */
@@ -287,6 +303,7 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
       message: '"diagonal" cannot go with a balance bar: each of its master cylinders feeds one axle; use "front_rear" or remove hydraulics.balance_bar',
     });
   }
+  casesIssues(d, ctx);
   const adh = d.adhesion_coefficients;
   if (adh) {
     const dup = adh.findIndex((k, i) => adh.indexOf(k) !== i);

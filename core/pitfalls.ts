@@ -4,6 +4,7 @@
  * practice or regime it comes from. They use the optional `base_vehicle` and `conversion` blocks and
  * fire only on facts the design states; a design without those blocks raises none.
  */
+import { systemWorks } from './cases-schema.ts';
 import type { DesignFile } from './design.ts';
 
 export interface Pitfall {
@@ -27,7 +28,59 @@ const SRC = {
   drumMc: 'Practitioner reports: calipers need more fluid than drums, so a drum-system master cylinder may lack displacement; drum residual valves (about 0.7 bar) do not suit discs (field-practice sections 2 and 3)',
   booster: 'NSW Brake assessment manual Table 1: removing the booster triggers a brake assessment; plate test at 500 N with the booster disconnected (field-practice 1.1)',
   vacuum: 'EV-conversion practice: without engine vacuum an electric vacuum pump and reservoir are needed (field-practice section 2, EV conversions)',
+  retained: 'Practitioner reports: an antilock, stability or distribution controller is calibrated for the base vehicle\'s brakes, tyres, masses and suspension (field-practice section 2; common practice, no source)',
 } as const;
+
+const SYSTEM_NAMES = { abs: 'antilock (ABS)', esc: 'stability control (ESC)', ebd: 'electronic brake-force distribution (EBD)' } as const;
+
+/** What the conversion changed that a controller kept from the base vehicle was set up for. */
+function changesForRetained(design: DesignFile): string[] {
+  const base = design.base_vehicle;
+  const out: string[] = [];
+  for (const axle of ['front', 'rear'] as const) {
+    const type = axle === 'front' ? base?.front_brake_type : base?.rear_brake_type;
+    if (type !== undefined && type !== design.axles[axle].brake.type) out.push(`${axle} brakes changed from ${type} to ${design.axles[axle].brake.type}`);
+    const r = axle === 'front' ? base?.front_tyre_radius_m : base?.rear_tyre_radius_m;
+    if (r !== undefined && Math.abs(design.axles[axle].tyre_radius_m / r - 1) > TYRE_RADIUS_CHANGE_LIMIT) out.push(`${axle} tyre radius changed`);
+  }
+  if (base?.circuit_split !== undefined && base.circuit_split !== design.hydraulics.circuit_split) out.push('circuit split changed');
+  if (design.conversion?.suspension_modified === true) out.push('suspension modified');
+  const baseMass = design.heat?.base_vehicle_mass_kg;
+  const heaviest = Math.max(...design.load_states.map((s) => s.mass_kg));
+  if (baseMass !== undefined && heaviest > baseMass * 1.1) out.push(`heaviest load state ${heaviest} kg against the base vehicle's ${baseMass} kg`);
+  return out;
+}
+
+/** Pitfalls from the `systems` block (ABS, ESC, EBD status): removed, not working, or kept on changed hardware. */
+function systemPitfalls(design: DesignFile, already: readonly Pitfall[]): Pitfall[] {
+  const out: Pitfall[] = [];
+  const changes = changesForRetained(design);
+  for (const k of ['abs', 'esc', 'ebd'] as const) {
+    const st = design.systems?.[k];
+    if (st === undefined) continue;
+    const name = SYSTEM_NAMES[k];
+    const covered = already.some((p) => p.code === (k === 'abs' ? 'PITFALL_ABS_LOST' : k === 'esc' ? 'PITFALL_STABILITY_CONTROL_LOST' : ''));
+    if ((st === 'removed' || st === 'not_working') && !covered) {
+      out.push({
+        code: st === 'removed' ? 'PITFALL_SYSTEM_REMOVED' : 'PITFALL_SYSTEM_NOT_WORKING',
+        path: `systems.${k}`,
+        message:
+          `${name} ${st === 'removed' ? 'was removed by the conversion' : 'is fitted but does not work'}: the checks treat the vehicle as without it, ` +
+          'and many regimes will not certify a conversion that loses what the base vehicle had',
+        source: SRC.abs,
+      });
+    }
+    if (st === 'retained' && changes.length > 0) {
+      out.push({
+        code: 'PITFALL_SYSTEM_RETAINED_CHANGED',
+        path: `systems.${k}`,
+        message: `${name} is kept from the base vehicle but the conversion changed what it was set up for (${changes.join('; ')}): ask its maker or prove it by test`,
+        source: SRC.retained,
+      });
+    }
+  }
+  return out;
+}
 
 export function pitfalls(design: DesignFile): Pitfall[] {
   const out: Pitfall[] = [];
@@ -70,12 +123,14 @@ export function pitfalls(design: DesignFile): Pitfall[] {
       source: SRC.abs,
     });
   }
-  if (base?.stability_control === true && conv?.stability_control_working !== true) {
+  const escStatus = design.systems?.esc;
+  const escWorking = escStatus !== undefined ? systemWorks(escStatus) : conv?.stability_control_working;
+  if (base?.stability_control === true && escWorking !== true) {
     out.push({
       code: 'PITFALL_STABILITY_CONTROL_LOST',
-      path: 'conversion.stability_control_working',
+      path: escStatus !== undefined ? 'systems.esc' : 'conversion.stability_control_working',
       message:
-        conv?.stability_control_working === false
+        escWorking === false
           ? 'the base vehicle had stability control but it does not work in the conversion: some regimes refuse a certificate'
           : 'the base vehicle had stability control and the design does not state that it still works (conversion.stability_control_working)',
       source: SRC.abs,
@@ -141,5 +196,6 @@ export function pitfalls(design: DesignFile): Pitfall[] {
       });
     }
   }
+  out.push(...systemPitfalls(design, out));
   return out;
 }

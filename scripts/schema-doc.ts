@@ -68,7 +68,7 @@ const SUFFIX_UNITS: [RegExp, string][] = [
   [/_pct$/, '%'],
 ];
 /** Lists whose entries are pairs of different units. */
-const PAIR_UNITS: Record<string, [string, string]> = { knee_bar_at_rear_axle_kg: ['kg', 'bar'] };
+const PAIR_UNITS: Record<string, [string, string]> = { knee_bar_at_rear_axle_kg: ['kg', 'bar'], hot_friction_factor_at_c: ['°C', ''] };
 
 function suffixUnit(key: string): string {
   for (const [re, unit] of SUFFIX_UNITS) if (re.test(key)) return unit;

@@ -15,9 +15,19 @@ export type CheckScenario =
   | 'no_booster_assist'
   | 'facing_uphill'
   | 'facing_downhill'
-  | 'parking_brake_capacity';
+  | 'parking_brake_capacity'
+  | 'valve_stuck_open'
+  | 'valve_stuck_shut'
+  | 'valve_linkage_lowest_knee'
+  | 'valve_linkage_highest_knee'
+  | 'ebd_failed'
+  | 'antilock_failed'
+  | 'hot_brakes'
+  | 'with_trailer'
+  | 'regeneration_on';
 
-export type MarginUnit = 'adhesion' | 'm/s²' | 'N';
+/** 'none': a check of a stated fact (a system fitted, a warning signal), without a margin. */
+export type MarginUnit = 'adhesion' | 'm/s²' | 'N' | 'none';
 
 export interface CheckResult {
   /** Rule id, e.g. `eu-appendix/lock-order`. */
@@ -73,4 +83,13 @@ export const SCENARIO_LABELS: Record<CheckScenario, string> = {
   facing_uphill: 'facing uphill',
   facing_downhill: 'facing downhill',
   parking_brake_capacity: 'parking-brake capacity',
+  valve_stuck_open: 'proportioning valve stuck open: full pressure to the rear',
+  valve_stuck_shut: 'proportioning valve stuck shut: no rear braking',
+  valve_linkage_lowest_knee: 'load-sensing linkage broken: valve reads the vehicle as empty',
+  valve_linkage_highest_knee: 'load-sensing linkage broken: valve reads the vehicle as fully laden',
+  antilock_failed: 'antilock failed: the hydraulic distribution alone',
+  ebd_failed: 'electronic brake-force distribution failed: hydraulic split as installed',
+  hot_brakes: 'hot brakes after the heating sequence',
+  with_trailer: 'towing the trailer',
+  regeneration_on: 'largest regenerative force acting',
 };

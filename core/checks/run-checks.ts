@@ -12,6 +12,8 @@ import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-res
 import { circuitCases } from './circuit-failure.ts';
 import { checkCurveRule } from './curve-check.ts';
 import { checkDeceleration, checkParking } from './performance-check.ts';
+import { caseMarginUnit, caseResults, isCaseRule } from './cases.ts';
+import { derivedForRule, derivedStates } from './lightly-loaded.ts';
 
 export const ABS_EXEMPT_NOTE =
   'not applicable: ABS directly controls the wheels of every axle (71/320/EEC Annex II Appendix point 1 with Annex X; ' +
@@ -21,7 +23,7 @@ export const ABS_FAILED_NOTE = 'ABS failed: evaluated as a vehicle without ABS (
 
 // Results are built with Object.assign rather than object spread: on Node 20 spreading a result-sized
 // object costs microseconds each, a large share of a whole evaluation (bench/evaluate.ts).
-function base(rule: Rule, loadState: string | null, scenario: CheckScenario): Omit<CheckResult, 'applies' | 'passed' | 'worst_margin' | 'margin_unit'> {
+export function base(rule: Rule, loadState: string | null, scenario: CheckScenario): Omit<CheckResult, 'applies' | 'passed' | 'worst_margin' | 'margin_unit'> {
   return {
     rule: rule.id,
     rule_set: rule.rule_set,
@@ -38,10 +40,11 @@ function base(rule: Rule, loadState: string | null, scenario: CheckScenario): Om
 }
 
 function marginUnit(rule: Rule): CheckResult['margin_unit'] {
+  if (isCaseRule(rule)) return caseMarginUnit(rule);
   return rule.kind === 'curve' || rule.kind === 'parking' ? 'adhesion' : 'm/s²';
 }
 
-function notApplicable(rule: Rule, loadState: string | null, note: string, scenario: CheckScenario = 'as_designed'): CheckResult {
+export function notApplicable(rule: Rule, loadState: string | null, note: string, scenario: CheckScenario = 'as_designed'): CheckResult {
   return Object.assign(base(rule, loadState, scenario), verifyNoteFor(rule.status), {
     applies: false,
     passed: null,
@@ -154,7 +157,9 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
   const heaviest = rated ?? Math.max(...models.map((m) => m.state.mass_kg));
   const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
   const out: CheckResult[] = [];
-  for (const { rule, covers_category } of selectDesignRules(ruleSelection(design, opts), design)) {
+  const selected = selectDesignRules(ruleSelection(design, opts), design);
+  const derived = derivedStates(design, selected); // the FMVSS lightly loaded vehicle, when those rules are selected
+  for (const { rule, covers_category } of selected) {
     if (!covers_category) {
       out.push(notApplicable(rule, null, `not applicable: ${rule.rule_set} has no requirement "${rule.id}" for category ${category} (covers ${rule.categories.join(', ')})`));
       continue;
@@ -163,7 +168,10 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
       out.push(notApplicable(rule, null, `not applicable: covers vehicles up to ${rule.max_mass_kg} kg; ${massWords} ${heaviest} kg`));
       continue;
     }
-    const states = rule.load_states === 'all' ? models : models.filter((m) => (rule.load_states as readonly string[]).includes(m.state.kind));
+    const extra = derivedForRule(rule, derived);
+    const pool = extra.models.length ? [...models, ...extra.models] : models;
+    out.push(...extra.not_checked);
+    const states = rule.load_states === 'all' ? pool : pool.filter((m) => (rule.load_states as readonly string[]).includes(m.state.kind));
     if (states.length === 0) {
       // The rule applies to every vehicle of the category: without the load state it needs it is not checked (never a pass).
       const kinds = (rule.load_states as readonly string[]).join(' or ');
@@ -176,6 +184,11 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
       );
       continue;
     }
+    if (isCaseRule(rule)) {
+      out.push(...caseResults(design, rule, states, models));
+      continue;
+    }
+    const first = out.length;
     for (const s of states) {
       if (rule.kind === 'curve') {
         if (rule.abs_exempt && design.vehicle.abs) {
@@ -185,6 +198,7 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
       } else if (rule.kind === 'parking') out.push(...parkingResults(design, rule, s));
       else out.push(...decelerationResults(design, rule, s));
     }
+    extra.annotate(out, first, states);
   }
   return out;
 }

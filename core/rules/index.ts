@@ -7,8 +7,11 @@ import { fmvss135 } from './fmvss135.ts';
 import { performance } from './performance.ts';
 import type { Category, Rule, RuleSet } from './rule-types.ts';
 import { unR13h } from './un-r13h.ts';
+import { withCases } from './case-sets.ts';
 
-export const RULE_SETS: readonly RuleSet[] = [euAppendix, performance, unR13h, fmvss135];
+const withCaseRules = withCases(performance, unR13h, fmvss135);
+
+export const RULE_SETS: readonly RuleSet[] = [euAppendix, withCaseRules.performance, withCaseRules.unR13h, withCaseRules.fmvss135];
 
 /** Every id a design file's `rules` key or `--rules` may name: set ids, then rule ids. */
 export const RULE_SELECTORS: readonly string[] = [
@@ -52,4 +55,5 @@ export function selectRules(selection: readonly string[], category: Category): S
 }
 
 export * from './rule-types.ts';
+export * from './case-rule-types.ts';
 export { euAppendix, fmvss135, performance, unR13h };

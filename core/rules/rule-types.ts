@@ -5,6 +5,7 @@
  * coefficient is a change here, not in the checkers.
  */
 import type { VEHICLE_CATEGORIES } from '../design.ts';
+import type { CaseRule } from './case-rule-types.ts';
 
 export type Category = (typeof VEHICLE_CATEGORIES)[number];
 
@@ -64,7 +65,7 @@ export interface Branch {
   pieces: readonly Piece[];
 }
 
-interface RuleBase {
+export interface RuleBase {
   id: string;
   /** The rule set this record belongs to (an edition). */
   rule_set: string;
@@ -144,7 +145,7 @@ export interface TestSurface {
   words: string;
 }
 
-export type Rule = CurveRule | DecelerationRule | ParkingRule;
+export type Rule = CurveRule | DecelerationRule | ParkingRule | CaseRule;
 
 export interface RuleSet {
   id: string;

@@ -443,6 +443,7 @@ export const EMPTYABLE_LISTS: Array<{ list: string; blank: Record<string, string
   { list: 'build_up.added', blank: { name: '', mass_kg: '', x_m: '', cg_height_m: '', group: 'added' } },
   { list: 'build_up.seats', blank: { name: '', x_m: '', cg_height_m: '', driver: 'false' } },
   { list: 'build_up.tanks', blank: { name: '', full_kg: '', x_m: '', cg_height_m: '', fill_weighed: '' } },
+  { list: 'heat.hot_friction_factor_at_c', blank: { '[0]': '', '[1]': '' } },
 ];
 
 /** Reads `_op` values such as "add:load_states", "dup:load_states[1]", "remove:axles.front.brake.piston_diameters_mm[1]". */
@@ -471,7 +472,8 @@ export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): Fo
   const emptyable = EMPTYABLE_LISTS.find((l) => l.list === op.list);
   if (op.op === 'add' && idx.length === 0 && emptyable) {
     const out = { ...values };
-    for (const [k, v] of Object.entries(emptyable.blank)) out[`${op.list}[0].${k}`] = v;
+    // a blank key "[j]" is an element of a tuple entry (e.g. a [temperature, factor] pair), others are object keys
+    for (const [k, v] of Object.entries(emptyable.blank)) out[`${op.list}[0]${k.startsWith('[') ? k : `.${k}`}`] = v;
     return out;
   }
   if (op.op === 'remove') {

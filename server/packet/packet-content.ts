@@ -590,7 +590,7 @@ export function packetContent(input: PacketInput): PacketContent {
       kind: 'table',
       columns: ['Rule', 'Load state', 'Verdict', 'Worst margin', 'at z', 'Failing z ranges', 'Source', 'Status', 'Notes'],
       rows: rows.map((r) => [r.rule, r.loadState, r.verdict, r.margin, r.at, r.failing, r.source, r.status, r.note]),
-      widths: [1.2, 0.9, 0.7, 0.8, 0.45, 0.8, 1.5, 0.75, 2.6],
+      widths: [1.2, 0.9, 1.05, 0.8, 0.45, 0.8, 1.5, 0.75, 2.25],
     });
   }
   b.push({ kind: 'h2', text: 'Braking distribution per load state' });

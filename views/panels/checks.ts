@@ -82,7 +82,14 @@ ${ctx.result.load_states.map((s) => {
   const mine = checks.filter((c) => c.load_state === s.id);
   const extra = cases.filter((it) => it.ref.load_state === s.id).map((it) => refRow(it.ref, it.advisory));
   return mine.length || extra.length ? table(`${s.label} (${s.kind}, id ${s.id})`, mine, extra) : '';
-})}`;
+})}
+${derivedStateIds(ctx).map((id) => table(`Derived load state ${id} (lightly loaded vehicle or towing, made from the inputs)`, checks.filter((c) => c.load_state === id)))}`;
+}
+
+/** Load states the checks derived themselves (FMVSS lightly loaded vehicle, towing), in order of appearance. */
+function derivedStateIds(ctx: ResultContext): string[] {
+  const own = new Set(ctx.result.load_states.map((s) => s.id));
+  return [...new Set(ctx.result.checks.map((c) => c.load_state).filter((id): id is string => id !== null && !own.has(id)))];
 }
 
 export const checksPanel: Panel = { id: 'checks', title: 'Regulation checks', results: checksTables };

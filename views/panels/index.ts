@@ -4,6 +4,7 @@
  * here and add it to the list (one line each). See DEVELOPERS.md, "Workbench panels".
  */
 import { brakesPanel } from './brakes.ts';
+import { casesInputsPanel } from './cases-inputs.ts';
 import { checksPanel } from './checks.ts';
 import { chartsPanel } from './charts.ts';
 import { conversionPanel } from './conversion.ts';
@@ -40,6 +41,7 @@ export const panels: Panel[] = [
   hardwarePanel,
   limitsInputsPanel,
   limitsPanel,
+  casesInputsPanel,
   sizingInputsPanel,
   sizingPanel,
   storeInputsPanel,

@@ -248,6 +248,11 @@ export interface RegenResult {
   blending: RegenBlendingSpec['type'];
   proportion: number | null;
   front_share: number;
+  /**
+   * Design-file paths of defaults the curve checks with regeneration rest on (the user never gave them):
+   * `regen.front_share` for all-wheel drive without it. The verdict reports those checks as not checked.
+   */
+  assumed_inputs: string[];
   max_force_n: number;
   max_power_kw: number;
   base_speed_kmh: number;
@@ -497,6 +502,7 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
     blending: setup.blending.type,
     proportion: setup.blending.type === 'fixed_proportion' ? setup.blending.proportion : null,
     front_share: setup.frontShare,
+    assumed_inputs: design.vehicle.drive === 'all' && r.front_share === undefined ? ['regen.front_share'] : [],
     max_force_n: setup.maxForce,
     max_power_kw: setup.maxPower / 1e3,
     base_speed_kmh: regenBaseSpeed(setup) * 3.6,

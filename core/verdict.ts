@@ -93,6 +93,7 @@ export function overallWord(v: Pick<Verdict, 'overall'>): string {
 const MISSING_WORDS: Record<string, string> = {
   parking_brake: 'the parking brake (which axle it brakes, hand or foot control, and its holding force or mechanism)',
   'hydraulics.booster_runout_bar': 'the booster runout pressure (the assist runs out above it; the check passes with unlimited assist and fails without any)',
+  'regen.front_share': 'the share of the regenerative braking force on the front axle (all-wheel drive)',
   'parking_brake.holding_force_n':
     "the parking brake's holding force at the tyres, or its mechanism (lever ratio, efficiency, brake factor and effective radius)",
 };
@@ -209,6 +210,9 @@ interface Item {
 }
 
 function regenItems(regen: RegenResult, checks: readonly CheckResult[], labels: ReadonlyMap<string, string>, out: Item[]): void {
+  // a case resting on a default nobody confirmed (the all-wheel-drive front share) is not checked
+  const assumed = regen.assumed_inputs ?? [];
+  const missing = assumed.length ? () => ({ missing: assumed.map((p) => MISSING_WORDS[p] ?? p), missing_inputs: [...assumed] }) : undefined;
   for (const st of regen.load_states) {
     const label = labels.get(st.id) ?? st.id;
     const limit = st.max_force_passing_checks_n;
@@ -223,10 +227,11 @@ function regenItems(regen: RegenResult, checks: readonly CheckResult[], labels: 
       if (rc.speed_kmh === null) continue; // zero regeneration: the regulation check itself
       const match = matchingCheck(checks, rc.rule, st.id);
       if (!match) continue;
-      const passed = rc.passed;
+      const passed = missing ? null : rc.passed;
       out.push({
         passed,
         advisory: match.advisory,
+        ...(missing ? { missing } : {}),
         ref: () => ({
           kind: 'regeneration',
           rule: rc.rule,
@@ -242,11 +247,14 @@ function regenItems(regen: RegenResult, checks: readonly CheckResult[], labels: 
           regen_limit_n: limit,
           regen_limit_motor_nm: motor,
           passed,
-          margin: rc.worst_margin,
+          margin: passed === null ? null : rc.worst_margin,
           margin_unit: 'adhesion',
           description:
             `${label}, ${rc.speed_kmh} km/h with ${fixed(rc.regen_force_n, 0)} N regeneration: ${rc.title}: ` +
-            `${outcomeWords(passed, rc.worst_margin, 'adhesion')}${passed ? '' : limitWords()}${match.advisory ? ' (for information)' : ''}`,
+            (passed === null
+              ? `not checked: needs ${missing!().missing.join('; ')}`
+              : `${outcomeWords(passed, rc.worst_margin, 'adhesion')}${passed ? '' : limitWords()}`) +
+            (match.advisory ? ' (for information)' : ''),
           anchor: checkAnchor(rc.rule, st.id, 'regen', rc.speed_kmh),
         }),
       });

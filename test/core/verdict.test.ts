@@ -138,6 +138,17 @@ describe('regeneration cases count like the checks (issue 12 point 4)', () => {
     expect(f.anchor).toBe(checkAnchor('a/lock', 'unladen', 'regen', 20));
   });
 
+  it('all-wheel drive without the regeneration front share: the cases rest on the 0.5 default, so they are not checked', () => {
+    const v = buildVerdict(input(checks, { regen: { ...regen, assumed_inputs: ['regen.front_share'] } as RegenResult }));
+    expect(v.overall).toBe('incomplete');
+    expect(v.failed).toEqual([]);
+    expect(v.not_checked.map((n) => n.speed_kmh)).toEqual([20, 80]);
+    expect(v.not_checked[0]).toMatchObject({ passed: null, margin: null, missing_inputs: ['regen.front_share'] });
+    expect(v.not_checked[0]!.description).toBe(
+      'Unladen, driver only, 20 km/h with 2478 N regeneration: Front axle locks first: not checked: needs the share of the regenerative braking force on the front axle (all-wheel drive)',
+    );
+  });
+
   it('a regeneration case of a rule that is not selected (or only advisory) does not decide', () => {
     expect(buildVerdict(input([check({ rule: 'b/other', passed: true, load_state: 'unladen' })], { regen })).overall).toBe('pass');
     const abs = [check({ rule: 'a/lock', applies: false, passed: null, load_state: 'unladen' }), check({ rule: 'a/lock', passed: true, advisory: true, scenario: 'abs_failed', load_state: 'unladen' }), check({ rule: 'b/other', passed: true })];

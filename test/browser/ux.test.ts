@@ -2,15 +2,22 @@
 // phone (390×844) viewport: Debian's chromium driven by playwright-core against buildApp() on a loopback port.
 // Thresholds: 40 px tap targets (common practice for touch screens, no source; WCAG 2.2 2.5.8 asks for at
 // least 24 px); 320 px plot areas and the page-weight budgets (1.6 MB first load, 50 KB repeat) are the issue's.
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoDesign } from '../../core/index.ts';
 import { type BrowserHarness, openBrowser, settled } from './harness.ts';
 
 let desk: BrowserHarness;
 let phone: BrowserHarness;
+// the design store of these servers: an empty folder of its own (read when the store is first opened)
+const dataDir = mkdtempSync(join(tmpdir(), 'lockstep-ux-store-'));
+const dataDirBefore = process.env.LOCKSTEP_DATA_DIR;
 
 beforeAll(async () => {
+  process.env.LOCKSTEP_DATA_DIR = dataDir;
   desk = await openBrowser({ name: 'ux-desk', viewport: { width: 1440, height: 900 } });
   phone = await openBrowser({ name: 'ux-phone', viewport: { width: 390, height: 844 } });
   mkdirSync('test-results', { recursive: true });
@@ -19,6 +26,9 @@ beforeAll(async () => {
 afterAll(async () => {
   await desk?.close();
   await phone?.close();
+  if (dataDirBefore === undefined) delete process.env.LOCKSTEP_DATA_DIR;
+  else process.env.LOCKSTEP_DATA_DIR = dataDirBefore;
+  rmSync(dataDir, { recursive: true, force: true });
 });
 
 const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
@@ -181,6 +191,61 @@ describe('workbench on a desktop (1440×900)', { timeout: 60000 }, () => {
     await page.waitForFunction(() => (document.querySelector('#f-lift-lifts-0-reading_kg') as HTMLInputElement | null)?.value === '1803', undefined, { timeout: 30000 });
     expect(await page.inputValue('#f-lift-lifts-0-lift_height_m')).toBe('0.6');
   }, 60000);
+
+  it('the store keeps a history: a revision opened and saved, a file loaded as a revision or as a new design', async () => {
+    const page = desk.page;
+    const saved = () => page.textContent('#store-status');
+    const save = async () => {
+      const answer = page.waitForResponse((r) => r.url().endsWith('/designs/save'));
+      await page.click('#panel-packet button:has-text("Save revision")');
+      await answer;
+      await settled(page);
+    };
+    await page.goto(`${desk.base}/?fresh`);
+    await page.waitForSelector('#panel-packet button:has-text("Save revision")');
+    await save();
+    expect(await saved()).toContain('Saved as a new design');
+    // open revision 1 from the history, change it, save: a second revision of the same design
+    await page.click('#store-status a:has-text("history")');
+    await page.waitForSelector('#designs button[form="open-1"]');
+    let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+    await page.click('#designs button[form="open-1"]');
+    await answer;
+    await settled(page);
+    await typeInto(page, '#f-hydraulics-pedal_ratio', '4.1');
+    await save();
+    expect(await saved()).toMatch(/Saved as a new revision[\s\S]*2 revisions/);
+    // a file uploaded now: the page asks; as a revision of the saved design, the next save is its third
+    const d = demoDesign(); // the same name as the saved design
+    d.hydraulics.pedal_ratio = 4.3;
+    const upload = async (as: 'new' | 'revision') => {
+      const done = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+      await page.setInputFiles('#upload', { name: 'van.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(d)) });
+      await page.waitForSelector('#upload-ask[open]');
+      expect(await page.locator('#upload-ask-design option').count()).toBe(1);
+      await page.check(`#upload-ask input[value="${as}"]`);
+      await page.click('#upload-ask button[value="load"]');
+      await done;
+      await settled(page);
+    };
+    await upload('revision');
+    expect(await page.inputValue('#f-hydraulics-pedal_ratio')).toBe('4.3');
+    await save();
+    expect(await saved()).toMatch(/3 revisions/);
+    // the same file as a new design: two designs of the same name, told apart in the list
+    d.hydraulics.pedal_ratio = 4.4;
+    await upload('new');
+    await save();
+    expect(await saved()).toContain('Saved as a new design');
+    answer = page.waitForResponse((r) => r.url().endsWith('/designs'));
+    await page.click('#panel-packet button:has-text("Saved designs")');
+    await answer;
+    await settled(page);
+    const names = await page.locator('#designs tbody tr td:first-child').allTextContents();
+    expect(names).toHaveLength(2);
+    expect(new Set(names.map((n) => n.replace(/\s+/g, ' ').trim())).size).toBe(2);
+    await page.locator('#panel-packet').screenshot({ path: 'test-results/ux-store.png' });
+  }, 90000);
 
   it('first load under 1.6 MB transferred, a repeat load under 50 KB', async () => {
     // a fresh page of the same profile, its HTTP cache emptied first

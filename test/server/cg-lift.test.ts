@@ -167,10 +167,10 @@ describe('the axle-lift form', () => {
     const demo = designToValues(demoDesign(), 'us');
     const out = update({ ...demo, _units: 'us', _shape: '_units=us', _op: cgLiftOp('unladen', 0.8, 0.01) });
     expect(out.status).toBe(200);
-    // hand-derived: 0.8 m / 0.0254 = 31.4961 in (NIST SP 811 B.8)
-    expect(out.body.html).toContain('name="load_states[0].cg_height_m" value="31.4961"');
+    // hand-derived: 0.8 m / 0.0254 = 31.4961 in (NIST SP 811 B.8), shown to 0.01 in: 31.50
+    expect(out.body.html).toContain('name="load_states[0].cg_height_m" value="31.5"');
     const exact = /name="_exact" value="([^"]*)"/.exec(out.body.html)![1]!.replace(/&quot;/g, '"');
-    expect(JSON.parse(exact)['load_states[0].cg_height_m']).toEqual(['31.4961', 0.8]);
+    expect(JSON.parse(exact)['load_states[0].cg_height_m']).toEqual(['31.5', 0.8]);
   });
 
   it('a load state that is gone is refused with a message naming it', async () => {

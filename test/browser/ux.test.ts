@@ -185,11 +185,19 @@ describe('workbench on a desktop (1440×900)', { timeout: 60000 }, () => {
   it('the axle-lift readings come back after a reload', async () => {
     const page = desk.page;
     await page.waitForSelector('#cg-lift form');
+    // an untouched wheelbase follows the design's; one typed over stays as typed
+    expect(await page.inputValue('#f-lift-wheelbase_m')).toBe('3.665');
+    await typeInto(page, '#f-vehicle-wheelbase_m', '3.7');
+    await page.waitForFunction(() => (document.querySelector('#f-lift-wheelbase_m') as HTMLInputElement | null)?.value === '3.7');
+    await page.fill('#f-lift-wheelbase_m', '3.69');
+    await typeInto(page, '#f-vehicle-wheelbase_m', '3.665');
+    expect(await page.inputValue('#f-lift-wheelbase_m')).toBe('3.69');
     await page.fill('#f-lift-lifts-0-lift_height_m', '0.6');
     await page.fill('#f-lift-lifts-0-reading_kg', '1803');
     await page.goto(`${desk.base}/`);
     await page.waitForFunction(() => (document.querySelector('#f-lift-lifts-0-reading_kg') as HTMLInputElement | null)?.value === '1803', undefined, { timeout: 30000 });
     expect(await page.inputValue('#f-lift-lifts-0-lift_height_m')).toBe('0.6');
+    expect(await page.inputValue('#f-lift-wheelbase_m')).toBe('3.69');
   }, 60000);
 
   it('the store keeps a history: a revision opened and saved, a file loaded as a revision or as a new design', async () => {
@@ -245,6 +253,17 @@ describe('workbench on a desktop (1440×900)', { timeout: 60000 }, () => {
     expect(names).toHaveLength(2);
     expect(new Set(names.map((n) => n.replace(/\s+/g, ' ').trim())).size).toBe(2);
     await page.locator('#panel-packet').screenshot({ path: 'test-results/ux-store.png' });
+    // the packet download says what it is doing beside its button, then replaces that with the outcome
+    const packet = page.locator('#panel-packet button[data-download="/packet.pdf"]');
+    await packet.click();
+    const msg = page.locator('#panel-packet .dl-msg');
+    expect(await msg.count()).toBe(1);
+    expect(await msg.textContent()).toMatch(/Preparing lockstep-packet\.pdf|Downloading|Downloaded/);
+    await page.waitForFunction(() => /Downloaded|failed|refused/i.test(document.querySelector('#panel-packet .dl-msg')?.textContent ?? ''), undefined, { timeout: 40000 });
+    expect(await msg.textContent()).toMatch(/^Downloaded .*\.pdf \(\d+ KB\)\.$/);
+    await packet.click();
+    await page.waitForFunction(() => /^Downloaded/.test(document.querySelector('#panel-packet .dl-msg')?.textContent ?? ''), undefined, { timeout: 40000 });
+    expect(await page.locator('#panel-packet .dl-msg').count()).toBe(1); // replaced, not added
   }, 90000);
 
   it('first load under 1.6 MB transferred, a repeat load under 50 KB', async () => {

@@ -1,7 +1,7 @@
 // Real-browser test of the workbench: Debian's chromium driven by playwright-core (never a browser download),
 // against buildApp() listening on a random loopback port.
-// Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.2913 in, shown to 0.01 in as 144.29; 58 in = 1.4732 m, shown to
-// the millimetre as 1.473 while the design keeps 1.4732);
+// Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.2913 in, shown to 0.01 in as 144.29; 58 in = 1.4732 m, shown exactly
+// in metric, the design file's own unit);
 // the lock-order expectation for a 70 mm rear piston is hand-checked with core evaluate() before writing
 // this test (rear brake gain (70/48)² = 2.13 times the demo's, so the rear axle is over-braked and locks first).
 import { mkdirSync } from 'node:fs';
@@ -44,8 +44,8 @@ async function uploadFile(file: { name: string; mimeType: string; buffer: Buffer
   const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
   const asked = page.waitForSelector('#upload-ask[open]', { timeout: 20000 }).then(() => page.click('#upload-ask button[value="load"]')).catch(() => undefined);
   await page.setInputFiles('#upload', file);
-  await answer;
-  await asked;
+  await answer; // (the question, when asked, is answered above; when not, its wait ends on its own)
+  void asked;
 }
 
 /** Charts whose legend starts above the bottom of their x-axis title (static/js/charts.js moves it clear). */
@@ -116,12 +116,12 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
     const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.selectOption('#units', 'metric');
     await answer;
-    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.473');
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.4732');
   });
 
   it('the draft survives a reload', async () => {
     await page.goto(`${base}/`); // without ?fresh, the draft kept in localStorage is restored
-    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.473', undefined, { timeout: 30000 });
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '1.4732', undefined, { timeout: 30000 });
   }, 40000);
 
   it('a malformed file is refused and the design stays; a valid file replaces it', async () => {

@@ -101,7 +101,9 @@
         return;
       }
       fitTitle(spec, el.clientWidth || window.innerWidth);
-      window.Plotly.react(el, spec.data, spec.layout, CONFIG)
+      // on a phone the mode bar would sit over the title; zooming by touch still works without it
+      var config = window.innerWidth > 600 ? CONFIG : Object.assign({}, CONFIG, { displayModeBar: false });
+      window.Plotly.react(el, spec.data, spec.layout, config)
         .then(function () {
           // again after every later redraw (a responsive resize can wrap the legend into more rows)
           if (!el.lockstepFits && el.on) {

@@ -180,7 +180,8 @@
       if (!head) return;
       var names = [];
       Array.prototype.forEach.call(head.cells, function (c) {
-        var text = c.textContent.replace(/\s+/g, ' ').trim();
+        // innerText turns a <br> between a heading and its unit into a line break (textContent would join them)
+        var text = (c.innerText || c.textContent).replace(/\s+/g, ' ').trim();
         for (var k = 0; k < (c.colSpan || 1); k++) names.push(text);
       });
       t.classList.add('reflow');

@@ -55,8 +55,8 @@ export const GROUPS: readonly string[] = ['main', ...new Set(panels.map((p) => g
 const groupClass = (g: string) => `group g-${g} gr-${GROUPS.indexOf(g) + 2}`;
 
 /** A panel's section; its body folds (<details>, open by default; static/js/workbench.js keeps it folded). */
-function foldSection(id: string, title: string, body: SafeHtml, extraClass = ''): SafeHtml {
-  return html`<section class="panel${extraClass}" id="${id}" aria-labelledby="${id}-h"><details class="fold" open data-fold="${id}"><summary><h2 id="${id}-h">${title}</h2></summary>
+function foldSection(id: string, title: string, body: SafeHtml): SafeHtml {
+  return html`<section class="panel" id="${id}" aria-labelledby="${id}-h"><details class="fold" open data-fold="${id}"><summary><h2 id="${id}-h">${title}</h2></summary>
 <div class="panel-body">${body}</div></details></section>`;
 }
 

@@ -7,7 +7,7 @@
  * survives a change in the design form. Pasting a `lockstep-axle-lift/1` file is offered as a second way.
  */
 import { type AxleLiftResultFile, BUDGET_SOURCE_WORDS, CAUTION, type FieldIssue, type UnitSystem } from '../core/index.ts';
-import { cgLiftOp, LIFT_UNITS_FIELD, MAX_LIFTS } from '../server/forms/axle-lift-form.ts';
+import { cgLiftOp, LIFT_MASS_TOLERANCE, LIFT_UNITS_FIELD, MAX_LIFTS } from '../server/forms/axle-lift-form.ts';
 import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../server/forms/design-form.ts';
 import { type InputContext, numberField, selectField } from './fields.ts';
 import { fixed, shownUnit } from './format.ts';
@@ -24,8 +24,10 @@ export interface AxleLiftBlock {
   /** A problem with the request as a whole (paste not JSON, file invalid, nothing entered). */
   problem?: { message: string; code: string; errors?: readonly FieldIssue[] };
   result?: AxleLiftResultFile;
-  /** Load states of the design form, for the "Apply" buttons. */
-  loadStates?: ReadonlyArray<{ id: string; label: string }>;
+  /** Load states of the design form, for the "Apply" buttons (mass in kg when known, for the mass check). */
+  loadStates?: ReadonlyArray<{ id: string; label: string; massKg?: number | null }>;
+  /** The figures taken from the design (field name -> text); the page lets untouched fields follow the design. */
+  designDefaults?: FormValues;
   /** Text of the paste box (kept as typed). */
   pasted?: string;
 }
@@ -45,8 +47,8 @@ export function axleLiftBlock(b: AxleLiftBlock): SafeHtml {
 <fieldset><legend>Vehicle, weighed level</legend><div class="grid">
 ${numberField(ctx, 'lift.wheelbase_m', 'Wheelbase')}
 ${numberField(ctx, 'lift.wheel_centre_height_m', 'Wheel-centre height', { hint: 'above the ground: the loaded tyre radius' })}
-${numberField(ctx, 'lift.level.front_axle_kg', 'Front axle, level')}
-${numberField(ctx, 'lift.level.rear_axle_kg', 'Rear axle, level')}
+${numberField(ctx, 'lift.level.front_axle_kg', 'Front axle, level', { hint: 'scale reading; starts at the design’s unladen figure' })}
+${numberField(ctx, 'lift.level.rear_axle_kg', 'Rear axle, level', { hint: 'scale reading; starts at the design’s unladen figure' })}
 </div></fieldset>
 <fieldset><legend>Lifts</legend>
 <p class="hint">Per lift: which axle was raised, how far (wheel-centre rise) or the body angle, and what the scales read under the axle on them (normally the axle that stays down).</p>
@@ -80,7 +82,7 @@ ${numberField(ctx, 'lift.lift_angle_uncertainty_deg', 'Lift angle uncertainty', 
 </form>`;
   const loose = (b.errors ?? []).filter((e) => !ctx.rendered.has(e.path)); // problems with no field of their own
   const problem = b.problem ?? (b.errors?.length ? { message: `${b.errors.length} input${b.errors.length === 1 ? ' needs' : 's need'} attention (marked above).`, code: 'APP_ERR_AXLE_LIFT_INVALID', errors: loose } : undefined);
-  return html`<div id="cg-lift" class="cg-lift" data-units="${b.units}">
+  return html`<div id="cg-lift" class="cg-lift" data-units="${b.units}" data-design="${JSON.stringify(b.designDefaults ?? {})}">
 ${form}
 <div id="cg-lift-result" aria-live="polite">${problem ? axleLiftErrors(problem.message, problem.code, problem.errors) : ''}${b.result ? axleLiftFragment(b.result, b.units, b.loadStates ?? []) : ''}</div>
 </div>`;
@@ -91,7 +93,16 @@ export function axleLiftErrors(message: string, code: string, errors: readonly F
 ${errors.length ? html`<ul class="problems">${errors.map((e) => html`<li>${e.path ? html`<code>${e.path}</code>: ` : ''}${e.message}</li>`)}</ul>` : ''}</div>`;
 }
 
-export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'metric', loadStates: ReadonlyArray<{ id: string; label: string }> = []): SafeHtml {
+/** The words and the question of an "Apply" button whose load state is not at the weighed mass (over 1 %). */
+function massMismatch(weighedKg: number, stateKg: number | null | undefined, units: UnitSystem): string | null {
+  if (stateKg === null || stateKg === undefined || !(weighedKg > 0)) return null;
+  const share = (stateKg - weighedKg) / weighedKg;
+  if (Math.abs(share) <= LIFT_MASS_TOLERANCE) return null;
+  const m = shownUnit('mass', units);
+  return `This load state's mass (${fixed(m.from(stateKg), 0)} ${m.label}) differs from the weighed mass (${fixed(m.from(weighedKg), 0)} ${m.label}) by ${fixed(100 * Math.abs(share), 1)} %: the CG height measured at one load does not carry over to another. Weigh and lift the vehicle in this load state, or derive its CG height from the mass build-up.`;
+}
+
+export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'metric', loadStates: ReadonlyArray<{ id: string; label: string; massKg?: number | null }> = []): SafeHtml {
   const len = shownUnit('length', units);
   const m = shownUnit('mass', units);
   const ld = units === 'us' ? 2 : 3;
@@ -114,7 +125,10 @@ ${largest ? html`<p class="largest"><strong>Largest contribution: ${BUDGET_SOURC
 ${r.warnings.length ? html`<ul class="warnings">${r.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
 ${loadStates.length
     ? html`<div class="apply-lift"><p>Write this CG height and its uncertainty into a load state (marked as measured; the results follow):</p>
-<p>${loadStates.map((s) => html`<button type="button" class="apply" name="_op" value="${cgLiftOp(s.id, r.cg_height_m, r.standard_uncertainty_m)}" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML">Apply to load state “${s.label}”</button> `)}</p></div>`
+${loadStates.map((s) => {
+      const warn = massMismatch(r.mass_kg, s.massKg, units);
+      return html`<p><button type="button" class="apply" name="_op" value="${cgLiftOp(s.id, r.cg_height_m, r.standard_uncertainty_m)}" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML"${warn ? html` hx-confirm="${warn} Apply it anyway?"` : ''}>Apply to load state “${s.label}”</button>${warn ? html`<br><span class="mass-warn" role="note"><strong>Mass differs:</strong> ${warn}</span>` : ''}</p>`;
+    })}</div>`
     : ''}
 <h4>Each lift alone</h4>
 <div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Lift</th><th scope="col">Raised</th><th scope="col">Axle read</th><th scope="col">Angle<br><span class="unit">°</span></th><th scope="col">Change<br><span class="unit">${m.label}</span></th><th scope="col">h<br><span class="unit">${len.label}</span></th><th scope="col">u(h)<br><span class="unit">${len.label}</span></th></tr></thead>

@@ -31,15 +31,20 @@ export function plotText(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 }
 
-/** Layout defaults shared by every chart. */
+/**
+ * Layout defaults shared by every chart: a plot area of 330 px (height minus the top and bottom margins; the
+ * page keeps it at least 320 px on a desktop, static/js/charts.js), the title in the top margin, axis titles
+ * pushed clear of the tick labels (automargin, standoff), ticks chosen by plotly at round steps of the
+ * plotted unit (every axis is plotted in the page's unit system).
+ */
 export function baseLayout(title: string, xTitle: string, yTitle: string): Record<string, unknown> {
   return {
-    title: { text: plotText(title), font: { size: 14 }, x: 0, xanchor: 'left' },
-    margin: { l: 56, r: 16, t: 36, b: 44 },
-    height: 340,
+    title: { text: plotText(title), font: { size: 14 }, x: 0, xanchor: 'left', y: 1, yanchor: 'top', yref: 'container', pad: { t: 8, l: 4 } },
+    margin: { l: 60, r: 20, t: 40, b: 50 },
+    height: 420,
     font: { family: 'system-ui, sans-serif', size: 12 },
-    xaxis: { title: { text: plotText(xTitle) }, zeroline: false, gridcolor: '#e4e4e4' },
-    yaxis: { title: { text: plotText(yTitle) }, zeroline: false, gridcolor: '#e4e4e4' },
+    xaxis: { title: { text: plotText(xTitle), standoff: 8 }, automargin: true, zeroline: false, gridcolor: '#e4e4e4' },
+    yaxis: { title: { text: plotText(yTitle), standoff: 8 }, automargin: true, zeroline: false, gridcolor: '#e4e4e4' },
     legend: { orientation: 'h', y: -0.22, font: { size: 11 } },
     hovermode: 'closest',
     plot_bgcolor: '#fff',

@@ -53,7 +53,7 @@ export function numberField(ctx: InputContext, name: string, label: string, o: F
   const unit = o.unitText ?? unitLabel(displayUnitOf(name, ctx.units));
   const errs = ctx.errors.get(name);
   return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
-${labelFor(name, label, unit, o)}<span class="in"><input id="${fieldId(name)}" name="${name}" value="${ctx.values[name] ?? ''}" inputmode="decimal" autocomplete="off" class="w-${o.width ?? 'm'}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}${unit ? ` (${unit})` : ''}"` : ''}>${unit && !o.compact ? html`<span class="u" aria-hidden="true">${unit}</span>` : ''}</span>
+${labelFor(name, label, unit, o)}<span class="in"><input id="${fieldId(name)}" name="${name}" value="${ctx.values[name] ?? ''}" inputmode="decimal" autocomplete="off" class="w-${o.width ?? 'm'}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}${unit ? ` (${unit})` : ''}"` : ''}>${unit ? html`<span class="u" aria-hidden="true">${unit}</span>` : ''}</span>
 ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
 }
 

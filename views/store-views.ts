@@ -12,12 +12,26 @@ import { html, raw, type SafeHtml } from './html.ts';
 
 const short = (rev: string) => rev.slice(0, 12);
 
+/**
+ * A design's name as listed: when another saved design has the same name, the two are told apart by their
+ * creation time and the start of their id (the list never shows the same name twice without that).
+ */
+export function designLabel(d: DesignSummary, list: readonly DesignSummary[]): string {
+  const same = list.filter((o) => o.name.trim().toLowerCase() === d.name.trim().toLowerCase());
+  return same.length > 1 ? `${d.name} (created ${d.created_at.replace('T', ' ').slice(0, 16)}, design ${d.id.slice(0, 8)})` : d.name;
+}
+
+/** Options of the upload question "a new revision of which design?" (views/pages/workbench.ts uploadDialog). */
+export function designChoicesView(list: DesignSummary[]): SafeHtml {
+  return html`${list.map((d) => html`<option value="${d.id}">${designLabel(d, list)} – ${d.revision_count} revision${d.revision_count === 1 ? '' : 's'}, last saved ${d.updated_at.replace('T', ' ').slice(0, 16)} UTC</option>`)}`;
+}
+
 export function designsListView(list: DesignSummary[]): SafeHtml {
   if (list.length === 0) return html`<section id="designs" class="designs"><h2>Saved designs</h2><p>No saved designs yet.</p></section>`;
   return html`<section id="designs" class="designs"><h2>Saved designs</h2>
 <table class="designs-list data"><thead><tr><th scope="col">Name</th><th scope="col">Revisions</th><th scope="col">Latest revision</th><th scope="col">Changed (UTC)</th><th scope="col"></th></tr></thead><tbody>
 ${list.map(
-  (d) => html`<tr id="design-${d.id}"><td>${d.name}</td><td>${d.revision_count}</td><td><code title="${d.head_revision}">${short(d.head_revision)}</code></td><td>${d.updated_at}</td>
+  (d) => html`<tr id="design-${d.id}"><td>${d.name}${designLabel(d, list) !== d.name ? html`<br><small class="twin">created ${d.created_at.replace('T', ' ').slice(0, 16)} · design ${d.id.slice(0, 8)}</small>` : ''}</td><td>${d.revision_count}</td><td><code title="${d.head_revision}">${short(d.head_revision)}</code></td><td>${d.updated_at}</td>
 <td><a href="/designs/${d.id}/history" hx-get="/designs/${d.id}/history" hx-target="#designs" hx-swap="outerHTML">history</a>
 · <a href="/api/designs/${d.id}">JSON</a>
 · <a href="/revisions/${d.head_revision}/packet.pdf">packet PDF</a>
@@ -27,8 +41,8 @@ ${list.map(
 )}
 </tbody></table>
 ${list.length > 1 ? html`<form class="compare-pick" action="/compare" method="get" hx-get="/compare" hx-target="#compare-result">
-<label for="cmp-a">Before</label> <select id="cmp-a" name="a">${list.map((d, i) => html`<option value="${d.id}"${i === 1 ? raw(' selected') : ''}>${d.name}</option>`)}</select>
-<label for="cmp-b">After</label> <select id="cmp-b" name="b">${list.map((d, i) => html`<option value="${d.id}"${i === 0 ? raw(' selected') : ''}>${d.name}</option>`)}</select>
+<label for="cmp-a">Before</label> <select id="cmp-a" name="a">${list.map((d, i) => html`<option value="${d.id}"${i === 1 ? raw(' selected') : ''}>${designLabel(d, list)}</option>`)}</select>
+<label for="cmp-b">After</label> <select id="cmp-b" name="b">${list.map((d, i) => html`<option value="${d.id}"${i === 0 ? raw(' selected') : ''}>${designLabel(d, list)}</option>`)}</select>
 <button type="submit">Compare</button></form>
 <div id="compare-result" aria-live="polite"></div>` : ''}
 </section>`;
@@ -55,7 +69,8 @@ ${latestFirst.map(
 <button type="submit" formaction="/compare" hx-get="/compare" hx-include="closest form" hx-target="#diff-result">Compare before/after</button>
 </form>
 <div id="diff-result" aria-live="polite"></div>
-${openForms.map((f) => html`<form id="open-${f.seq}" hx-post="/workbench/update" hx-include="#units" hx-target="#status" hx-swap="outerHTML" hidden><input type="hidden" name="_upload" value="${f.json}"></form>`)}
+${openForms.map((f) => html`<form id="open-${f.seq}" hx-post="/workbench/update" hx-include="#units" hx-target="#status" hx-swap="outerHTML" hidden><input type="hidden" name="_upload" value="${f.json}"><input type="hidden" name="_design_id" value="${d.id}"></form>`)}
+<p class="hint">“Open in the page” loads that revision; “Save revision” then adds a new revision to this design (its history is kept).</p>
 <p><a href="/designs" hx-get="/designs" hx-target="#designs" hx-swap="outerHTML">All designs</a></p>
 </section>`;
 }
@@ -67,7 +82,7 @@ ${entries.length === 0 ? html`<p>No differences: the two revisions have the same
 }
 
 export function saveResultView(r: SaveResult): SafeHtml {
-  return html`<p class="saved" role="status">${r.changed ? 'Saved' : 'Unchanged'}: “${r.design.name}”, revision <code title="${r.revision_id}">${short(r.revision_id)}</code>
+  return html`<p class="saved" role="status">${r.changed ? (r.design.revision_count === 1 ? 'Saved as a new design' : 'Saved as a new revision') : 'Unchanged'}: “${r.design.name}”, revision <code title="${r.revision_id}">${short(r.revision_id)}</code>
 (${r.design.revision_count} revision${r.design.revision_count === 1 ? '' : 's'}).
 <a href="/designs/${r.design.id}/history" hx-get="/designs/${r.design.id}/history" hx-target="#store-browser">history</a> ·
 <a href="/revisions/${r.revision_id}/packet.pdf">packet PDF</a></p>

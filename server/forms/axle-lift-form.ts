@@ -52,6 +52,28 @@ export function startingLiftValues(units: UnitSystem, wheelbaseM?: number): Form
   return v;
 }
 
+/**
+ * The figures the tool takes from the design (page units): the wheelbase, and as level axle loads the unladen
+ * state's (else the first state's) axle loads, to be replaced by the scale readings. The page keeps a field
+ * following the design while it still shows the design's figure (static/js/workbench.js).
+ */
+export function designLiftDefaults(
+  wheelbaseM: number,
+  states: ReadonlyArray<{ kind: string; mass_kg: number; front_axle_kg: number }>,
+  units: UnitSystem,
+): FormValues {
+  const out: FormValues = { 'lift.wheelbase_m': formatFieldNumber('lift.wheelbase_m', wheelbaseM, units) };
+  const s = states.find((x) => x.kind === 'unladen') ?? states[0];
+  if (s) {
+    out['lift.level.front_axle_kg'] = formatFieldNumber('lift.level.front_axle_kg', s.front_axle_kg, units);
+    out['lift.level.rear_axle_kg'] = formatFieldNumber('lift.level.rear_axle_kg', s.mass_kg - s.front_axle_kg, units);
+  }
+  return out;
+}
+
+/** A load state's mass differs from the weighed mass by more than this share: the CG height may not carry over. */
+export const LIFT_MASS_TOLERANCE = 0.01;
+
 /** Add ("add") or remove ("remove:<i>") a lift row; the fields keep what was typed. */
 export function applyLiftRowOp(values: FormValues, op: string): FormValues {
   if (op === 'add') {
@@ -175,13 +197,19 @@ export function cgLiftOp(loadStateId: string, heightM: number, uncertaintyM: num
   return `${CG_LIFT_OP}${loadStateId}=${r(heightM)},${r(uncertaintyM)}`;
 }
 
-/** The load states of a posted design form: index, id and label. */
-export function loadStatesOf(values: FormValues): Array<{ index: number; id: string; label: string }> {
-  return listIndices(values, 'load_states').map((i) => ({
-    index: i,
-    id: values[`load_states[${i}].id`] ?? '',
-    label: values[`load_states[${i}].label`] ?? values[`load_states[${i}].id`] ?? `Load state ${i + 1}`,
-  }));
+/** The load states of a posted design form: index, id, label and (when entered and readable) the mass in kg. */
+export function loadStatesOf(values: FormValues, units: UnitSystem = 'metric'): Array<{ index: number; id: string; label: string; massKg: number | null }> {
+  return listIndices(values, 'load_states').map((i) => {
+    const name = `load_states[${i}].mass_kg`;
+    const text = (values[name] ?? '').trim();
+    const mass = text === '' ? null : parseFieldNumber(name, text, units);
+    return {
+      index: i,
+      id: values[`load_states[${i}].id`] ?? '',
+      label: values[`load_states[${i}].label`] ?? values[`load_states[${i}].id`] ?? `Load state ${i + 1}`,
+      massKg: mass && mass.ok ? mass.value : null,
+    };
+  });
 }
 
 /** Writes a measured CG height and its uncertainty into the load state with that id (form values, page units). */

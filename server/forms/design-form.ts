@@ -173,13 +173,37 @@ function findKind(name: string): FieldKind {
 
 // ---- numbers for display -------------------------------------------------------------------------
 
-/** A design-file number as text in the display unit: exact when no conversion, else 6 significant digits. */
+/**
+ * Decimals a converted value is shown with, per quantity and unit: about the resolution a workshop measures
+ * with (0.1 lb, 0.01 in on a wheelbase, 0.001 in on a bore, 0.1 psi). Common practice, no source.
+ */
+const SHOWN_DECIMALS: Partial<Record<`${Quantity}:${Unit}`, number>> = {
+  'mass:lb': 1, 'mass:kg': 1,
+  'length:in': 2, 'length:m': 3,
+  'short_length:in': 3, 'short_length:mm': 2,
+  'pressure:psi': 1, 'pressure:bar': 2,
+  'force:lbf': 1, 'force:N': 0,
+  'speed:mph': 1, 'speed:km/h': 1,
+  'acceleration:ft/s2': 2, 'acceleration:m/s2': 2,
+  'distance:ft': 1, 'distance:m': 2,
+};
+
+/**
+ * A design-file number as text in the display unit: exact when no conversion, else rounded for its quantity
+ * (SHOWN_DECIMALS, but never fewer than 3 significant digits nor more than 6). The exact number travels in
+ * `_exact`, so the rounding never changes the design.
+ */
 export function formatFieldNumber(name: string, value: number, units: UnitSystem): string {
   const u = unitOfField(name);
   if (!u) return String(value);
   const shown = DISPLAY_UNITS[u.quantity][units];
   if (shown === u.fileUnit) return String(value);
-  return String(Number(((value * TO_SI[u.fileUnit]) / TO_SI[shown]).toPrecision(6)));
+  const v = Number(((value * TO_SI[u.fileUnit]) / TO_SI[shown]).toPrecision(6));
+  const d = SHOWN_DECIMALS[`${u.quantity}:${shown}`];
+  if (d === undefined || v === 0) return String(v);
+  const mag = Math.floor(Math.log10(Math.abs(v)));
+  const digits = Math.min(Math.max(d, 2 - mag), Math.max(0, 5 - mag));
+  return String(Number(v.toFixed(Math.max(0, digits))));
 }
 
 /** Text typed in a field -> number in the design-file unit, or the reason it cannot be read. */
@@ -470,10 +494,15 @@ export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): Fo
   const entries = idx.map((i) => entryOf(values, op.list, i));
   const from = [...idx];
   const emptyable = EMPTYABLE_LISTS.find((l) => l.list === op.list);
-  if (op.op === 'add' && idx.length === 0 && emptyable) {
+  if (op.op === 'add' && emptyable) {
+    // a new entry of these lists starts blank (a draft until filled, server/forms/keep-typed.ts), in the last one's group
+    if (idx.length >= maxEntries) return values;
+    const at = idx.length === 0 ? 0 : idx.at(-1)! + 1;
     const out = { ...values };
     // a blank key "[j]" is an element of a tuple entry (e.g. a [temperature, factor] pair), others are object keys
-    for (const [k, v] of Object.entries(emptyable.blank)) out[`${op.list}[0]${k.startsWith('[') ? k : `.${k}`}`] = v;
+    for (const [k, v] of Object.entries(emptyable.blank)) {
+      out[`${op.list}[${at}]${k.startsWith('[') ? k : `.${k}`}`] = k === 'group' && idx.length ? (values[`${op.list}[${idx.at(-1)}].group`] ?? v) : v;
+    }
     return out;
   }
   if (op.op === 'remove') {

@@ -2,7 +2,8 @@
  * POST /workbench/cg-lift: the axle-lift tool of the conversion panel (views/axle-lift-view.ts). The body is the
  * tool's form (`lift.*` fields, server/forms/axle-lift-form.ts) together with the design form (for the page's
  * unit system `_units` and the load states the result can be applied to). `_lift_op` says what to do:
- * `compute` (default when lift fields are present), `add`, `remove:<i>` (lift rows), or `paste` (read the
+ * `compute` (default when lift fields are present), `add`, `remove:<i>` (lift rows), `restore` (the readings kept
+ * in the browser after a reload: computed when complete, no problems marked otherwise), or `paste` (read the
  * `lockstep-axle-lift/1` text in `axle_lift`, fill the form from it and compute; the default when only
  * `axle_lift` is posted). Answers the whole #cg-lift block: 200 with the result, 422 with the problems marked
  * at their fields (htmx swaps 422, views/layout.ts). Codes: APP_ERR_AXLE_LIFT_EMPTY, APP_ERR_AXLE_LIFT_NOT_JSON,
@@ -34,7 +35,7 @@ export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
     let values = convertLiftValues(liftValues(posted), typedIn, units);
     const hasFields = Object.keys(values).length > 0;
     const op = posted._lift_op ?? (hasFields ? 'compute' : 'paste');
-    const loadStates = loadStatesOf(posted).filter((s) => s.id !== '');
+    const loadStates = loadStatesOf(posted, units).filter((s) => s.id !== '');
     const block = (b: Omit<AxleLiftBlock, 'units' | 'values' | 'loadStates'>, status = 200) =>
       sendHtml(reply, axleLiftBlock({ units, values, loadStates, pasted: posted.axle_lift, ...b }), status);
 
@@ -61,6 +62,12 @@ export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
       }
       values = liftFileToValues(r.input, units);
       return block({ result: axleLiftResultFile(r.input), pasted: '' });
+    }
+    if (op === 'restore') {
+      // readings kept in the browser after a reload (static/js/workbench.js): computed again when complete,
+      // otherwise shown as typed, without marking what is still to be filled in
+      const r = readLiftForm(values, units);
+      return block(r.ok ? { result: axleLiftResultFile(r.input) } : {});
     }
     if (op !== 'compute') throw appErrors.unknownOperation(op);
     const r = readLiftForm(values, units);

@@ -5,7 +5,7 @@
  */
 import type { FastifyPluginAsync } from 'fastify';
 import type { EvaluationResult } from '../../core/index.ts';
-import { compareView, designsListView, diffView, historyView, saveResultView } from '../../views/store-views.ts';
+import { compareView, designChoicesView, designsListView, diffView, historyView, saveResultView } from '../../views/store-views.ts';
 import { type CompareSide, compare } from '../packet/compare.ts';
 import { evaluateForPacket, warningsOf } from '../packet/build-packet.ts';
 import type { DesignStore } from '../store/design-store.ts';
@@ -85,6 +85,13 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
 
   // ---- HTML fragments
   app.get('/designs', async (_req, reply) => reply.type(HTML).send(designsListView(store().list()).html));
+
+  // the options of the page's upload question: a new revision of which saved design? (latest changed first)
+  app.get('/designs/choices', async (_req, reply) => {
+    const list = [...store().list()].sort((a, b) => b.updated_at.localeCompare(a.updated_at));
+    reply.header('cache-control', 'no-store');
+    return reply.type(HTML).send(designChoicesView(list).html);
+  });
 
   app.get<{ Params: { id: string } }>('/designs/:id/history', async (req, reply) => {
     const s = store();

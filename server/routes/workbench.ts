@@ -13,6 +13,7 @@ import {
   fieldMessagesOob,
   fieldsWithMessages,
   inputsSection,
+  noResultsSection,
   resultsSection,
   staleNote,
   statusBlock,
@@ -35,6 +36,7 @@ import { checkFieldNames } from '../forms/field-names.ts';
 import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
 import { applyCgLiftOp, CG_LIFT_OP } from '../forms/axle-lift-form.ts';
 import { ResponseCache, sendCached } from '../response-cache.ts';
+import { keepSwitchedOut, withoutDraftRows } from '../forms/keep-typed.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
@@ -71,6 +73,8 @@ export function update(posted: FormValues): UpdateOutcome {
   const prevUnits = shape.has('_units') ? unitsOf(shape.get('_units')) : units;
   let values = withoutControls(posted);
   let structural = posted._restore === '1';
+  /** The design was replaced as a whole (upload, demo): what an earlier variant held no longer applies. */
+  let fresh = false;
 
   if (posted._upload !== undefined) {
     const text = posted._upload;
@@ -89,9 +93,13 @@ export function update(posted: FormValues): UpdateOutcome {
     if (!r.ok) return fail(appErrors.uploadInvalid(r.errors.length), r.errors);
     // the file is in design-file units; show it in the units the page uses now
     values = designToValues(r.design, units);
+    // opened from a design's history, or loaded as a new revision of a saved design: saving adds to that design
+    if (posted._design_id) values._design_id = posted._design_id;
     structural = true;
+    fresh = true;
   } else if (posted._op === 'demo') {
     values = designToValues(demoDesign(), units);
+    fresh = true;
     structural = true;
   } else if (posted._op?.startsWith(CG_LIFT_OP)) {
     values = applyCgLiftOp(values, posted._op, units); // the axle-lift tool's "Apply to load state" (server/forms/axle-lift-form.ts)
@@ -110,14 +118,24 @@ export function update(posted: FormValues): UpdateOutcome {
     structural = true;
   }
   for (const [k, v] of shape) if (k !== '_units' && (values[k] ?? '') !== v) structural = true;
-  if (structural) for (const p of panels) if (p.normalise) values = p.normalise(values, units);
+  if (fresh) delete values._stash;
+  if (structural) {
+    // fields a type switch removes are kept in `_stash` and come back when the type is switched back
+    const op = posted._op && !fresh ? parseListOp(posted._op) : null;
+    values = keepSwitchedOut(values, (v) => panels.reduce((acc, p) => (p.normalise ? p.normalise(acc, units) : acc), v), {
+      convert: prevUnits !== units ? (v) => convertValues(v, prevUnits, units) : undefined,
+      dropUnder: op ? op.list : undefined,
+    });
+  }
 
-  const reading = readForm(values, units);
+  const reading = readForm(withoutDraftRows(values), units);
   const errors = reading.ok ? [] : reading.errors;
   const parts: SafeHtml[] = [];
   parts.push(statusBlock(reading.ok ? 'current' : 'invalid', { errors, labels: errors.length ? fieldsWithMessages(values, units).labels : undefined }));
   parts.push(structural ? inputsSection(values, units, errors, true) : fieldMessagesOob(values, units, errors));
-  parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : staleNote(errors.length, true));
+  // a restored draft or a loaded file that cannot be read: the results on the page are another design's
+  const replaced = posted._restore === '1' || posted._upload !== undefined;
+  parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : replaced ? noResultsSection(errors.length, true) : staleNote(errors.length, true));
   return { status: reading.ok ? 200 : 422, body: html`${parts}` };
 }
 
@@ -167,7 +185,7 @@ function slug(name: string): string {
 function validFromRequest(req: FastifyRequest): { ok: true; design: DesignFile; units: UnitSystem; warnings: Warning[] } | { ok: false; errors: FieldIssue[] } {
   const posted = formValues(req.body);
   const units = unitsOf(posted._units);
-  const r = readForm(withoutControls(posted), units);
+  const r = readForm(withoutDraftRows(withoutControls(posted)), units);
   return r.ok ? { ok: true, design: r.design, units, warnings: r.warnings } : { ok: false, errors: r.errors };
 }
 

@@ -49,11 +49,40 @@
     });
   }
 
+  // The plot area (inside the axes) keeps at least MIN_PLOT px on a desktop, MIN_PLOT_NARROW on a phone, however
+  // much the axis titles, tick labels and a wrapped title took from the figure: the figure grows by the shortfall.
+  var MIN_PLOT = 320;
+  var MIN_PLOT_NARROW = 240;
+  function fitPlot(el, layout, rounds) {
+    var size = el._fullLayout && el._fullLayout._size;
+    if (!size || !(size.h > 0) || rounds <= 0) return null;
+    var min = window.innerWidth > 600 ? MIN_PLOT : MIN_PLOT_NARROW;
+    if (size.h >= min - 0.5) return null;
+    // a legend below the plot sits at a share of the plot height, so part of the added height goes to it
+    layout.height = (layout.height || el.clientHeight) + Math.ceil(1.4 * (min - size.h));
+    return window.Plotly.relayout(el, { height: layout.height }).then(function () { return fitPlot(el, layout, rounds - 1); });
+  }
+
   function fit(el) {
     if (el.lockstepFitting || !el.layout) return null;
     el.lockstepFitting = true;
     var done = function () { el.lockstepFitting = false; };
-    return Promise.resolve(fitLegend(el, el.layout, 3)).then(done, done);
+    return Promise.resolve(fitLegend(el, el.layout, 3)).then(function () { return fitPlot(el, el.layout, 4); }).then(done, done);
+  }
+
+  // On a narrow screen a long chart title is broken over two lines (plotly's own line break) with room above
+  // the plot for it, so it never runs under the mode bar or out of the figure.
+  function fitTitle(spec, width) {
+    var t = spec.layout && spec.layout.title;
+    if (!t || typeof t.text !== 'string' || t.text.indexOf('<br>') >= 0) return;
+    if (t.text.length * 7.4 < width - 40) return;
+    var mid = Math.floor(t.text.length / 2);
+    var cut = t.text.lastIndexOf(' ', mid + 8);
+    if (cut <= 0) return;
+    t.text = t.text.slice(0, cut) + '<br>' + t.text.slice(cut + 1);
+    var m = spec.layout.margin || (spec.layout.margin = {});
+    m.t = (m.t || 40) + 18;
+    spec.layout.height = (spec.layout.height || 420) + 18;
   }
 
   function drawAll(root) {
@@ -71,7 +100,10 @@
         el.textContent = 'Chart data could not be read.';
         return;
       }
-      window.Plotly.react(el, spec.data, spec.layout, CONFIG)
+      fitTitle(spec, el.clientWidth || window.innerWidth);
+      // on a phone the mode bar would sit over the title; zooming by touch still works without it
+      var config = window.innerWidth > 600 ? CONFIG : Object.assign({}, CONFIG, { displayModeBar: false });
+      window.Plotly.react(el, spec.data, spec.layout, config)
         .then(function () {
           // again after every later redraw (a responsive resize can wrap the legend into more rows)
           if (!el.lockstepFits && el.on) {

@@ -1,6 +1,7 @@
 // Real-browser test of the workbench: Debian's chromium driven by playwright-core (never a browser download),
 // against buildApp() listening on a random loopback port.
-// Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.291 in, 58 in = 1.4732 m);
+// Sources: NIST SP 811 appendix B.8 (1 in = 0.0254 m exactly: 3.665 m = 144.2913 in, shown to 0.01 in as 144.29; 58 in = 1.4732 m, shown exactly
+// in metric, the design file's own unit);
 // the lock-order expectation for a 70 mm rear piston is hand-checked with core evaluate() before writing
 // this test (rear brake gain (70/48)² = 2.13 times the demo's, so the rear axle is over-braked and locks first).
 import { mkdirSync } from 'node:fs';
@@ -36,6 +37,15 @@ async function typeInto(selector: string, text: string): Promise<void> {
   await page.fill(selector, text);
   await answer;
   await settled(page);
+}
+
+/** Uploads a file; when designs are saved the page asks "new design or new revision?": a new design. */
+async function uploadFile(file: { name: string; mimeType: string; buffer: Buffer }): Promise<void> {
+  const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
+  const asked = page.waitForSelector('#upload-ask[open]', { timeout: 20000 }).then(() => page.click('#upload-ask button[value="load"]')).catch(() => undefined);
+  await page.setInputFiles('#upload', file);
+  await answer; // (the question, when asked, is answered above; when not, its wait ends on its own)
+  void asked;
 }
 
 /** Charts whose legend starts above the bottom of their x-axis title (static/js/charts.js moves it clear). */
@@ -111,11 +121,11 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
     expect(await page.textContent('#status')).toContain('Results are current');
   });
 
-  it('switching to US units converts the shown values (3.665 m = 144.291 in)', async () => {
+  it('switching to US units converts the shown values (3.665 m = 144.29 in)', async () => {
     const answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
     await page.selectOption('#units', 'us');
     await answer;
-    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '144.291');
+    await page.waitForFunction(() => (document.querySelector('#f-vehicle-wheelbase_m') as HTMLInputElement | null)?.value === '144.29');
     expect(await page.textContent('label[for="f-vehicle-wheelbase_m"]')).toContain('in');
     expect(await page.textContent('#panel-table')).toContain('psi');
   });
@@ -137,9 +147,7 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
 
   it('a malformed file is refused and the design stays; a valid file replaces it', async () => {
     const nameBefore = await page.inputValue('#f-name');
-    let answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
-    await page.setInputFiles('#upload', { name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"format": "lockstep-design/1",') });
-    await answer;
+    await uploadFile({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"format": "lockstep-design/1",') });
     await page.waitForSelector('#status.upload-error');
     expect(await page.textContent('#status')).toContain('APP_ERR_UPLOAD_NOT_JSON');
     expect(await page.inputValue('#f-name')).toBe(nameBefore);
@@ -147,9 +155,7 @@ describe('workbench in chromium', { timeout: 60000 }, () => {
     const d = demoDesign();
     d.name = 'Uploaded in the browser test';
     d.vehicle.wheelbase_m = 3.2;
-    answer = page.waitForResponse((r) => r.url().endsWith('/workbench/update'));
-    await page.setInputFiles('#upload', { name: 'good.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(d)) });
-    await answer;
+    await uploadFile({ name: 'good.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(d)) });
     await page.waitForFunction(() => (document.querySelector('#f-name') as HTMLInputElement | null)?.value === 'Uploaded in the browser test');
     expect(await page.inputValue('#f-vehicle-wheelbase_m')).toBe('3.2');
     expect(await page.textContent('#results')).toContain('Uploaded in the browser test');

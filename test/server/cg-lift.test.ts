@@ -108,6 +108,41 @@ describe('the axle-lift form', () => {
     expect(res.body).toContain(CAUTION);
   });
 
+  it('warns at an "Apply" whose load state is more than 1 % off the weighed mass (and asks before applying)', async () => {
+    // weighed level: 1300 + 1300 = 2600 kg. 1 % of it is 26 kg: 2626 kg is within, 2627 kg (1.04 %) is not;
+    // the laden 3500 kg differs by 900 / 2600 = 34.6 %. The 1 % limit is the issue's (common practice, no source).
+    const buttons = async (unladenKg: string) => {
+      const demo = designToValues(demoDesign(), 'metric');
+      demo['load_states[0].mass_kg'] = unladenKg;
+      const res = await postForm({ ...demo, ...formFields('metric') });
+      expect(res.statusCode).toBe(200);
+      const of = (id: string) => new RegExp(`<button[^>]*value="cglift:apply:${id}=[^"]*"[^>]*>`).exec(res.body)?.[0] ?? '';
+      return { unladen: of('unladen'), laden: of('laden'), body: res.body };
+    };
+    const within = await buttons('2626');
+    expect(within.unladen).not.toContain('hx-confirm');
+    expect(within.laden).toMatch(/hx-confirm="[^"]*3500 kg[^"]*2600 kg[^"]*34\.6 %/);
+    expect(within.body).toContain('Mass differs:');
+    const over = await buttons('2627');
+    expect(over.unladen).toMatch(/hx-confirm="[^"]*2627 kg[^"]*2600 kg[^"]*1\.0 %/);
+  });
+
+  it('follows the design: the wheelbase and the unladen axle loads start the form', async () => {
+    const page = await app.inject({ method: 'GET', url: '/' });
+    // demo: wheelbase 3.665 m, unladen 2720 kg with 1420 kg on the front axle, so 1300 kg on the rear
+    expect(page.body).toContain('name="lift.wheelbase_m" value="3.665"');
+    expect(page.body).toContain('name="lift.level.front_axle_kg" value="1420"');
+    expect(page.body).toContain('name="lift.level.rear_axle_kg" value="1300"');
+    expect(page.body).toMatch(/id="cg-lift"[^>]*data-design="[^"]*lift\.wheelbase_m/);
+  });
+
+  it('"restore" shows kept readings as typed without marking what is still empty', async () => {
+    const res = await postForm({ _units: 'metric', _lift_op: 'restore', 'lift.wheelbase_m': '3.4', 'lift.lifts[0].raised_axle': 'rear', 'lift.lifts[0].reading_kg': '1350', 'lift.lifts[0].read_axle': 'front' });
+    expect(res.statusCode).toBe(200);
+    expect(res.body).toContain('name="lift.lifts[0].reading_kg" value="1350"');
+    expect(res.body).not.toContain('Check input');
+  });
+
   it('reads and answers in US units: the same vehicle typed in in and lb gives 0.95 m = 37.40 in', async () => {
     const res = await postForm(formFields('us'));
     expect(res.statusCode).toBe(200);
@@ -167,10 +202,10 @@ describe('the axle-lift form', () => {
     const demo = designToValues(demoDesign(), 'us');
     const out = update({ ...demo, _units: 'us', _shape: '_units=us', _op: cgLiftOp('unladen', 0.8, 0.01) });
     expect(out.status).toBe(200);
-    // hand-derived: 0.8 m / 0.0254 = 31.4961 in (NIST SP 811 B.8)
-    expect(out.body.html).toContain('name="load_states[0].cg_height_m" value="31.4961"');
+    // hand-derived: 0.8 m / 0.0254 = 31.4961 in (NIST SP 811 B.8), shown to 0.01 in: 31.50
+    expect(out.body.html).toContain('name="load_states[0].cg_height_m" value="31.5"');
     const exact = /name="_exact" value="([^"]*)"/.exec(out.body.html)![1]!.replace(/&quot;/g, '"');
-    expect(JSON.parse(exact)['load_states[0].cg_height_m']).toEqual(['31.4961', 0.8]);
+    expect(JSON.parse(exact)['load_states[0].cg_height_m']).toEqual(['31.5', 0.8]);
   });
 
   it('a load state that is gone is refused with a message naming it', async () => {

@@ -43,11 +43,11 @@ describe('design <-> form values', () => {
     expect(r.ok).toBe(true);
     if (r.ok) expect(r.design).toEqual(d);
   });
-  it('US display: 3.665 m wheelbase shows as 144.291 in (3.665 / 0.0254 = 144.2913…)', () => {
+  it('US display: 3.665 m wheelbase shows as 144.29 in (3.665 / 0.0254 = 144.2913…, shown to 0.01 in)', () => {
     const v = designToValues(demoDesign(), 'us');
-    expect(v['vehicle.wheelbase_m']).toBe('144.291');
-    // 2720 kg / 0.45359237 = 5996.5745 lb (hand-derived)
-    expect(v['load_states[0].mass_kg']).toBe('5996.57');
+    expect(v['vehicle.wheelbase_m']).toBe('144.29');
+    // 2720 kg / 0.45359237 = 5996.5745 lb (hand-derived), shown to 0.1 lb
+    expect(v['load_states[0].mass_kg']).toBe('5996.6');
   });
   it('a typed unit wins over the display unit: "58 in" = 1.4732 m, "1450 lb" = 657.709 kg, "90 psi" = 6.20528 bar, "2.2 t" = 2200 kg', () => {
     const v = designToValues(demoDesign(), 'metric');
@@ -141,7 +141,7 @@ describe('unit switching never alters a design', () => {
   it('metric -> US -> metric gives back the exact numbers; an untouched US form reads back exactly', () => {
     const d = demoDesign();
     const us = convertValues(designToValues(d, 'metric'), 'metric', 'us');
-    expect(us['vehicle.wheelbase_m']).toBe('144.291'); // shown rounded: 3.665 / 0.0254 = 144.2913…
+    expect(us['vehicle.wheelbase_m']).toBe('144.29'); // shown rounded to 0.01 in: 3.665 / 0.0254 = 144.2913…
     const a = readForm(us, 'us');
     expect(a.ok && a.design).toEqual(d);
     const back = convertValues(us, 'us', 'metric');

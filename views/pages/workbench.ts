@@ -39,15 +39,40 @@ export function shapeOf(ctx: InputContext): string {
   return p.toString();
 }
 
+/**
+ * Sections are grouped so that related input and result sections sit side by side (desktop) or one after the
+ * other (phone): an input panel `<x>-inputs` pairs with the result panel `<x>`; every other panel is in the
+ * main group (the design's core inputs beside the verdict, charts and checks). See static/css/workbench.css.
+ */
+export function groupOf(panelId: string): string {
+  if (panelId.endsWith('-inputs')) {
+    const base = panelId.slice(0, -'-inputs'.length);
+    if (panels.some((p) => p.id === base && p.results)) return base;
+    return 'main';
+  }
+  return panels.some((p) => p.id === `${panelId}-inputs` && p.inputs) ? panelId : 'main';
+}
+/** Groups in page order; the index gives the grid row class (gr-2 … on desktop, order on a phone). */
+export const GROUPS: readonly string[] = ['main', ...new Set(panels.map((p) => groupOf(p.id)).filter((g) => g !== 'main'))];
+const groupClass = (g: string) => `group g-${g} gr-${GROUPS.indexOf(g) + 2}`;
+
+/** A panel's section; its body folds (<details>, open by default; static/js/workbench.js keeps it folded). */
+function foldSection(id: string, title: string, body: SafeHtml): SafeHtml {
+  return html`<section class="panel" id="${id}" aria-labelledby="${id}-h"><details class="fold" open data-fold="${id}"><summary><h2 id="${id}-h">${title}</h2></summary>
+<div class="panel-body">${body}</div></details></section>`;
+}
+
+/** The id of a panel's input section: a panel with inputs and results has two sections (ids stay unique). */
+const inputSectionId = (p: { id: string; results?: unknown }) => (p.results ? `panel-${p.id}-inputs` : `panel-${p.id}`);
+
 function renderInputs(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): { ctx: InputContext; sections: SafeHtml[] } {
   const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map() };
-  const sections = panels
-    .filter((p) => p.inputs)
-    .map((p) => {
-      // a panel with inputs and results has two sections: the input one takes the suffix (ids stay unique)
-      const id = p.results ? `panel-${p.id}-inputs` : `panel-${p.id}`;
-      return html`<section class="panel" id="${id}" aria-labelledby="${id}-h"><h2 id="${id}-h">${p.title}</h2>${p.inputs!(ctx)}</section>`;
-    });
+  const inputPanels = panels.filter((p) => p.inputs);
+  const rendered = inputPanels.map((p) => ({ group: groupOf(p.id), html: foldSection(inputSectionId(p), p.title, p.inputs!(ctx)) }));
+  const sections = GROUPS.flatMap((g) => {
+    const inGroup = rendered.filter((r) => r.group === g).map((r) => r.html);
+    return inGroup.length ? [html`<div class="${groupClass(g)} in-group">${inGroup}</div>`] : [];
+  });
   return { ctx, sections };
 }
 
@@ -72,7 +97,7 @@ export function inputsSection(values: FormValues, units: UnitSystem, errors: rea
   // values no panel shows (format, blocks added by other tools) travel along unchanged
   const carried = Object.entries(values).filter(([n]) => !ctx.rendered.has(n) && !n.startsWith('_'));
   return html`<div id="design-inputs"${oob ? html` hx-swap-oob="true"` : ''}>
-<div class="units-switch"><label for="units">Units</label> <select id="units" name="_units">
+<div class="units-switch" id="design-top"><label for="units">Units</label> <select id="units" name="_units">
 <option value="metric"${units === 'metric' ? html` selected` : ''}>metric (kg, m, mm, bar, N)</option>
 <option value="us"${units === 'us' ? html` selected` : ''}>US customary (lb, in, psi, lbf)</option></select>
 <small class="hint">Any field also accepts a value with its unit, e.g. “58 in”, “1450 lb”, “90 psi”, “2.2 t”.</small></div>
@@ -80,20 +105,29 @@ ${sections}
 ${carried.map(([n, v]) => html`<input type="hidden" name="${n}" value="${v}">`)}
 ${values._provenance !== undefined ? html`<input type="hidden" name="_provenance" value="${values._provenance}">` : ''}
 ${values._exact !== undefined ? html`<input type="hidden" name="_exact" value="${values._exact}">` : ''}
+${values._stash !== undefined ? html`<input type="hidden" name="_stash" value="${values._stash}">` : ''}
 <input type="hidden" name="_shape" value="${shapeOf(ctx)}">
 </div>`;
 }
 
 export function resultsSection(v: ValidView, units: UnitSystem, oob = false): SafeHtml {
   const ctx: ResultContext = { design: v.design, result: v.result, units, warnings: v.warnings };
+  const resultPanels = panels.filter((p) => p.results);
+  const groups = GROUPS.map((g) => {
+    const inGroup = resultPanels.filter((p) => groupOf(p.id) === g);
+    const head = g === 'main' ? html`${staleNote(null)}${overallVerdict(v.result)}${isDemo(v.design) ? INTRO : ''}<p class="for">Results for <strong>${v.design.name}</strong></p>` : '';
+    return inGroup.length || head ? html`<div class="${groupClass(g)} out-group">${head}${inGroup.map((p) => foldSection(`panel-${p.id}`, p.title, p.deferred ? deferredSlot(p.id) : p.results!(ctx)))}</div>` : '';
+  });
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>
-${staleNote(null)}
-<div class="result-body">
-${overallVerdict(v.result)}
-${isDemo(v.design) ? INTRO : ''}
-<p class="for">Results for <strong>${v.design.name}</strong></p>
-${panels.filter((p) => p.results).map((p) => html`<section class="panel" id="panel-${p.id}" aria-labelledby="panel-${p.id}-h"><h2 id="panel-${p.id}-h">${p.title}</h2>${p.deferred ? deferredSlot(p.id) : p.results!(ctx)}</section>`)}
-</div></div>`;
+<div class="result-body">${groups}</div></div>`;
+}
+
+/**
+ * The results when a restored draft or an upload cannot be evaluated: the page's earlier results belong to
+ * another design (the demo the page opened with), so they are removed rather than shown as "not current".
+ */
+export function noResultsSection(problems: number, oob = false): SafeHtml {
+  return html`<div id="results" class="no-results"${oob ? html` hx-swap-oob="true"` : ''}>${staleNote(problems)}</div>`;
 }
 
 /**
@@ -106,9 +140,13 @@ export function deferredSlot(id: string): SafeHtml {
   return html`<div class="deferred" id="deferred-${id}" hx-post="/workbench/panel/${id}" hx-trigger="intersect once" hx-include="#design-form" hx-target="this" hx-swap="outerHTML" aria-busy="true"><p class="hint computing" role="status">computing… <small>(this section is computed when it is in view)</small></p></div>`;
 }
 
-/** Empty when the results are current; says why not otherwise. */
+/**
+ * Empty when the results are current; says why not otherwise. The words depend on whether results are shown
+ * (CSS: .when-results / .when-none), since after a restore or an upload that cannot be read there are none.
+ */
 export function staleNote(problems: number | null, oob = false): SafeHtml {
-  return html`<div id="results-note" class="stale-note${problems ? ' on' : ''}"${oob ? html` hx-swap-oob="true"` : ''}>${problems ? html`<strong>Not current.</strong> These results are for the last valid design; fix the ${problems === 1 ? 'marked input' : `${problems} marked inputs`} to update them.` : ''}</div>`;
+  const fix = problems === 1 ? 'marked input' : `${problems} marked inputs`;
+  return html`<div id="results-note" class="stale-note${problems ? ' on' : ''}"${oob ? html` hx-swap-oob="true"` : ''}>${problems ? html`<span class="when-results"><strong>Not current.</strong> These results are for the last valid design; fix the ${fix} to update them.</span><span class="when-none"><strong>No results yet for this design.</strong> Fix the ${fix} to see them; everything you typed is kept.</span>` : ''}</div>`;
 }
 
 export type StatusKind = 'current' | 'invalid' | 'upload-error' | 'error';
@@ -162,6 +200,32 @@ largest regenerative force that keeps the checks passing.</p>
 surface (the installed curve below the ideal curve in chart A, f1 above f2 in chart B). Start your own vehicle by
 overwriting the numbers, or upload a design file.</p></details>`;
 
+/** The section index of the jump bar: every input and result section, grouped, in page order. */
+function sectionIndex(): SafeHtml {
+  const inputs = panels.filter((p) => p.inputs).map((p) => [inputSectionId(p), p.title] as const);
+  const results = panels.filter((p) => p.results).map((p) => [`panel-${p.id}`, p.title] as const);
+  const list = (items: ReadonlyArray<readonly [string, string]>) => html`<ul>${items.map(([id, t]) => html`<li><a href="#${id}">${t}</a></li>`)}</ul>`;
+  return html`<details class="jb-index" id="section-index"><summary>Sections</summary><div class="jb-menu">
+<div><h2>Design inputs</h2>${list(inputs)}</div><div><h2>Results</h2>${list(results)}</div></div></details>`;
+}
+
+/**
+ * The jump bar: stays at the top of the screen. One tap to the results (the verdict heads them) or back to the
+ * inputs, the section index, the state of the answer (computing… / current / inputs to fix, kept up to date by
+ * static/js/workbench.js from #status) and a slot for a compact verdict (#verdict-bar).
+ */
+function jumpBar(): SafeHtml {
+  return html`<nav class="jumpbar" aria-label="Sections">
+<a class="jb-link jb-results" href="#results-top">Results</a>
+<a class="jb-link" href="#design-top">Inputs</a>
+${sectionIndex()}
+<span class="jb-live" id="jb-live" aria-hidden="true"></span>
+<div id="verdict-bar" class="verdict-bar"></div>
+</nav>`;
+}
+
+export const START_AGAIN_CONFIRM = 'Start again from the demo? The design on this page and its draft in this browser are replaced by the demo. Download the design first to keep it.';
+
 export function workbenchPage(
   assets: AssetUrls,
   values: FormValues,
@@ -172,23 +236,42 @@ export function workbenchPage(
   const body = html`<header class="top">
 <div class="brand"><span class="logo" aria-hidden="true"></span><h1>Lockstep <span>brake proportioning workbench</span></h1></div>
 <nav class="file" aria-label="Design file">
-<a class="jump button" href="#results-col">Jump to results</a>
 <button type="button" class="download" data-download="/workbench/design.json" data-filename="lockstep-design.json">Download design</button>
 <label class="upload button">Upload design<input type="file" id="upload" accept="application/json,.json" class="sr-file" data-max-bytes="${DESIGN_FILE_MAX_BYTES}" data-max-text="${DESIGN_FILE_MAX_TEXT}"></label>
-<button type="button" name="_op" value="demo" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" class="secondary" data-reset-draft="1">Start again from the demo</button>
+<button type="button" name="_op" value="demo" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" hx-confirm="${START_AGAIN_CONFIRM}" class="secondary" data-reset-draft="1">Start again from the demo</button>
 </nav>
 </header>
+${jumpBar()}
+${uploadDialog()}
 <main class="wb">
 <form id="design-form" class="inputs-col" hx-post="/workbench/update" hx-trigger="input delay:400ms, submit" hx-target="#status" hx-swap="outerHTML" hx-sync="this:replace" aria-label="Design" autocomplete="off" novalidate>
 ${inputsSection(values, units, errors)}
 </form>
 <div class="results-col" id="results-col">
+<div class="results-head" id="results-top">
 <aside class="caution" role="note"><strong>CAUTION</strong> ${CAUTION}</aside>
 ${valid ? statusBlock(errors.length ? 'invalid' : 'current', { errors }) : statusBlock('invalid', { errors })}
-${valid ? resultsSection(valid, units) : html`<div id="results">${staleNote(errors.length || 1)}</div>`}
+</div>
+${valid ? resultsSection(valid, units) : noResultsSection(errors.length || 1)}
 </div>
 </main>`;
   return layout('Lockstep workbench', assets, body, { charts: true });
+}
+
+/**
+ * Asked when a file is uploaded while designs are saved: is it a new design, or a new revision of a saved one?
+ * The choice becomes the form's `_design_id` (the store panel's "Save revision" then adds to that design).
+ * static/js/workbench.js opens it and fills the list from GET /designs/choices.
+ */
+function uploadDialog(): SafeHtml {
+  return html`<dialog id="upload-ask" aria-labelledby="upload-ask-h"><form method="dialog" class="upload-ask">
+<h2 id="upload-ask-h">Load this file as</h2>
+<p><label><input type="radio" name="upload_as" value="new" checked> a new design</label></p>
+<p><label><input type="radio" name="upload_as" value="revision"> a new revision of a saved design:</label></p>
+<p><label class="sr" for="upload-ask-design">Saved design</label><select id="upload-ask-design" name="design"></select></p>
+<p class="hint">Saving later adds a revision to the design chosen here; nothing is saved until you press “Save revision”.</p>
+<p class="acts"><button type="submit" value="load">Load the file</button> <button type="submit" value="cancel" class="secondary">Cancel</button></p>
+</form></dialog>`;
 }
 
 export function messagePage(assets: AssetUrls, title: string, message: string, code: string): SafeHtml {

@@ -152,9 +152,8 @@ export function chartC(ctx: ResultContext): ChartSpec {
   });
   const layout = baseLayout('C  Line pressures and pedal force', 'braking rate z', `line pressure (${pu.label})`);
   (layout.xaxis as Record<string, unknown>).range = [0, 1];
-  layout.yaxis2 = { title: { text: `pedal force (${fu.label})` }, overlaying: 'y', side: 'right', zeroline: false, showgrid: false };
-  layout.margin = { l: 56, r: 56, t: 36, b: 44 };
-  layout.height = 370;
+  layout.yaxis2 = { title: { text: `pedal force (${fu.label})`, standoff: 8 }, automargin: true, overlaying: 'y', side: 'right', zeroline: false, showgrid: false, tickmode: 'auto' }; // own round steps, not synced to the pressure ticks
+  layout.margin = { l: 60, r: 60, t: 40, b: 50 };
   return { data, layout };
 }
 

@@ -52,7 +52,7 @@ function itemTable(ctx: InputContext, list: 'removed' | 'added', title: string, 
 ${idx.length ? html`<div class="scroll"><table class="inputs-table items"><thead><tr><th scope="col">Name</th><th scope="col">Mass ${m('mass')}</th><th scope="col">x ${m('length')}</th><th scope="col">Height ${m('length')}</th><th scope="col">y ${m('length')} <span class="opt">opt.</span></th><th scope="col">Group <span class="opt">opt.</span></th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>
 ${rows}
 </tbody></table></div>` : html`<p class="hint">None listed.</p>`}
-${listButton(`add:${path}`, '+ item', idx.length ? 'Add an item (copy of the last)' : 'Add an item', idx.length >= 200)}
+${listButton(`add:${path}`, '+ item', 'Add an empty row (a draft: it counts once filled in)', idx.length >= 200)}
 ${blockMessage(ctx, path)}</fieldset>`;
 }
 
@@ -78,7 +78,7 @@ ${selectField(ctx, `${B}.occupant.basis`, 'Mass per occupant', [['', '— none c
 ${basis === 'custom' ? numberField(ctx, `${B}.occupant.mass_kg`, 'Custom mass per occupant', { width: 's', hint: '20 to 200 kg' }) : ''}
 ${blockMessage(ctx, `${B}.occupant`)}
 ${rows}
-${listButton(`add:${path}`, '+ seat', idx.length ? 'Add a seat (copy of the last)' : 'Add a seat', idx.length >= 20)}
+${listButton(`add:${path}`, '+ seat', 'Add an empty seat (a draft: it counts once filled in)', idx.length >= 20)}
 ${blockMessage(ctx, path)}</fieldset>`;
 }
 
@@ -101,7 +101,7 @@ ${numberField(ctx, `${p}.fill_unladen`, `Tank ${n}: fill when unladen`, { width:
   });
   return html`<fieldset class="table-field"><legend>Tanks</legend>
 ${rows}
-${listButton(`add:${path}`, '+ tank', idx.length ? 'Add a tank (copy of the last)' : 'Add a tank', idx.length >= 20)}
+${listButton(`add:${path}`, '+ tank', 'Add an empty tank (a draft: it counts once filled in)', idx.length >= 20)}
 ${blockMessage(ctx, path)}</fieldset>`;
 }
 

@@ -3,7 +3,7 @@
  * against the ratings per load state, and where each CG height comes from (axle lift, build-up, entered).
  */
 import { buildUp, type BuildUpResult, type MassTotals } from '../../core/index.ts';
-import { startingLiftValues } from '../../server/forms/axle-lift-form.ts';
+import { designLiftDefaults, startingLiftValues } from '../../server/forms/axle-lift-form.ts';
 import { axleLiftBlock } from '../axle-lift-view.ts';
 import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
@@ -84,7 +84,13 @@ function cgSourcesBlock(ctx: ResultContext): SafeHtml {
   )}</tbody></table></div>
 <h3>Measuring the CG height by axle lift</h3>
 <p class="hint">Weigh the vehicle level, then raise one axle in steps (at least about 600 mm in all, suspension locked, brakes off) and read the scales under the axle that stays down; repeat with the other axle raised. Enter the readings below: the result gives the CG height, its standard uncertainty and the budget of what limits it (docs/axle-lift.md), and "Apply to load state" writes it into that load state (<code>cg_height_m</code>, <code>cg_height_uncertainty_m</code>, <code>cg_height_derived_from: "measured"</code>, <code>overrides: ["cg_height_m"]</code>). The same computation runs from a file with <code>npx lockstep cg-lift FILE</code>.</p>
-${axleLiftBlock({ units: ctx.units, values: startingLiftValues(ctx.units, ctx.design.vehicle.wheelbase_m) })}`;
+${liftBlock(ctx)}`;
+}
+
+/** The axle-lift tool, starting from the design's wheelbase and unladen axle loads (which it then follows). */
+function liftBlock(ctx: ResultContext): SafeHtml {
+  const defaults = designLiftDefaults(ctx.design.vehicle.wheelbase_m, ctx.result.load_states, ctx.units);
+  return axleLiftBlock({ units: ctx.units, values: { ...startingLiftValues(ctx.units), ...defaults }, designDefaults: defaults });
 }
 
 export function conversionResults(ctx: ResultContext): SafeHtml {

@@ -7,11 +7,11 @@
  * Deferred (computed when in view). The page runs the Monte Carlo with PAGE_SAMPLES samples, only when the
  * "Run robustness analysis" button asks for it; `lockstep size` defaults to 100 000.
  */
-import { CAUTION, type SizingResult, sizeDesign, VERIFY_NOTE } from '../../core/index.ts';
+import { CAUTION, PA_PER_BAR, type SizingResult, sizeDesign, type UnitSystem, VERIFY_NOTE } from '../../core/index.ts';
 import { sizingOp, SIZING_UNDO_FIELD } from '../../server/forms/sizing-apply.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText } from '../chart.ts';
 import { numberField, selectField } from '../fields.ts';
-import { fixed } from '../format.ts';
+import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { InputContext, Panel, ResultContext } from './panel.ts';
 
@@ -46,16 +46,19 @@ function bandChart(r: SizingResult): ChartSpec {
   return { data, layout };
 }
 
-function valveMap(r: SizingResult): ChartSpec | null {
+function valveMap(r: SizingResult, units: UnitSystem): ChartSpec | null {
   const vs = r.valve_search;
   if (!vs) return null;
   const m = vs.map;
-  const layout = baseLayout('Proportioning valve: smallest margin over rules and load states', 'knee (bar)', 'ratio above the knee');
+  // the knee axis in the page's pressure unit (plotly then picks round tick steps in that unit)
+  const pu = shownUnit('pressure', units);
+  const knee = m.knee_bar.map((k) => Math.round(pu.from(k * PA_PER_BAR) * 10) / 10);
+  const layout = baseLayout('Proportioning valve: smallest margin over rules and load states', `knee (${pu.label})`, 'ratio above the knee');
   return {
     data: [
-      { type: 'heatmap', x: m.knee_bar, y: m.ratio, z: m.smallest_margin, zmid: 0, colorscale: 'RdBu', colorbar: { title: { text: 'margin' } }, hovertemplate: 'knee %{x} bar, ratio %{y}: %{z:.3f}<extra></extra>' },
-      { type: 'contour', x: m.knee_bar, y: m.ratio, z: m.smallest_margin, showscale: false, contours: { start: 0, end: 0, size: 1, coloring: 'lines' }, line: { color: '#000', width: 2 }, hoverinfo: 'skip', name: 'margin 0 (edge of the passing region)' },
-      { type: 'scatter', mode: 'markers', x: [m.chosen.knee_bar], y: [m.chosen.ratio], marker: { symbol: 'star', size: 14, color: '#E69F00', line: { color: '#000', width: 1 } }, name: 'chosen setting' },
+      { type: 'heatmap', x: knee, y: m.ratio, z: m.smallest_margin, zmid: 0, colorscale: 'RdBu', colorbar: { title: { text: 'margin' } }, hovertemplate: `knee %{x} ${pu.label}, ratio %{y}: %{z:.3f}<extra></extra>` },
+      { type: 'contour', x: knee, y: m.ratio, z: m.smallest_margin, showscale: false, contours: { start: 0, end: 0, size: 1, coloring: 'lines' }, line: { color: '#000', width: 2 }, hoverinfo: 'skip', name: 'margin 0 (edge of the passing region)' },
+      { type: 'scatter', mode: 'markers', x: [Math.round(pu.from(m.chosen.knee_bar * PA_PER_BAR) * 10) / 10], y: [m.chosen.ratio], marker: { symbol: 'star', size: 14, color: '#E69F00', line: { color: '#000', width: 1 } }, name: 'chosen setting' },
     ],
     layout,
   };
@@ -92,7 +95,7 @@ ${b.notes.map((n) => html`<p class="hint">${n}</p>`)}
 ${ok.length ? html`<div class="scroll"><table class="data"><thead><tr><th scope="col">Bore</th><th scope="col">Pedal force (N)</th><th scope="col">Pressure at the limit (bar)</th><th scope="col"></th></tr></thead><tbody>${ok.map((c) => html`<tr><th scope="row">${c.label}</th><td>${fixed(c.pedal_force_n, 0)}</td><td>${fixed(c.pressure_at_limit_bar, 1)}</td><td>${applyButton(b.path, Math.round(c.bore_mm * 1000) / 1000, 'Apply')}</td></tr>`)}</tbody></table></div>` : ''}`;
 }
 
-function valveSection(r: SizingResult): SafeHtml {
+function valveSection(r: SizingResult, units: UnitSystem): SafeHtml {
   if (!r.valve || !r.valve_search) return html``;
   const v = r.valve.valve;
   const text =
@@ -103,7 +106,7 @@ function valveSection(r: SizingResult): SafeHtml {
         : v.type === 'load_sensing'
           ? `load-sensing valve, ratio ${v.ratio}, knee ${v.knee_bar_at_rear_axle_kg.map(([kg, b]) => `${b} bar at ${kg} kg rear axle load`).join(', ')}`
           : 'no valve';
-  const map = valveMap(r);
+  const map = valveMap(r, units);
   return html`<h3>Rear valve</h3>
 <p><strong>${text}</strong>: smallest margin ${signed(r.valve.smallest_margin)} (${r.valve.passes ? 'passes every rule in every load state' : 'still fails'}). ${applyButton(r.valve_search.path, v, 'Apply')}</p>
 ${map ? chartBlock('chart-sizing-valve', map, html`Colour: smallest margin of a proportioning valve with that knee and ratio (blue passes, red fails); black line: margin 0, the edge of the passing region; star: the chosen setting. ${r.valve_search.map.feasible_cells} cells pass.`, 'Heat map of the smallest margin over valve knee and ratio') : ''}`;
@@ -146,7 +149,7 @@ Now ${pct(r.current_front_share)} at low pressure (${r.current.passes ? 'passes'
 ${chartBlock('chart-sizing-band', bandChart(r), html`Blue bars: front shares that pass each rule in each load state (fixed split, thresholds and valves left out). Green: the common band. Dashed: this design's share at low pressure; solid black: the recommended share (largest smallest margin).`, 'Bars of passing front shares per rule and load state with the common band')}
 ${optionsTable(r)}
 ${boreSection(r)}
-${valveSection(r)}
+${valveSection(r, ctx.units)}
 ${barSection(r)}
 ${robustnessSection(r, asked)}
 ${r.messages.map((m) => html`<p class="hint">${m}</p>`)}

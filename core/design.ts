@@ -278,6 +278,13 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
           message: `${t[i]![0]} is not above the previous rear axle load ${t[i - 1]![0]} kg (the table must be sorted by rear axle load, ascending, without repeats)`,
         });
       }
+      if (t[i]![1] < t[i - 1]![1]) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 1],
+          message: `${t[i]![1]} bar is below the previous knee ${t[i - 1]![1]} bar (a load-sensing valve gives the rear more pressure with more load: the knee must not fall as the rear axle load rises)`,
+        });
+      }
     }
   }
   if (d.hydraulics.balance_bar && d.hydraulics.circuit_split === 'diagonal') {

@@ -115,7 +115,7 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   /**
    * Adds the breakpoint zb after za. With thresholds below the knee (every practical valve) the pieces
    * are linear already; a threshold above the knee moves its own breakpoint with z, and those pieces are
-   * split until the midpoint lies on the chord (to 1e-9 of the force).
+   * split until the midpoint of forces and pressure lies on the chord (to 1e-10 relative).
    */
   function refine(za: number, zb: number, depth: number) {
     if (!(zb > za)) return;
@@ -123,8 +123,8 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
     const fa = at(za);
     const fb = at(zb);
     const fm = at(zm);
-    const off = Math.abs(fm.front - (fa.front + fb.front) / 2);
-    if (depth < 40 && off > 1e-9 * Math.max(1, Math.abs(fb.front))) {
+    const off = (k: 'front' | 'rear' | 'p') => Math.abs(fm[k] - (fa[k] + fb[k]) / 2) > 1e-10 * Math.max(1, Math.abs(fb[k]));
+    if (depth < 40 && (off('front') || off('rear') || off('p'))) {
       refine(za, zm, depth + 1);
       refine(zm, zb, depth + 1);
       return;

@@ -17,7 +17,9 @@ const discBrake = (thresholdMax: number) =>
     effective_radius_m: num(0.08, 0.17),
     pad_friction: num(0.3, 0.5),
     threshold_pressure_bar: num(0, thresholdMax),
-  });
+  })
+  // a fixed (opposed-piston) caliper lists the pistons of both sides: an even count (the schema refuses odd)
+  .map((b) => (b.caliper === 'fixed' && b.piston_diameters_mm.length % 2 === 1 ? { ...b, piston_diameters_mm: [...b.piston_diameters_mm, ...b.piston_diameters_mm] } : b));
 
 const drumBrake = (thresholdMax: number) =>
   fc.record({

@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import { boundedNumber, boundedNumberAbove, describeValue } from './bounded-number.ts';
 import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
+import { SHOE_ARRANGEMENTS } from './drum-brake-factor.ts';
 import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
@@ -61,6 +62,8 @@ export const DrumBrake = z.strictObject({
   drum_radius_m: num(0.05, 0.5),
   brake_factor: num(0.3, 15),
   threshold_pressure_bar: num(0, 30),
+  /** How the shoes are arranged: decides how the brake factor moves with lining friction (core/drum-brake-factor.ts). */
+  shoe_arrangement: z.enum(SHOE_ARRANGEMENTS).optional(),
 });
 
 export const Brake = z.discriminatedUnion('type', [DiscBrake, DrumBrake]);

@@ -4,7 +4,7 @@
  * T(p) = T1 + T2 is piecewise linear and non-decreasing in p; its kinks are the thresholds and the
  * valve knee, so the distribution in z is exact at those breakpoints and linear between them.
  */
-import { type Distribution, forcesAt } from './distribution.ts';
+import type { Distribution, ForcesAt } from './distribution.ts';
 import { masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
 
 export interface HydraulicAxles {
@@ -64,9 +64,10 @@ export interface DynamicSensing {
  */
 export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sensing: DynamicSensing): Distribution {
   const zs = (p: number) => (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+  const law: ValveLaw = { knee: 0, ratio: sensing.ratio };
   const at = (z: number) => {
-    const d = installedDistribution({ ...h, valve: { knee: sensing.kneeAt(z), ratio: sensing.ratio } });
-    return forcesAt(d, z);
+    law.knee = sensing.kneeAt(z);
+    return staticForcesAt(h, law, z);
   };
   // Knee crossing: kinks of g(z) = z − zs(K(z)) are the table kinks and where K(z) meets a threshold.
   const g = (z: number) => z - zs(sensing.kneeAt(z));
@@ -131,4 +132,49 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
     }
     push(zb);
   }
+}
+
+/**
+ * The forces and pressures of installedDistribution(h with valve law) at braking rate z, without building
+ * it: the total force F(p) = G1 (p − t1)⁺ + G2 (p2(p) − t2)⁺ is linear between the kinks t1, the master
+ * pressure at the rear threshold and the knee, so p for F(p) = z·P is interpolated on its piece.
+ */
+const KS = new Float64Array(4);
+function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: number): ForcesAt {
+  const total = (p: number) => h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, rearPressure(law, p) - h.threshold2);
+  const target = z * h.P;
+  const k1 = h.threshold1;
+  const k2 = masterPressureForRear(law, h.threshold2);
+  const k3 = law.knee;
+  let lo = 0;
+  let flo = 0;
+  // the kinks in ascending order (at most three; Infinity when absent), then one step beyond the last
+  let a = Number.isFinite(k1) && k1 > 0 ? k1 : Infinity;
+  let b = Number.isFinite(k2) && k2 > 0 ? k2 : Infinity;
+  let c = Number.isFinite(k3) && k3 > 0 ? k3 : Infinity;
+  let t: number;
+  if (a > b) (t = a), (a = b), (b = t);
+  if (b > c) (t = b), (b = c), (c = t);
+  if (a > b) (t = a), (a = b), (b = t);
+  const n = c < Infinity ? 3 : b < Infinity ? 2 : a < Infinity ? 1 : 0;
+  const ks = KS;
+  ks[0] = a;
+  ks[1] = b;
+  ks[2] = c;
+  ks[n] = (n ? ks[n - 1]! : 0) + 1e6;
+  let p = NaN;
+  for (let i = 0; i <= n; i++) {
+    const hi = ks[i]!;
+    const fhi = total(hi);
+    if (fhi >= target || i === n) {
+      p = fhi > flo ? lo + ((target - flo) * (hi - lo)) / (fhi - flo) : lo;
+      break;
+    }
+    lo = hi;
+    flo = fhi;
+  }
+  if (!(z > 0)) p = 0;
+  const p2 = rearPressure(law, p);
+  const front = h.G1 * Math.max(0, p - h.threshold1);
+  return { front, rear: target - front, p, p2 };
 }

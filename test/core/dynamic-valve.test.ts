@@ -18,7 +18,7 @@ import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/demo.ts';
 import type { DesignFile } from '../../core/design.ts';
 import { forcesAt } from '../../core/distribution.ts';
-import { stateModels } from '../../core/evaluate.ts';
+import { evaluate, stateModels } from '../../core/evaluate.ts';
 import { firstLock } from '../../core/lock-order.ts';
 import { readDesign } from '../../core/validate.ts';
 
@@ -65,6 +65,13 @@ describe('dynamic load-sensing valve', () => {
       expect(lock.braking_rate).toBeCloseTo(hand.z, 9);
       expect(forcesAt(laden.dist, hand.z).p).toBeCloseTo(hand.p, 3);
     }
+  });
+
+  it('the curve checks say which reading of the valve was used', () => {
+    const dyn = evaluate(withSenses(undefined)).checks.find((c) => c.rule === 'eu-appendix/lock-order' && c.applies)!;
+    expect(dyn.note).toMatch(/knee follows the rear axle load while braking/);
+    const st = evaluate(withSenses('static')).checks.find((c) => c.rule === 'eu-appendix/lock-order' && c.applies)!;
+    expect(st.note).toMatch(/knee read off the static rear axle load/);
   });
 
   it('at every z the rear line pressure is the valve law at the knee of the load at that z', () => {

@@ -51,6 +51,8 @@ describe('bin/lockstep.mjs and a reader that stops early', () => {
       timeout: 60000,
     });
     expect(r.stderr).not.toMatch(/EPIPE|Unhandled/);
-    expect(r.stderr).toMatch(/status 0/);
+    // a normal end: 0 (every check passes) or 1 (a check fails; the demo's laden secondary stop with the
+    // front circuit failed falls short since its load-sensing valve follows the braking rear load), never a crash
+    expect(r.stderr).toMatch(/status [01]\n/);
   });
 });

@@ -72,27 +72,34 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   // Knee crossing: kinks of g(z) = z − zs(K(z)) are the table kinks and where K(z) meets a threshold.
   const g = (z: number) => z - zs(sensing.kneeAt(z));
   const cand = [0, ...sensing.kinks];
-  for (let i = 0; i + 1 < cand.length; i++) {
-    for (const t of [h.threshold1, h.threshold2]) {
-      const [za, zb] = [cand[i]!, cand[i + 1]!];
-      const [ka, kb] = [sensing.kneeAt(za), sensing.kneeAt(zb)];
-      if ((ka - t) * (kb - t) < 0) cand.push(za + ((t - ka) * (zb - za)) / (kb - ka));
-    }
+  const n0 = cand.length; // the table kinks are ascending, so K is linear between neighbours
+  for (let i = 0; i + 1 < n0; i++) {
+    const za = cand[i]!;
+    const zb = cand[i + 1]!;
+    const ka = sensing.kneeAt(za);
+    const kb = sensing.kneeAt(zb);
+    if ((ka - h.threshold1) * (kb - h.threshold1) < 0) cand.push(za + ((h.threshold1 - ka) * (zb - za)) / (kb - ka));
+    if ((ka - h.threshold2) * (kb - h.threshold2) < 0) cand.push(za + ((h.threshold2 - ka) * (zb - za)) / (kb - ka));
   }
-  const last = Math.max(...cand);
-  cand.push(last + zs(sensing.kneeAt(last)) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
+  const last = cand[n0 - 1]!;
+  const kneeLast = sensing.kneeAt(last); // K is non-increasing in z (the schema keeps the knee rising with load): its lowest value
+  cand.push(last + zs(kneeLast) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
   cand.sort((a, b) => a - b);
   let zStar = NaN;
+  let ga = g(cand[0]!);
   for (let i = 0; i + 1 < cand.length; i++) {
-    const [za, zb] = [cand[i]!, cand[i + 1]!];
-    const [ga, gb] = [g(za), g(zb)];
+    const za = cand[i]!;
+    const zb = cand[i + 1]!;
+    const gb = g(zb);
     if (ga <= 0 && gb > 0) {
       zStar = za - (ga * (zb - za)) / (gb - ga);
       break;
     }
+    ga = gb;
   }
-  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].filter((z) => Number.isFinite(z) && z >= 0);
-  const zsSorted = [...new Set(bps)].sort((a, b) => a - b);
+  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].sort((a, b) => a - b);
+  const zsSorted: number[] = [];
+  for (const z of bps) if (Number.isFinite(z) && z >= 0 && z !== zsSorted[zsSorted.length - 1]) zsSorted.push(z);
   zsSorted.push(zsSorted[zsSorted.length - 1]! + 1);
   const d: Distribution = { P: h.P, z: [], t1: [], t2: [], p: [], p2: [] };
   const push = (z: number) => {
@@ -105,8 +112,7 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   };
   push(0);
   // a threshold at or above some knee value is the only case with breakpoints not listed above
-  const kneeMin = Math.min(...cand.map((z) => sensing.kneeAt(z)));
-  const listed = Math.max(h.threshold1, h.threshold2) < kneeMin;
+  const listed = Math.max(h.threshold1, h.threshold2) < kneeLast;
   for (let i = 1; i < zsSorted.length; i++) {
     if (listed) push(zsSorted[i]!);
     else refine(zsSorted[i - 1]!, zsSorted[i]!, 0);

@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import { boundedNumber, boundedNumberAbove, describeValue } from './bounded-number.ts';
 import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
+import { SHOE_ARRANGEMENTS } from './drum-brake-factor.ts';
 import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
@@ -33,8 +34,8 @@ export const LoadState = z.strictObject({
   label: z.string().min(1).max(200),
   kind: z.enum(['unladen', 'laden', 'other']),
   mass_kg: num(50, 60000),
-  front_axle_kg: numAbove(0, 60000),
-  cg_height_m: numAbove(0, 10),
+  front_axle_kg: num(1, 60000), // lower limits keep every result finite (issue 12 point 9)
+  cg_height_m: num(0.05, 10),
   ...loadStateBuildUpShape, // optional: derived_from, from_build_up, overrides, cg_height_derived_from, cg_height_uncertainty_m
 }).superRefine((s, ctx) => {
   // On the load state itself, so it is reported even when other parts of the file have problems too.
@@ -62,6 +63,8 @@ export const DrumBrake = z.strictObject({
   drum_radius_m: num(0.05, 0.5),
   brake_factor: num(0.3, 15),
   threshold_pressure_bar: num(0, 30),
+  /** How the shoes are arranged: decides how the brake factor moves with lining friction (core/drum-brake-factor.ts). */
+  shoe_arrangement: z.enum(SHOE_ARRANGEMENTS).optional(),
 });
 
 export const Brake = z.discriminatedUnion('type', [DiscBrake, DrumBrake]);
@@ -157,12 +160,12 @@ export const StoppingOptions = z.strictObject({
   speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
   reaction_time_s: num(0, 5).optional(),
   build_up_time_s: num(0, 3).optional(),
-  abs_adhesion_factor: numAbove(0, 1).optional(),
+  abs_adhesion_factor: num(0.1, 1).optional(),
 });
 
 export const HeatOptions = z.strictObject({
-  front_rotor_kg: numAbove(0, 200),
-  rear_rotor_kg: numAbove(0, 200),
+  front_rotor_kg: num(0.5, 200),
+  rear_rotor_kg: num(0.5, 200),
   specific_heat_j_per_kg_k: num(100, 2000).optional(),
   heat_to_rotor_share: numAbove(0, 1).optional(),
   cooling_coefficient_per_s: num(0, 1).optional(),
@@ -294,6 +297,24 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
           message: `${t[i]![0]} is not above the previous rear axle load ${t[i - 1]![0]} kg (the table must be sorted by rear axle load, ascending, without repeats)`,
         });
       }
+      if (t[i]![1] < t[i - 1]![1]) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 1],
+          message: `${t[i]![1]} bar is below the previous knee ${t[i - 1]![1]} bar (a load-sensing valve gives the rear more pressure with more load: the knee must not fall as the rear axle load rises)`,
+        });
+      }
+    }
+  }
+  for (const axle of ['front', 'rear'] as const) {
+    const b = d.axles[axle].brake;
+    // an opposed-piston caliper has the same pistons on both sides of the disc: an even count
+    if (b.type === 'disc' && b.caliper === 'fixed' && b.piston_diameters_mm.length % 2 === 1) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['axles', axle, 'brake', 'piston_diameters_mm'],
+        message: `${b.piston_diameters_mm.length} pistons cannot make a fixed (opposed-piston) caliper: it has the same pistons on each side of the disc, so an even number (list every piston of both sides), or use "sliding"`,
+      });
     }
   }
   if (d.hydraulics.balance_bar && d.hydraulics.circuit_split === 'diagonal') {

@@ -4,7 +4,7 @@
  * T(p) = T1 + T2 is piecewise linear and non-decreasing in p; its kinks are the thresholds and the
  * valve knee, so the distribution in z is exact at those breakpoints and linear between them.
  */
-import { type Distribution, forcesAt } from './distribution.ts';
+import type { Distribution, ForcesAt } from './distribution.ts';
 import { masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
 
 export interface HydraulicAxles {
@@ -64,34 +64,42 @@ export interface DynamicSensing {
  */
 export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sensing: DynamicSensing): Distribution {
   const zs = (p: number) => (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+  const law: ValveLaw = { knee: 0, ratio: sensing.ratio };
   const at = (z: number) => {
-    const d = installedDistribution({ ...h, valve: { knee: sensing.kneeAt(z), ratio: sensing.ratio } });
-    return forcesAt(d, z);
+    law.knee = sensing.kneeAt(z);
+    return staticForcesAt(h, law, z);
   };
   // Knee crossing: kinks of g(z) = z − zs(K(z)) are the table kinks and where K(z) meets a threshold.
   const g = (z: number) => z - zs(sensing.kneeAt(z));
   const cand = [0, ...sensing.kinks];
-  for (let i = 0; i + 1 < cand.length; i++) {
-    for (const t of [h.threshold1, h.threshold2]) {
-      const [za, zb] = [cand[i]!, cand[i + 1]!];
-      const [ka, kb] = [sensing.kneeAt(za), sensing.kneeAt(zb)];
-      if ((ka - t) * (kb - t) < 0) cand.push(za + ((t - ka) * (zb - za)) / (kb - ka));
-    }
+  const n0 = cand.length; // the table kinks are ascending, so K is linear between neighbours
+  for (let i = 0; i + 1 < n0; i++) {
+    const za = cand[i]!;
+    const zb = cand[i + 1]!;
+    const ka = sensing.kneeAt(za);
+    const kb = sensing.kneeAt(zb);
+    if ((ka - h.threshold1) * (kb - h.threshold1) < 0) cand.push(za + ((h.threshold1 - ka) * (zb - za)) / (kb - ka));
+    if ((ka - h.threshold2) * (kb - h.threshold2) < 0) cand.push(za + ((h.threshold2 - ka) * (zb - za)) / (kb - ka));
   }
-  const last = Math.max(...cand);
-  cand.push(last + zs(sensing.kneeAt(last)) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
+  const last = cand[n0 - 1]!;
+  const kneeLast = sensing.kneeAt(last); // K is non-increasing in z (the schema keeps the knee rising with load): its lowest value
+  cand.push(last + zs(kneeLast) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
   cand.sort((a, b) => a - b);
   let zStar = NaN;
+  let ga = g(cand[0]!);
   for (let i = 0; i + 1 < cand.length; i++) {
-    const [za, zb] = [cand[i]!, cand[i + 1]!];
-    const [ga, gb] = [g(za), g(zb)];
+    const za = cand[i]!;
+    const zb = cand[i + 1]!;
+    const gb = g(zb);
     if (ga <= 0 && gb > 0) {
       zStar = za - (ga * (zb - za)) / (gb - ga);
       break;
     }
+    ga = gb;
   }
-  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].filter((z) => Number.isFinite(z) && z >= 0);
-  const zsSorted = [...new Set(bps)].sort((a, b) => a - b);
+  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].sort((a, b) => a - b);
+  const zsSorted: number[] = [];
+  for (const z of bps) if (Number.isFinite(z) && z >= 0 && z !== zsSorted[zsSorted.length - 1]) zsSorted.push(z);
   zsSorted.push(zsSorted[zsSorted.length - 1]! + 1);
   const d: Distribution = { P: h.P, z: [], t1: [], t2: [], p: [], p2: [] };
   const push = (z: number) => {
@@ -104,8 +112,7 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   };
   push(0);
   // a threshold at or above some knee value is the only case with breakpoints not listed above
-  const kneeMin = Math.min(...cand.map((z) => sensing.kneeAt(z)));
-  const listed = Math.max(h.threshold1, h.threshold2) < kneeMin;
+  const listed = Math.max(h.threshold1, h.threshold2) < kneeLast;
   for (let i = 1; i < zsSorted.length; i++) {
     if (listed) push(zsSorted[i]!);
     else refine(zsSorted[i - 1]!, zsSorted[i]!, 0);
@@ -115,7 +122,7 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   /**
    * Adds the breakpoint zb after za. With thresholds below the knee (every practical valve) the pieces
    * are linear already; a threshold above the knee moves its own breakpoint with z, and those pieces are
-   * split until the midpoint lies on the chord (to 1e-9 of the force).
+   * split until the midpoint of forces and pressure lies on the chord (to 1e-10 relative).
    */
   function refine(za: number, zb: number, depth: number) {
     if (!(zb > za)) return;
@@ -123,12 +130,57 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
     const fa = at(za);
     const fb = at(zb);
     const fm = at(zm);
-    const off = Math.abs(fm.front - (fa.front + fb.front) / 2);
-    if (depth < 40 && off > 1e-9 * Math.max(1, Math.abs(fb.front))) {
+    const off = (k: 'front' | 'rear' | 'p') => Math.abs(fm[k] - (fa[k] + fb[k]) / 2) > 1e-10 * Math.max(1, Math.abs(fb[k]));
+    if (depth < 40 && (off('front') || off('rear') || off('p'))) {
       refine(za, zm, depth + 1);
       refine(zm, zb, depth + 1);
       return;
     }
     push(zb);
   }
+}
+
+/**
+ * The forces and pressures of installedDistribution(h with valve law) at braking rate z, without building
+ * it: the total force F(p) = G1 (p − t1)⁺ + G2 (p2(p) − t2)⁺ is linear between the kinks t1, the master
+ * pressure at the rear threshold and the knee, so p for F(p) = z·P is interpolated on its piece.
+ */
+const KS = new Float64Array(4);
+function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: number): ForcesAt {
+  const total = (p: number) => h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, rearPressure(law, p) - h.threshold2);
+  const target = z * h.P;
+  const k1 = h.threshold1;
+  const k2 = masterPressureForRear(law, h.threshold2);
+  const k3 = law.knee;
+  let lo = 0;
+  let flo = 0;
+  // the kinks in ascending order (at most three; Infinity when absent), then one step beyond the last
+  let a = Number.isFinite(k1) && k1 > 0 ? k1 : Infinity;
+  let b = Number.isFinite(k2) && k2 > 0 ? k2 : Infinity;
+  let c = Number.isFinite(k3) && k3 > 0 ? k3 : Infinity;
+  let t: number;
+  if (a > b) (t = a), (a = b), (b = t);
+  if (b > c) (t = b), (b = c), (c = t);
+  if (a > b) (t = a), (a = b), (b = t);
+  const n = c < Infinity ? 3 : b < Infinity ? 2 : a < Infinity ? 1 : 0;
+  const ks = KS;
+  ks[0] = a;
+  ks[1] = b;
+  ks[2] = c;
+  ks[n] = (n ? ks[n - 1]! : 0) + 1e6;
+  let p = NaN;
+  for (let i = 0; i <= n; i++) {
+    const hi = ks[i]!;
+    const fhi = total(hi);
+    if (fhi >= target || i === n) {
+      p = fhi > flo ? lo + ((target - flo) * (hi - lo)) / (fhi - flo) : lo;
+      break;
+    }
+    lo = hi;
+    flo = fhi;
+  }
+  if (!(z > 0)) p = 0;
+  const p2 = rearPressure(law, p);
+  const front = h.G1 * Math.max(0, p - h.threshold1);
+  return { front, rear: target - front, p, p2 };
 }

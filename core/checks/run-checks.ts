@@ -54,12 +54,22 @@ export function notApplicable(rule: Rule, loadState: string | null, note: string
   });
 }
 
-function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, advisory: boolean): CheckResult {
+/** What a load-sensing valve was modelled as reading, for the curve checks' notes (issue 12 point 7). */
+function valveNoteOf(design: DesignFile): string | null {
+  const v = design.hydraulics.rear_valve;
+  if (v.type !== 'load_sensing') return null;
+  return v.senses === 'static'
+    ? 'load-sensing valve: knee read off the static rear axle load (as stated in the design)'
+    : 'load-sensing valve: knee follows the rear axle load while braking (suspension travel, the default)';
+}
+
+function curveResult(rule: CurveRule, s: StateModel, scenario: CheckScenario, advisory: boolean, valveNote: string | null): CheckResult {
   const v = checkCurveRule(rule, s.loads, s.dist);
   const lift = v.branches.some((b) => b.lift_off_in_range);
   const notes = [rule.note ?? ''];
   if (advisory) notes.unshift(ABS_FAILED_NOTE);
   if (lift) notes.push(`the rear axle lifts off at z = ${s.loads.zLift.toFixed(3)}, inside the checked range (counted as failing above it)`);
+  if (valveNote) notes.push(valveNote);
   const extra: Pick<CheckResult, 'details'> = {};
   if (rule.requirement_words) {
     // light N1 (core/rules/light-n1.ts): which requirement decided, and the one it replaced for information
@@ -157,6 +167,7 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
   const heaviest = rated ?? Math.max(...models.map((m) => m.state.mass_kg));
   const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
   const out: CheckResult[] = [];
+  const valveNote = valveNoteOf(design);
   const selected = selectDesignRules(ruleSelection(design, opts), design);
   const derived = derivedStates(design, selected); // the FMVSS lightly loaded vehicle, when those rules are selected
   for (const { rule, covers_category } of selected) {
@@ -193,8 +204,8 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
       if (rule.kind === 'curve') {
         if (rule.abs_exempt && design.vehicle.abs) {
           out.push(notApplicable(rule, s.state.id, ABS_EXEMPT_NOTE));
-          out.push(curveResult(rule, s, 'abs_failed', true));
-        } else out.push(curveResult(rule, s, 'as_designed', false));
+          out.push(curveResult(rule, s, 'abs_failed', true, valveNote));
+        } else out.push(curveResult(rule, s, 'as_designed', false, valveNote));
       } else if (rule.kind === 'parking') out.push(...parkingResults(design, rule, s));
       else out.push(...decelerationResults(design, rule, s));
     }

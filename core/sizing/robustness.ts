@@ -13,12 +13,14 @@
  *    −MARGIN_TOLERANCE; 5th percentile of the smallest margin; histogram;
  *  - sensitivity: each input alone to its − and + limit, ranked by the largest change of the smallest
  *    margin.
- * Pad friction scales the brake gain in proportion (disc: G ∝ μ; drum: the brake factor is taken to
- * scale with the lining friction, a simplification: a leading shoe's factor rises faster than μ). A
+ * Pad friction scales a disc brake's gain in proportion (G ∝ μ); a drum's brake factor follows the
+ * curve of its `shoe_arrangement` (core/drum-brake-factor.ts: a leading shoe's factor rises faster than
+ * μ), and is scaled with μ only where the arrangement is not given. A
  * change of tyre radius scales both gains by R0/R. Mass is held; what the front axle gains the rear
  * loses.
  */
 import { G_N } from '../constants.ts';
+import { brakeFactorAtFriction, NOMINAL_LINING_FRICTION } from '../drum-brake-factor.ts';
 import { MARGIN_TOLERANCE } from '../checks/curve-check.ts';
 import type { DesignFile } from '../design.ts';
 import type { Segment } from '../distribution.ts';
@@ -57,6 +59,9 @@ interface NominalState {
   threshold2: number;
   /** ± limits of this state's CG height, m. */
   hTol: number;
+  /** Gain factor for a relative friction change, front and rear (1 + dμ for a disc or a drum of unstated arrangement). */
+  gainAt1: (dmu: number) => number;
+  gainAt2: (dmu: number) => number;
   /** Valve law referred to the front line pressure (fixed valves; load-sensing is read per sample). */
   knee: number;
   ratio: number;
@@ -74,6 +79,14 @@ export interface RobustnessModel {
 
 export function resolvedTolerances(design: DesignFile): Required<Tolerances> {
   return { ...DEFAULT_TOLERANCES, ...(design.tolerances ?? {}) };
+}
+
+/** How an axle's gain moves with a relative change dμ of its lining friction. */
+function frictionGain(b: DesignFile['axles']['front']['brake']): (dmu: number) => number {
+  if (b.type !== 'drum' || !b.shoe_arrangement) return (dmu) => 1 + dmu;
+  const arr = b.shoe_arrangement;
+  const c0 = b.brake_factor;
+  return (dmu) => brakeFactorAtFriction(arr, c0, NOMINAL_LINING_FRICTION * (1 + dmu)) / c0;
 }
 
 export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]): RobustnessModel {
@@ -95,6 +108,8 @@ export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]
       hTol: u !== undefined && design.tolerances?.cg_height_m === undefined ? 2 * u : tol.cg_height_m,
       knee: s.valve.knee,
       ratio: s.valve.ratio,
+      gainAt1: frictionGain(design.axles.front.brake),
+      gainAt2: frictionGain(design.axles.rear.brake),
     };
   });
   const rulesOf = states.map((_, i) => rules.flatMap((r, j) => (r.states.includes(i) ? [j] : [])));
@@ -187,7 +202,7 @@ export function stateMargin(m: RobustnessModel, i: number, mu1: number, mu2: num
     law.knee = s.knee;
     law.ratio = s.ratio;
   }
-  const segs = fillSegments(P, s.G1 * (1 + mu1) * rf, s.G2 * (1 + mu2) * rf, s.threshold1, s.threshold2, law);
+  const segs = fillSegments(P, s.G1 * s.gainAt1(mu1) * rf, s.G2 * s.gainAt2(mu2) * rf, s.threshold1, s.threshold2, law);
   let worst = Infinity;
   for (const j of rules) {
     const v = ruleMargin(m.rules[j]!.compiled, geo, segs);

@@ -6,7 +6,8 @@
  *  - limiting: knee 5…150 bar;
  *  - proportioning: knee 5…120 bar × ratio 0.05…1 (the margin map for the heat map);
  *  - load-sensing: ratio 0.05…1 and, per rear static axle load of the load states, its own knee
- *    (the table's points sit at the states' rear axle loads; states with the same load share one).
+ *    (the table's points sit at the states' rear axle loads; states with the same load share one),
+ *    stated as a valve reading the static rear axle load (senses "static").
  * The chosen setting is then checked with the full model and the issue-4 curve checks.
  */
 import { axleLoadModel } from '../axle-loads.ts';
@@ -182,7 +183,10 @@ export function searchValve(design: DesignFile, rules: readonly SizingRule[]): V
   const limiting = verify(design, rules, { type: 'limiting', knee_bar: roundTo(lim.knee, 0.01) });
   const proportioning = verify(design, rules, { type: 'proportioning', knee_bar: roundTo(prop.knee, 0.01), ratio: roundTo(prop.ratio, 0.001) });
   const table: [number, number][] = loads.map((kg, g) => [kg, roundTo(ls.knees[g]!, 0.01)]);
-  const load_sensing = verify(design, rules, { type: 'load_sensing', ratio: roundTo(ls.ratio, 0.001), knee_bar_at_rear_axle_kg: table });
+  // The table is searched on the static rear axle loads, so the setting is stated and verified as a valve
+  // reading the static load (senses "static"); a travel-sensing valve follows the load transfer while
+  // braking and needs its own check with senses "dynamic".
+  const load_sensing = verify(design, rules, { type: 'load_sensing', ratio: roundTo(ls.ratio, 0.001), senses: 'static', knee_bar_at_rear_axle_kg: table });
   const all = [limiting, proportioning, load_sensing].filter((c) => c.smallest_margin !== null);
   all.sort((a, b) => Number(b.passes) - Number(a.passes) || b.smallest_margin! - a.smallest_margin!);
   return {

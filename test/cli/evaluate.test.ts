@@ -106,7 +106,7 @@ describe('garbage gets exit 2 and a message naming the field or file', () => {
     [
       'a string where a number goes',
       () => ['evaluate', file('str.json', demoWith((d) => (d.load_states[1].cg_height_m = '0.9')))],
-      [/load_states\[1\]\.cg_height_m: "0\.9" is not a number; allowed: above 0 and at most 10 m/],
+      [/load_states\[1\]\.cg_height_m: "0\.9" is not a number; allowed: from 0.05 to 10 m/],
     ],
     [
       'front axle load not below the mass',

@@ -28,6 +28,8 @@ describe('adhesion utilisation', () => {
     fc.assert(
       fc.property(arbitraryDesign, (design) => {
         for (const s of stateModels(design)) {
+          // a travel-sensing valve lowers its knee as the rear unloads, so f2 may fall with a steep table: not monotone by design
+          if (s.sensing) continue;
           const zMax = Math.min(1.5, s.loads.zLift * 0.999);
           let prev = { front: 0, rear: 0 };
           const drops: string[] = [];

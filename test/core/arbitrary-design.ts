@@ -17,7 +17,9 @@ const discBrake = (thresholdMax: number) =>
     effective_radius_m: num(0.08, 0.17),
     pad_friction: num(0.3, 0.5),
     threshold_pressure_bar: num(0, thresholdMax),
-  });
+  })
+  // a fixed (opposed-piston) caliper lists the pistons of both sides: an even count (the schema refuses odd)
+  .map((b) => (b.caliper === 'fixed' && b.piston_diameters_mm.length % 2 === 1 ? { ...b, piston_diameters_mm: [...b.piston_diameters_mm, ...b.piston_diameters_mm] } : b));
 
 const drumBrake = (thresholdMax: number) =>
   fc.record({
@@ -38,14 +40,17 @@ const rearValve = fc.oneof(
       ratio: num(0.1, 1),
       start: num(300, 2000),
       steps: fc.array(fc.tuple(num(50, 800), num(5, 80)), { minLength: 1, maxLength: 4 }),
+      senses: fc.constantFrom(undefined, 'static' as const, 'dynamic' as const),
     })
-    .map(({ type, ratio, start, steps }) => {
+    .map(({ type, ratio, start, steps, senses }) => {
       let kg = start;
-      const table: [number, number][] = steps.map(([dk, bar]) => {
+      // the knee rises (or stays) with the rear axle load, as the schema requires
+      const bars = steps.map(([, bar]) => bar).sort((a, b) => a - b);
+      const table: [number, number][] = steps.map(([dk], i) => {
         kg += dk;
-        return [kg, bar];
+        return [kg, bars[i]!];
       });
-      return { type, ratio, knee_bar_at_rear_axle_kg: table };
+      return { type, ratio, knee_bar_at_rear_axle_kg: table, ...(senses ? { senses } : {}) };
     }),
 );
 

@@ -59,9 +59,13 @@ describe('properties over random valid designs (fast-check)', () => {
             const f = forcesAt(s.dist, z);
             expect(Math.abs(f.front + f.rear - z * s.loads.P)).toBeLessThanOrEqual(1e-9 * z * s.loads.P);
             expect(f.front).toBeGreaterThanOrEqual(prev.front - 1e-9 * s.loads.P);
-            expect(f.rear).toBeGreaterThanOrEqual(prev.rear - 1e-9 * s.loads.P);
             expect(f.p).toBeGreaterThanOrEqual(prev.p - 1e-3);
-            expect(f.p2).toBeGreaterThanOrEqual(prev.p2 - 1e-3);
+            // a travel-sensing valve lowers its knee as the rear unloads: with a steep table the rear line
+            // pressure (and force) may fall as z rises (p2 = r·p + (1 − r)·K(z)), so only the static law is monotone
+            if (!s.sensing) {
+              expect(f.rear).toBeGreaterThanOrEqual(prev.rear - 1e-9 * s.loads.P);
+              expect(f.p2).toBeGreaterThanOrEqual(prev.p2 - 1e-3);
+            }
             // the pressure really produces the forces: T1 = G1 max(0, p − threshold1), same for the rear
             expect(f.front).toBeCloseTo(s.G1 * Math.max(0, f.p - s.threshold1), 6);
             expect(f.rear).toBeCloseTo(s.G2 * Math.max(0, f.p2 - s.threshold2), 6);

@@ -113,7 +113,8 @@ describe('each failed state changes the curves as its definition says', () => {
       { id: 'laden', label: 'Laden', kind: 'laden', mass_kg: 2400, front_axle_kg: 1000, cg_height_m: 0.6 },
     ];
     // rear static axle 800 kg (knee 20 bar) unladen and 1400 kg (knee 40 bar) laden from the table
-    const d = design({ type: 'load_sensing', ratio: 0.3, knee_bar_at_rear_axle_kg: [[800, 20], [1400, 40]] }, states);
+    // senses "static": the intact valve reads the static rear load, so the knees below are those of the table
+    const d = design({ type: 'load_sensing', ratio: 0.3, senses: 'static', knee_bar_at_rear_axle_kg: [[800, 20], [1400, 40]] }, states);
     const [lowest, highest] = failedValves(d.hydraulics.rear_valve);
     const [unladen, laden] = stateModels(d);
     // Lowest knee: the laden curve changes (40 → 20 bar), the unladen one does not.

@@ -12,7 +12,7 @@ const START: Record<'disc' | 'drum', Record<string, string | number>> = {
 };
 const KEYS: Record<'disc' | 'drum', RegExp> = {
   disc: /^(type|caliper|piston_diameters_mm\[\d+\]|effective_radius_m|pad_friction|threshold_pressure_bar)$/,
-  drum: /^(type|wheel_cylinder_diameter_mm|drum_radius_m|brake_factor|threshold_pressure_bar)$/,
+  drum: /^(type|wheel_cylinder_diameter_mm|drum_radius_m|brake_factor|shoe_arrangement|threshold_pressure_bar)$/,
 };
 
 function normaliseAxle(values: FormValues, axle: 'front' | 'rear', units: UnitSystem): FormValues {
@@ -46,7 +46,8 @@ ${numberField(ctx, `${p}.pad_friction`, 'Pad friction coefficient', { unitText: 
   } else {
     fields = html`${numberField(ctx, `${p}.wheel_cylinder_diameter_mm`, 'Wheel cylinder diameter')}
 ${numberField(ctx, `${p}.drum_radius_m`, 'Drum radius')}
-${numberField(ctx, `${p}.brake_factor`, 'Brake factor C*', { unitText: '–', hint: 'total shoe drag / actuating force; about 2 for leading–trailing shoes' })}`;
+${numberField(ctx, `${p}.brake_factor`, 'Brake factor C*', { unitText: '–', hint: 'total shoe drag / actuating force; about 2 for leading–trailing shoes' })}
+${selectField(ctx, `${p}.shoe_arrangement`, 'Shoe arrangement', [['', '— not stated —'], ['leading_trailing', 'leading–trailing'], ['two_leading', 'two leading shoes'], ['duo_servo', 'duo-servo']], { optional: true, hint: 'how the brake factor moves with lining friction in the robustness analysis' })}`;
   }
   const out = html`<fieldset class="axle"><legend>${axle === 'front' ? 'Front axle' : 'Rear axle'}</legend>
 ${numberField(ctx, `axles.${axle}.tyre_radius_m`, 'Tyre rolling radius', { hint: 'dynamic radius, loaded' })}

@@ -17,7 +17,7 @@ const KEYS: Record<ValveType, RegExp> = {
   none: /^type$/,
   limiting: /^(type|knee_bar)$/,
   proportioning: /^(type|knee_bar|ratio)$/,
-  load_sensing: /^(type|ratio|knee_bar_at_rear_axle_kg\[\d+\]\[[01]\])$/,
+  load_sensing: /^(type|ratio|senses|knee_bar_at_rear_axle_kg\[\d+\]\[[01]\])$/,
 };
 const START: Record<ValveType, Record<string, number>> = {
   none: {},
@@ -56,7 +56,8 @@ function valveInputs(ctx: InputContext): SafeHtml {
   const rows = listIndicesOf(ctx.values, `${V}.knee_bar_at_rear_axle_kg`);
   const t = `${V}.knee_bar_at_rear_axle_kg`;
   return html`${ratio()}
-<fieldset class="table-field"><legend>Knee pressure by static rear axle load</legend>
+${selectField(ctx, `${V}.senses`, 'Valve follows', [['', 'suspension travel while braking (default)'], ['dynamic', 'suspension travel while braking'], ['static', 'the rear axle load at rest']], { optional: true, hint: 'a linkage to the axle follows the load transfer while braking; the knee then falls as the rear unloads' })}
+<fieldset class="table-field"><legend>Knee pressure by rear axle load</legend>
 <p class="hint">Read from the valve's setting chart; linear between rows, held flat outside. Rows ascending by load.</p>
 <table class="inputs-table"><thead><tr><th scope="col">Rear axle load</th><th scope="col">Knee pressure</th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>
 ${rows.map((i) => html`<tr><td>${numberField(ctx, `${t}[${i}][0]`, `Row ${i + 1}: rear axle load`, { compact: true, width: 's' })}</td><td>${numberField(ctx, `${t}[${i}][1]`, `Row ${i + 1}: knee pressure`, { compact: true, width: 's' })}</td><td>${listButton(`remove:${t}[${i}]`, '×', 'Remove this row', rows.length <= 1)}</td></tr>`)}

@@ -29,7 +29,11 @@ describe('fixed-split band, lock-order rules', () => {
 
   it('71/320 Appendix N1 main requirement (z 0.15–0.50): φ ≥ ψ + 0.5χ', () => {
     // hand-derived as above with the N1 range of point 3.1.1 (reference sheet 2.2 (b)): bound at z = 0.50.
-    const d = fixedSplitDesign({ rules: ['eu-appendix/lock-order'] });
+    // An unladen state makes the rear-axle load ratio 900/562 = 1.60 > 1.5 with a maximum mass of 2 t, so the N1
+    // requirement applies (light-N1 rule, 71/320/EEC Annex II Appendix 3.1.1, from memory); its own bound
+    // ψ + 0.5χ = 638/1200 + 0.5·0.5/3 = 0.615 lies below the laden one.
+    const base = fixedSplitDesign({ rules: ['eu-appendix/lock-order'] });
+    const d = { ...base, load_states: [...base.load_states, { id: 'empty', label: 'Unladen', kind: 'unladen' as const, mass_kg: 1200, front_axle_kg: 638, cg_height_m: 0.5 }] };
     const band = splitBand(d, sizingCurveRules(d));
     const primary = band.per_rule[0]!.branches.find((b) => b.id === 'primary')!;
     expect(primary.intervals[0]![0]).toBeCloseTo(PSI + 0.5 * CHI, 9);

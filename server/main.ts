@@ -3,6 +3,7 @@
  * binding to any other address needs an explicit HOST and prints a warning.
  */
 import { buildApp } from './app.ts';
+import { warmStaticAssets } from './plugins/precompressed-static.ts';
 
 export const DEFAULT_PORT = 3000;
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
@@ -23,6 +24,7 @@ if (!LOOPBACK.has(host)) {
 const app = buildApp({ logger: process.env.LOG === '1' });
 try {
   await app.listen({ host, port });
+  void warmStaticAssets(); // compress every asset once now, in zlib's thread pool, rather than on its first request
   const shown = host.includes(':') ? `[${host}]` : host;
   console.log(`Lockstep workbench: http://${shown}:${app.server.address() && typeof app.server.address() === 'object' ? (app.server.address() as { port: number }).port : port}/`);
 } catch (e) {

@@ -9,6 +9,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { constants as zlibConstants } from 'node:zlib';
 import compress from '@fastify/compress';
 import formbody from '@fastify/formbody';
 import helmet from '@fastify/helmet';
@@ -86,7 +87,9 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
     strictTransportSecurity: false,
     crossOriginEmbedderPolicy: false,
   });
-  app.register(compress, { threshold: 1024 });
+  // dynamic answers: the fastest levels (CPU matters more than a few per cent of bytes; kept answers and static
+  // files are compressed once elsewhere, server/response-cache.ts and server/plugins/precompressed-static.ts)
+  app.register(compress, { threshold: 1024, brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 1 } }, zlibOptions: { level: 1 } });
   app.register(formbody, { bodyLimit: BODY_LIMIT });
 
   // every asset from memory, compressed once per process (server/plugins/precompressed-static.ts)

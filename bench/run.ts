@@ -4,13 +4,16 @@
  * its own figures; add a line to `benchmarks` to register a new one. Benchmarks only print: timing is
  * never asserted in tests (the machine is shared).
  */
+import { cpus, loadavg } from 'node:os';
+
 type Benchmark = { summary: string; load: () => Promise<{ run: () => void | Promise<void> }> };
 
 const benchmarks: Record<string, Benchmark> = {
   engine: { summary: 'engine evaluation of the demo design against a closed-form floor (issue 2)', load: () => import('./engine.ts') },
   evaluate: { summary: 'full evaluate() of the demo design with curves, and its costliest blocks (issue 3)', load: () => import('./evaluate.ts') },
   sizing: { summary: 'exact split band vs brute-force scan; Monte Carlo samples/s (issue 5)', load: () => import('./sizing.ts') },
-  http: { summary: 'recompute endpoint under autocannon (64 connections, 10 s) and page weight', load: () => import('./http.ts') },
+  http: { summary: 'recompute, page and static asset under autocannon against a bare node:http server; memory; page weight (issue 17)', load: () => import('./http.ts') },
+  cli: { summary: 'lockstep start-up, one evaluation and 100 designs in one run against `node -e 0` (issue 17)', load: () => import('./cli.ts') },
 };
 
 async function main(argv: string[]): Promise<number> {
@@ -19,6 +22,8 @@ async function main(argv: string[]): Promise<number> {
     return 0;
   }
   const names = argv.length > 0 ? argv : Object.keys(benchmarks);
+  const load = loadavg().map((x) => x.toFixed(2)).join(' ');
+  console.log(`machine: ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown'}), load average ${load} (1, 5, 15 min), Node ${process.version}`);
   const unknown = names.filter((n) => !(n in benchmarks));
   if (unknown.length > 0) {
     console.error(`unknown benchmark ${unknown.map((n) => `"${n}"`).join(', ')}; known: ${Object.keys(benchmarks).join(', ')}`);
@@ -29,6 +34,7 @@ async function main(argv: string[]): Promise<number> {
     const mod = await benchmarks[name]!.load();
     await mod.run();
   }
+  console.log(`load average at the end ${loadavg().map((x) => x.toFixed(2)).join(' ')}`);
   return 0;
 }
 

@@ -2,13 +2,7 @@
  * The `lockstep` command line. Commands write through a CommandOutput so tests can run them in
  * process; the process wrapper (bin/lockstep.mjs) maps the returned code to the exit status.
  */
-import { CAUTION } from '../core/index.ts';
-import { demoCommand } from './commands/demo.ts';
-import { cgLiftCommand } from './commands/cg-lift.ts';
-import { evaluateCommand } from './commands/evaluate.ts';
-import { sizeCommand } from './commands/size.ts';
-import { packetCommand } from './commands/packet.ts';
-import { storeCommand } from './commands/store.ts';
+import { CAUTION } from '../core/caution.ts';
 import { CliError } from './errors.ts';
 import { EXIT_CODES_TEXT } from './exit-code.ts';
 
@@ -19,13 +13,17 @@ export interface CommandOutput {
 
 type Command = (argv: string[], out: CommandOutput) => number | Promise<number>;
 
-const commands: Record<string, { run: Command; summary: string }> = {
-  evaluate: { run: evaluateCommand, summary: 'evaluate FILE [--at z1,z2,...] [--rules id,...] [--json] [--curves]   braking distribution, lock order and regulation checks' },
-  'cg-lift': { run: cgLiftCommand, summary: 'cg-lift FILE [--json]                                  CG height from axle-lift weighings, with uncertainty' },
-  packet: { run: packetCommand, summary: 'packet FILE --out packet.pdf [--date D] | packet --revision ID --out packet.pdf   evidence packet PDF' },
-  store: { run: storeCommand, summary: 'store list|save|show|history|diff|rename|duplicate|delete ...   saved designs (LOCKSTEP_DATA_DIR)' },
-  size: { run: sizeCommand, summary: 'size FILE [--json] [--samples N] [--seed S]                 split band, parts, valve, robustness (sizing assistant)' },
-  demo: { run: demoCommand, summary: 'demo                                                   print the demo design file' },
+// Each command is imported only when it runs: the packet (pdfkit) and the store (SQLite) are not loaded to evaluate.
+const commands: Record<string, { load: () => Promise<Command>; summary: string }> = {
+  evaluate: {
+    load: async () => (await import('./commands/evaluate.ts')).evaluateCommand,
+    summary: 'evaluate FILE|FOLDER ... [--at z1,z2,...] [--rules id,...] [--json] [--curves] [--report junit OUT.xml]   braking distribution, lock order and regulation checks',
+  },
+  'cg-lift': { load: async () => (await import('./commands/cg-lift.ts')).cgLiftCommand, summary: 'cg-lift FILE [--json]                                  CG height from axle-lift weighings, with uncertainty' },
+  packet: { load: async () => (await import('./commands/packet.ts')).packetCommand, summary: 'packet FILE --out packet.pdf [--date D] | packet --revision ID --out packet.pdf   evidence packet PDF' },
+  store: { load: async () => (await import('./commands/store.ts')).storeCommand, summary: 'store list|save|show|history|diff|rename|duplicate|delete ...   saved designs (LOCKSTEP_DATA_DIR)' },
+  size: { load: async () => (await import('./commands/size.ts')).sizeCommand, summary: 'size FILE [--json] [--samples N] [--seed S]                 split band, parts, valve, robustness (sizing assistant)' },
+  demo: { load: async () => (await import('./commands/demo.ts')).demoCommand, summary: 'demo                                                   print the demo design file' },
 };
 
 export function usage(): string {
@@ -36,7 +34,7 @@ export function usage(): string {
     '',
     ...Object.values(commands).map((c) => `  lockstep ${c.summary}`),
     '',
-    `${EXIT_CODES_TEXT} lockstep packet writes the packet and exits with the verdict's code too.`,
+    `${EXIT_CODES_TEXT} lockstep packet writes the packet and exits with the verdict's code too. For several files: the worst of them (2, then 1, then 3, then 0).`,
     `Caution: ${CAUTION}`,
   ].join('\n');
 }
@@ -53,7 +51,7 @@ export async function runCli(argv: string[], out: CommandOutput): Promise<number
     return 2;
   }
   try {
-    return await cmd.run(rest, out);
+    return await (await cmd.load())(rest, out);
   } catch (e) {
     if (e instanceof CliError) {
       out.stderr([`lockstep ${name}: ${e.message} [${e.code}]`, ...e.details.map((d) => `  - ${d}`)].join('\n'));

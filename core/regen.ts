@@ -25,6 +25,7 @@ import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
 import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
+import { SIMULTANEOUS_LOCK_DZ } from './constants.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
 import { type CurveRule, type RuleStatus } from './rules/index.ts';
 import { selectDesignRules } from './rules/light-n1.ts';
@@ -350,8 +351,20 @@ function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrd
 }
 
 /**
- * Largest R in [0, k·P] for which the lock on surface k stays allowed (bisection; adding force to the
- * driven axle moves its lock monotonically earlier). Null when even k·P keeps it allowed.
+ * Largest R in [0, k·P] for which the first lock on surface k stays allowed; null when even k·P keeps it
+ * allowed, 0 when it is not allowed without regeneration. Solved exactly, piece by piece (no search):
+ *
+ * With regeneration R the distribution is a lower branch that does not depend on R (pure regeneration for
+ * regen_first, T = (s, 1 − s)·P z; for fixed_proportion the friction with q·T_friction added,
+ * z = (1 + q) z_f) up to the join z_J(R) (R/P, or R(1 + q)/(qP)), then the friction distribution shifted by
+ * R: at friction rate z_f, z = z_f + R/P and T_i = T_i,f(z_f) + s_i R. On the shifted part axle i reaches k
+ * where G_i(z_f) + c_i R = 0, with G_1 = T_1,f − k(P1 + χP z_f), c_1 = s − kχ and G_2 = T_2,f − k(P2 − χP z_f),
+ * c_2 = (1 − s) + kχ (the axle loads of 71/320/EEC Annex II Appendix 3.1.3 with z = z_f + R/P). So each
+ * axle's lock rate is piecewise linear in R, its pieces ending where the level −c_i R passes a breakpoint
+ * value of G_i, where the join passes the lower branch's own lock, or (fixed_proportion) where the cap passes
+ * a friction breakpoint. On each piece the lock rates are fitted exactly from two points and the conditions
+ * of a disallowed rear-first lock (lockAllowed; "both" within SIMULTANEOUS_LOCK_DZ, none beyond lift-off)
+ * are linear inequalities in R: the first R where they hold is the answer.
  */
 export function maxAllowedRegenForce(
   loads: AxleLoadModel,
@@ -364,33 +377,131 @@ export function maxAllowedRegenForce(
   // A surface outside the rule's range is never judged: every force keeps it allowed.
   if (lockAllowed(rule, k, 'rear', 0)) return null;
   const hi = k * friction.P;
-  if (!lockAllowedWith(loads, friction, k, frontShare, blending, rule, 0)) return 0;
-  if (lockAllowedWith(loads, friction, k, frontShare, blending, rule, hi)) return null;
-  let lo = 0;
-  let up = hi;
-  for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
-    const mid = (lo + up) / 2;
-    if (lockAllowedWith(loads, friction, k, frontShare, blending, rule, mid)) lo = mid;
-    else up = mid;
+  const sv = surfaceLockSolver(loads, friction, k, frontShare, blending);
+  const disallowedAt = (R: number) => {
+    const zR = sv.rate(2, R);
+    const zF = sv.rate(1, R);
+    return zR < loads.zLift && zR <= rule.z_to + 1e-12 && (zF >= loads.zLift || zF - zR >= SIMULTANEOUS_LOCK_DZ);
+  };
+  if (disallowedAt(0)) return 0;
+  const cuts = sv.breakpoints(hi);
+  for (let i = 0; i + 1 < cuts.length; i++) {
+    const a = cuts[i]!;
+    const b = cuts[i + 1]!;
+    if (!(b > a)) continue;
+    const r1 = a + 0.25 * (b - a);
+    const r2 = a + 0.75 * (b - a);
+    const rear = affine(r1, sv.rate(2, r1), r2, sv.rate(2, r2));
+    if (rear === null) continue; // the rear does not lock before lift-off on this piece
+    const front = affine(r1, sv.rate(1, r1), r2, sv.rate(1, r2));
+    // the rear locks before lift-off, at or below z_to ...
+    const span = intersect(atMost(a, b, rear, loads.zLift), atMost(a, b, rear, rule.z_to + 1e-12));
+    if (!span) continue;
+    // ... and the front does not lock within SIMULTANEOUS_LOCK_DZ after it (or not before lift-off)
+    const apart = front === null ? [span] : [intersect(span, atLeast(a, b, front, loads.zLift)), intersect(span, atLeast(a, b, minus(front, rear), SIMULTANEOUS_LOCK_DZ))];
+    let first = Infinity;
+    for (const x of apart) if (x && x[1] - x[0] > 1e-12 * Math.max(1, hi)) first = Math.min(first, x[0]);
+    if (first < Infinity) return first;
   }
-  return lo;
+  return null;
 }
 
-/** Whether the first lock on surface k is allowed with regenerative force R. */
-function lockAllowedWith(
-  loads: AxleLoadModel,
-  friction: Distribution,
-  k: number,
-  frontShare: number,
-  blending: RegenBlendingSpec,
-  rule: LockOrderRange,
-  R: number,
-): boolean {
-  const l = firstLock(loads, regenDistribution(friction, R, frontShare, blending), k);
-  return lockAllowed(rule, k, l.first_axle, l.braking_rate);
+/** z = c0 + c1 R through two points; null when the rate is infinite (no lock) at both. */
+type Affine = { c0: number; c1: number };
+function affine(r1: number, z1: number, r2: number, z2: number): Affine | null {
+  if (!Number.isFinite(z1) && !Number.isFinite(z2)) return null;
+  // one end infinite: the piece's ends were missed; take the finite value as constant (never met in the tests)
+  if (!Number.isFinite(z1) || !Number.isFinite(z2)) return { c0: Number.isFinite(z1) ? z1 : z2, c1: 0 };
+  const c1 = (z2 - z1) / (r2 - r1);
+  return { c0: z1 - c1 * r1, c1 };
+}
+const minus = (f: Affine, g: Affine): Affine => ({ c0: f.c0 - g.c0, c1: f.c1 - g.c1 });
+
+/** The part of [a, b] where sign·(f(R) − limit) ≥ 0, or null. */
+function where(a: number, b: number, f: Affine, limit: number, sign: 1 | -1): [number, number] | null {
+  const g0 = sign * (f.c0 - limit);
+  const g1 = sign * f.c1;
+  if (g1 === 0) return g0 >= 0 ? [a, b] : null;
+  const root = -g0 / g1;
+  const lo = g1 > 0 ? Math.max(a, root) : a;
+  const up = g1 > 0 ? b : Math.min(b, root);
+  return up >= lo ? [lo, up] : null;
+}
+const atMost = (a: number, b: number, f: Affine, limit: number) => where(a, b, f, limit, -1);
+const atLeast = (a: number, b: number, f: Affine, limit: number) => where(a, b, f, limit, 1);
+function intersect(x: [number, number] | null, y: [number, number] | null): [number, number] | null {
+  if (!x || !y) return null;
+  const lo = Math.max(x[0], y[0]);
+  const up = Math.min(x[1], y[1]);
+  return up >= lo ? [lo, up] : null;
 }
 
-/** Bisections for the largest allowed regenerative force stop within this, N (far below what a controller resolves). */
+interface SurfaceLockSolver {
+  /** Braking rate at which axle 1 (front) or 2 (rear) first reaches k with regenerative force R (Infinity: never; may lie beyond lift-off). */
+  rate(axle: 1 | 2, R: number): number;
+  /** 0, the forces in (0, hi) where a lock rate changes its linear piece, and hi, ascending. */
+  breakpoints(hi: number): number[];
+}
+
+function surfaceLockSolver(loads: AxleLoadModel, friction: Distribution, k: number, s: number, blending: RegenBlendingSpec): SurfaceLockSolver {
+  const P = friction.P;
+  const chiP = loads.chi * P;
+  const segs = segments(friction);
+  const q = blending.type === 'fixed_proportion' ? blending.proportion : 0;
+  // z_J(R) = join · R; the friction rate at the join is zfJoin · R
+  const join = blending.type === 'regen_first' ? 1 / P : (1 + q) / (q * P);
+  const zfJoin = blending.type === 'regen_first' ? 0 : 1 / (q * P);
+  const lower: Distribution =
+    blending.type === 'regen_first'
+      ? { P, z: [0, 1], t1: [0, s * P], t2: [0, (1 - s) * P] }
+      : { P, z: friction.z.map((z) => z * (1 + q)), t1: friction.t1.map((t, j) => t + s * q * P * friction.z[j]!), t2: friction.t2.map((t, j) => t + (1 - s) * q * P * friction.z[j]!) };
+  const low = firstLock(loads, lower, k);
+  const lowRate = [Infinity, low.front_lock_braking_rate ?? Infinity, low.rear_lock_braking_rate ?? Infinity];
+  // G_i(z_f) = g0 + g1 z_f on each friction segment; c_i the coefficient of R
+  const n0 = [0, loads.P1, loads.P2];
+  const n1 = [0, chiP, -chiP];
+  const c = [0, s - k * loads.chi, 1 - s + k * loads.chi];
+  const rate = (axle: 1 | 2, R: number): number => {
+    const zL = lowRate[axle]!;
+    if (zL <= join * R) return zL;
+    const zfMin = zfJoin * R;
+    const level = c[axle]! * R;
+    // not cut at lift-off (the caller compares with it), so that the rate stays linear on each piece
+    for (const sg of segs) {
+      if (sg.zTo < zfMin) continue;
+      const from = Math.max(sg.zFrom, zfMin);
+      const a = axle === 1 ? sg.a1 : sg.a2;
+      const b = axle === 1 ? sg.b1 : sg.b2;
+      const g0 = a - k * n0[axle]! + level;
+      const g1 = b - k * n1[axle]!;
+      if (g0 + g1 * from >= 0) return from + R / P;
+      if (g1 > 0) {
+        const root = -g0 / g1;
+        if (root <= sg.zTo) return root + R / P;
+      }
+    }
+    return Infinity;
+  };
+  const breakpoints = (hi: number): number[] => {
+    const out = [0, hi];
+    const add = (R: number) => {
+      if (R > 0 && R < hi) out.push(R);
+    };
+    for (const axle of [1, 2] as const) {
+      if (Number.isFinite(lowRate[axle]!)) add(lowRate[axle]! / join);
+      for (let j = 0; j < friction.z.length; j++) {
+        const zf = friction.z[j]!;
+        const G = (axle === 1 ? friction.t1[j]! : friction.t2[j]!) - k * (n0[axle]! + n1[axle]! * zf);
+        if (c[axle] !== 0) add(-G / c[axle]!);
+        if (zfJoin > 0) add(zf / zfJoin);
+      }
+    }
+    return out.sort((x, y) => x - y);
+  };
+  return { rate, breakpoints };
+}
+
+/** The bisection for the largest force passing the curve rules stops within this, N (far below what a controller resolves). */
 export const REGEN_FORCE_TOLERANCE_N = 0.5;
 
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);

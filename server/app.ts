@@ -5,14 +5,14 @@
  * Features register their routes below, one line each (see DEVELOPERS.md, "Workbench panels" and "Routes").
  */
 import { createHash } from 'node:crypto';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { constants as zlibConstants } from 'node:zlib';
 import compress from '@fastify/compress';
 import formbody from '@fastify/formbody';
 import helmet from '@fastify/helmet';
-import fastifyStatic from '@fastify/static';
 import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
 import type { AssetUrls } from '../views/layout.ts';
 import { messagePage, statusBlock } from '../views/pages/workbench.ts';
@@ -23,6 +23,7 @@ import { cgLiftRoutes } from './routes/cg-lift.ts';
 import { packetRoutes } from './routes/packet.ts';
 import { storeRoutes } from './routes/store.ts';
 import { requestGuard, SERVER_LIMITS } from './plugins/request-guard.ts';
+import { filesUnder, precompressedStatic } from './plugins/precompressed-static.ts';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
 const STATIC_DIR = join(ROOT, 'static');
@@ -42,14 +43,7 @@ function packageDir(name: string): { dir: string; version: string } {
 /** A hash of every file under static/, so app assets can be cached for a year under a changing URL. */
 function staticHash(dir: string): string {
   const h = createHash('sha256');
-  const walk = (d: string): void => {
-    for (const name of readdirSync(d).sort()) {
-      const p = join(d, name);
-      if (statSync(p).isDirectory()) walk(p);
-      else h.update(name).update(readFileSync(p));
-    }
-  };
-  walk(dir);
+  for (const f of filesUnder(dir)) h.update(f.slice(f.lastIndexOf('/') + 1)).update(readFileSync(join(dir, f)));
   return h.digest('hex').slice(0, 10);
 }
 
@@ -97,25 +91,19 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
     strictTransportSecurity: false,
     crossOriginEmbedderPolicy: false,
   });
-  app.register(compress, { threshold: 1024 });
+  // dynamic answers: the fastest levels (CPU matters more than a few per cent of bytes; kept answers and static
+  // files are compressed once elsewhere, server/response-cache.ts and server/plugins/precompressed-static.ts)
+  app.register(compress, { threshold: 1024, brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 1 } }, zlibOptions: { level: 1 } });
   app.register(formbody, { bodyLimit: BODY_LIMIT });
 
-  const year = { maxAge: '365d', immutable: true, index: false as const };
-  app.register(fastifyStatic, { root: STATIC_DIR, prefix: `${assets.app}/`, ...year });
-  app.register(fastifyStatic, {
-    root: join(htmx.dir, 'dist'),
-    prefix: `/vendor/htmx-${htmx.version}/`,
-    decorateReply: false,
-    allowedPath: (p) => p === '/htmx.min.js',
-    ...year,
-  });
-  app.register(fastifyStatic, {
-    root: plotly.dir,
-    prefix: `/vendor/plotly-${plotly.version}/`,
-    decorateReply: false,
-    allowedPath: (p) => p === '/plotly.min.js',
-    ...year,
-  });
+  // every asset from memory, compressed once per process (server/plugins/precompressed-static.ts)
+  app.register(async (scope) =>
+    precompressedStatic(scope, [
+      { prefix: `${assets.app}/`, root: STATIC_DIR, files: filesUnder(STATIC_DIR) },
+      { prefix: `/vendor/htmx-${htmx.version}/`, root: join(htmx.dir, 'dist'), files: ['htmx.min.js'] },
+      { prefix: `/vendor/plotly-${plotly.version}/`, root: plotly.dir, files: ['plotly.min.js'] },
+    ]),
+  );
 
   app.register(async (scope) => workbenchRoutes(scope, assets));
   app.register(async (scope) => cgLiftRoutes(scope));

@@ -37,10 +37,10 @@ const COMPRESS_THRESHOLD = 1024;
 
 /**
  * The encoding for a request's Accept-Encoding (q=0 refuses one): gzip at level 1 when accepted, else brotli at
- * quality 1. Both are the fastest settings (about 0.3 ms for a 50 KB answer against 0.8 ms for brotli quality 4)
+ * quality 1 (`prefer` 'br' puts brotli first: static files, compressed once). Both are the fastest settings (about 0.3 ms for a 50 KB answer against 0.8 ms for brotli quality 4)
  * and the answer is about 11 KB either way; on loopback or a LAN the CPU matters more than 15 % of the bytes.
  */
-export function chooseEncoding(accept: string | string[] | undefined): 'br' | 'gzip' | null {
+export function chooseEncoding(accept: string | string[] | undefined, prefer: 'br' | 'gzip' = 'gzip'): 'br' | 'gzip' | null {
   const text = Array.isArray(accept) ? accept.join(',') : (accept ?? '');
   const allowed = new Set<string>();
   for (const part of text.toLowerCase().split(',')) {
@@ -48,6 +48,7 @@ export function chooseEncoding(accept: string | string[] | undefined): 'br' | 'g
     const q = params.map((p) => /^\s*q=([\d.]+)\s*$/.exec(p)?.[1]).find((x) => x !== undefined);
     if (name && (q === undefined || Number(q) > 0)) allowed.add(name.trim());
   }
+  if (allowed.has(prefer)) return prefer;
   if (allowed.has('gzip')) return 'gzip';
   if (allowed.has('br')) return 'br';
   return null;

@@ -171,6 +171,8 @@ export function cachedResults(design: DesignFile, warnings: Warning[], units: Un
  * An upload (up to UPLOAD_LIMIT of text) is answered but not kept.
  */
 export const answers = new ResponseCache(200);
+/** The default page (GET /), one entry per unit system (two), apart from `answers` so that no recompute evicts it. */
+const pages = new ResponseCache(4);
 const CACHE_SOURCE_LIMIT = 64 * 1024;
 function cacheSource(route: string, posted: FormValues): string {
   if (posted._upload !== undefined) return '';
@@ -192,11 +194,15 @@ function validFromRequest(req: FastifyRequest): { ok: true; design: DesignFile; 
 export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
   app.get<{ Querystring: { units?: string } }>('/', async (req, reply) => {
     const units = unitsOf(req.query.units);
-    const design = demoDesign();
-    const r = readDesign(design);
-    const valid = r.ok ? view(r.design, r.warnings) : null;
     reply.header('cache-control', 'no-cache');
-    return sendHtml(reply, workbenchPage(assets, designToValues(design, units), units, valid, r.ok ? [] : r.errors));
+    // the same for everyone until they change it: rendered once per process and unit system, compressed once
+    const out = pages.answer(`page\n${assets.app}\n${assets.htmx}\n${assets.plotly}\n${units}`, () => {
+      const design = demoDesign();
+      const r = readDesign(design);
+      const valid = r.ok ? view(r.design, r.warnings) : null;
+      return { status: 200, body: workbenchPage(assets, designToValues(design, units), units, valid, r.ok ? [] : r.errors) };
+    });
+    return sendCached(req, reply, out);
   });
 
   app.post('/workbench/update', async (req, reply) => {

@@ -1,5 +1,5 @@
 /**
- * The real `lockstep` process (bin/lockstep.mjs through tsx), spawned once per case.
+ * The real `lockstep` process (bin/lockstep.mjs: the build in dist/, which `npm test` makes first), spawned once per case.
  * Source: design-file spec "Command line" (`npx lockstep demo > x.json && npx lockstep evaluate x.json
  * --json`, exit codes 0 / 2).
  */
@@ -37,7 +37,7 @@ describe('bin/lockstep.mjs', () => {
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(/load_states\[1\]\.mass_kg: "heavy" is not a number/);
-  }, 120000); // three process starts through tsx on a shared 2-core machine
+  }, 120000); // three process starts on a shared 2-core machine
 });
 
 describe('bin/lockstep.mjs and a reader that stops early', () => {

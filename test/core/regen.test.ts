@@ -55,8 +55,8 @@ describe('maxAllowedRegenForce (N1 range: the rear may not lock first up to z = 
     // 0.001 as "both", which is allowed; z_F − z_R = 0.001 at r = 0.161/2.986667 = 0.0539063.
     const rule = lockOrderRange('N1');
     const R = maxAllowedRegenForce(loads, friction, 0.3, 0, regenFirst, rule)!;
-    // The bisection stops within REGEN_FORCE_TOLERANCE_N = 0.5 N.
-    expect(Math.abs(R - (0.161 / 2.9866667) * P)).toBeLessThan(0.5);
+    // Solved exactly on the linear piece: 1.12 + 1.866667 = 1.12 + 28/15.
+    expect(Math.abs(R - (0.161 / (1.12 + 28 / 15)) * P)).toBeLessThan(1e-6);
     expect(R / P).toBeGreaterThan(0.0375 / 0.7);
     expect(firstLock(loads, regenDistribution(friction, R * 1.01, 0, regenFirst), 0.3).first_axle).toBe('rear');
   });

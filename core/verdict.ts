@@ -96,12 +96,23 @@ const MISSING_WORDS: Record<string, string> = {
   'regen.front_share': 'the share of the regenerative braking force on the front axle (all-wheel drive)',
   'parking_brake.holding_force_n':
     "the parking brake's holding force at the tyres, or its mechanism (lever ratio, efficiency, brake factor and effective radius)",
+  'heat.front_rotor_kg': 'the front rotor (or drum) mass (brake heat inputs)',
+  'heat.rear_rotor_kg': 'the rear rotor (or drum) mass (brake heat inputs)',
+  'towing.load_state': 'the load state the trailer is towed in (towing inputs)',
+  lightly_loaded: 'the lightly loaded vehicle: the unloaded vehicle and where the driver and instruments sit',
+  'lightly_loaded.added_behind_front_axle_m': 'where the driver and instruments of the lightly loaded vehicle sit (distance behind the front axle)',
+  'regen.category': 'the regeneration category (A: only on accelerator release; B: part of service braking)',
+  'regen.abs_controls_regen_axle': 'whether the antilock also controls the regenerative axle',
+  'regen.failure_warning': 'whether a regeneration failure that changes the braking distribution lights a warning',
+  'systems.abs': 'the antilock status (braking-aid status inputs)',
+  'systems.esc': 'the stability-control status (braking-aid status inputs)',
+  'systems.ebd': 'the electronic brake-force distribution status (braking-aid status inputs)',
 };
 
 function missingWords(c: CheckResult): string[] {
   return (c.missing_inputs ?? []).map((p) => {
     if (p === 'load_states') return `a load state of kind ${String(c.details?.needs_load_state_kind ?? 'needed by the rule')}`;
-    return MISSING_WORDS[p] ?? `an input the check needs (${p})`;
+    return Object.hasOwn(MISSING_WORDS, p) ? MISSING_WORDS[p]! : 'an input the check needs (named in the check\'s note)';
   });
 }
 

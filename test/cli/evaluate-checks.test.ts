@@ -28,7 +28,9 @@ describe('lockstep evaluate: checks decide the exit status', () => {
 
   // A parking brake declared to hold 3000 N at the tyres: more than m g sin θ = 1000 · 9.80665 · 0.18/√1.0324 = 1737 N
   // on the 18 % of the parking rule (hand derivation; the laden state is 1000 kg).
-  const parked = { parking_brake: { axle: 'rear' as const, control: 'hand' as const, holding_force_n: 3000 } };
+  // Rotor masses let the hot-performance estimate (Type-I heating sequence) be made; without them it is not checked.
+  const heat = { heat: { front_rotor_kg: 8, rear_rotor_kg: 6, max_speed_kmh: 130 } };
+  const parked = { parking_brake: { axle: 'rear' as const, control: 'hand' as const, holding_force_n: 3000 }, ...heat };
 
   it('a design passing every default check exits 0; the text report opens with the verdict, then shows verdicts, sources and the verify note', async () => {
     const r = await run(['evaluate', file('pass.json', splitDesign({ frontPistons: 7, rearPistons: 3, extra: parked }))]);
@@ -46,14 +48,14 @@ describe('lockstep evaluate: checks decide the exit status', () => {
   });
 
   it('the same design without a parking brake is incomplete: exit 3, the missing input named in words on the second line (issue 12 point 5)', async () => {
-    const r = await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3 }))]);
+    const r = await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3, extra: heat }))]);
     expect(r.code).toBe(3);
     const lines = r.stdout.split('\n');
     expect(lines[2]).toMatch(/^VERDICT INCOMPLETE: nothing fails, but not everything could be checked \(.*1 check could not be made/);
     expect(lines[3]).toMatch(/^  NOT CHECKED  .*Parking brake holds the laden vehicle on 18 %: not checked: needs the parking brake \(which axle it brakes/);
     expect(lines[3]).not.toMatch(/parking_brake/); // words, not the design-file path
     expect(r.stdout).toMatch(/NOT CHECKED\s+performance\/parking/);
-    const j = JSON.parse((await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3 })), '--json'])).stdout);
+    const j = JSON.parse((await run(['evaluate', file('noparking.json', splitDesign({ frontPistons: 7, rearPistons: 3, extra: heat })), '--json'])).stdout);
     expect(j.verdict.not_checked).toEqual([expect.objectContaining({ rule: 'performance/parking', load_state: 'laden', passed: null, missing_inputs: ['parking_brake'] })]);
   });
 

@@ -40,6 +40,7 @@ function solve(kneeA: number, kneeB: number) {
 function withSenses(senses: 'static' | 'dynamic' | undefined): DesignFile {
   const d = structuredClone(demoDesign());
   if (d.hydraulics.rear_valve.type !== 'load_sensing') throw new Error('demo valve changed');
+  d.hydraulics.rear_valve.ratio = 0.45; // the demo's valve as issue 12 measured it (the demo now has 0.5)
   if (senses) d.hydraulics.rear_valve.senses = senses;
   else delete d.hydraulics.rear_valve.senses;
   const r = readDesign(d);

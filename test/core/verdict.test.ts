@@ -159,13 +159,18 @@ describe('regeneration cases count like the checks (issue 12 point 4)', () => {
 });
 
 describe('the demo (core/demo.ts): fails on regeneration only, with its limit named', () => {
-  it('every regulation check passes, the regeneration cases unladen at 20 and 50 km/h fail, and deferred evaluation says the same', () => {
+  it('every regulation check passes, the regeneration cases (unladen at 20 and 50 km/h among them) fail, and deferred evaluation says the same', () => {
     const r = evaluate(demoDesign());
     expect(r.checks.every((c) => c.passed !== false)).toBe(true);
     expect(r.verdict.overall).toBe('fail');
-    expect(new Set(r.verdict.failed.map((f) => `${f.kind} ${f.load_state} ${f.speed_kmh}`))).toEqual(new Set(['regeneration unladen 20', 'regeneration unladen 50']));
-    for (const f of r.verdict.failed) expect(f.regen_limit_n).toBe(r.regen!.load_states[0]!.max_force_passing_checks_n);
-    expect(r.verdict.not_checked).toEqual([]); // the demo states its parking brake
+    expect(r.verdict.failed.length).toBeGreaterThan(0);
+    expect(r.verdict.failed.every((f) => f.kind === 'regeneration')).toBe(true);
+    const where = new Set(r.verdict.failed.map((f) => `${f.load_state} ${f.speed_kmh}`));
+    expect(where.has('unladen 20') && where.has('unladen 50')).toBe(true);
+    for (const f of r.verdict.failed) {
+      expect(f.regen_limit_n).toBe(r.regen!.load_states.find((s) => s.id === f.load_state)!.max_force_passing_checks_n);
+    }
+    expect(r.verdict.not_checked).toEqual([]); // the demo states its parking brake and rotor masses
     const deferred = evaluate(demoDesign(), { deferLimits: true });
     expect(JSON.stringify(deferred.verdict)).toBe(JSON.stringify(r.verdict));
     expect(JSON.stringify(deferred)).toBe(JSON.stringify(r));

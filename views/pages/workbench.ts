@@ -194,7 +194,7 @@ The left column holds the design: vehicle, load states, brakes, hydraulics with 
 surfaces to analyse. The right column answers, for each load state, which axle locks first on each surface and at
 what braking rate, with the curves behind it.</p>
 <p>The verdict at the top reads FAIL on purpose: the regenerative braking of the rear motor, as set in its controller,
-makes the rear axle lock first when the van is unladen at 20 and 50 km/h. Each line links to its check, and names the
+makes the rear axle lock first at the lower speeds, unladen and laden. Each line links to its check, and names the
 largest regenerative force that keeps the checks passing.</p>
 <p>Change any value and the results follow within a moment. A good design has the front axle lock first on every
 surface (the installed curve below the ideal curve in chart A, f1 above f2 in chart B). Start your own vehicle by

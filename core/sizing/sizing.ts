@@ -196,7 +196,7 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
       seed: mc.seed,
       distribution: mc.distribution,
       tolerances: rm.tol,
-      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults (core/sizing/sizing-schema.ts: pad friction ± 15 % per field-practice.md 1.2; the rest common practice, no source)',
+      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults (core/sizing/sizing-schema.ts: pad friction ± 15 % per field-practice.md 1.2; valve knee and ratio and threshold pressures from memory; the rest common practice, no source)',
       probability_of_failure: mc.probability_of_failure,
       probability_standard_error: mc.probability_standard_error,
       p05_margin: mc.p05_margin,

@@ -3,7 +3,8 @@
  * front axle load (per load state), dynamic tyre radius, the rear valve's knee and ratio, and the
  * brakes' threshold (push-out) pressures. For each perturbed vehicle the selected curve
  * rules are evaluated exactly (core/sizing/rule-margin.ts on the installed distribution, thresholds,
- * valve and balance bar included) and the smallest margin over every rule and load state kept.
+ * valve and balance bar included; a travel-sensing load-sensing valve's knee follows the braking rear
+ * axle load as in core/installed-distribution.ts) and the smallest margin over every rule and load state kept.
  *  - worst-case corners: every input at its ± limit. Pad friction and tyre radius are shared by all
  *    load states, CG height and axle load belong to each state, so the worst corner is the lowest,
  *    over the shared corners, of the lowest over states of each state's own 4 corners (exact, 4·S
@@ -30,11 +31,12 @@
 import { G_N } from '../constants.ts';
 import { brakeFactorAtFriction, NOMINAL_LINING_FRICTION } from '../drum-brake-factor.ts';
 import { MARGIN_TOLERANCE } from '../checks/curve-check.ts';
-import type { DesignFile } from '../design.ts';
-import type { Segment } from '../distribution.ts';
+import type { DesignFile, LoadState } from '../design.ts';
+import { type Segment, segments } from '../distribution.ts';
+import { dynamicSensingDistribution } from '../installed-distribution.ts';
 import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from '../rear-valve.ts';
 import { PA_PER_BAR } from '../constants.ts';
-import { stateModel } from '../state-model.ts';
+import { dynamicSensing, stateModel } from '../state-model.ts';
 import { mulberry32 } from './prng.ts';
 import { ruleMargin } from './rule-margin.ts';
 import type { Geometry } from './rule-margin.ts';
@@ -79,6 +81,7 @@ export interface Perturbation extends SharedPerturbation {
 }
 
 interface NominalState {
+  state: LoadState;
   massKg: number;
   frontKg: number;
   h: number;
@@ -108,6 +111,8 @@ export interface RobustnessModel {
   /** Which valve tolerances apply: the knee to every valve but none, the ratio to proportioning and load-sensing valves. */
   kneeApplies: boolean;
   ratioApplies: boolean;
+  /** A load-sensing valve that follows the rear axle load while braking (core/state-model.ts dynamicSensing). */
+  dynamic: boolean;
 }
 
 export const NO_PERTURBATION: Readonly<SharedPerturbation> = { mu1: 0, mu2: 0, radius: 0, knee: 0, ratio: 0, th1: 0, th2: 0 };
@@ -132,6 +137,7 @@ export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]
     const s = stateModel(design, st);
     const u = st.cg_height_uncertainty_m;
     return {
+      state: st,
       massKg: st.mass_kg,
       frontKg: st.front_axle_kg,
       h: st.cg_height_m,
@@ -148,18 +154,22 @@ export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]
     };
   });
   const rulesOf = states.map((_, i) => rules.flatMap((r, j) => (r.states.includes(i) ? [j] : [])));
-  const vt = h.rear_valve.type;
-  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: vt !== 'none', ratioApplies: vt === 'proportioning' || vt === 'load_sensing' };
+  const v = h.rear_valve;
+  const dynamic = v.type === 'load_sensing' && v.senses !== 'static';
+  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: v.type !== 'none', ratioApplies: v.type === 'proportioning' || v.type === 'load_sensing', dynamic };
 }
 
 // ---- the per-sample evaluation: no allocation in the loop ----
 
-const segBuf: Segment[] = Array.from({ length: 6 }, () => ({ zFrom: 0, zTo: 0, a1: 0, b1: 0, a2: 0, b2: 0 }));
+// up to 4 pressures and one step beyond (fixed knee), or 0, 2 thresholds, 20 table kinks, the knee crossing and one step beyond (travel-sensing valve)
+const BUF = 32;
+const segBuf: Segment[] = Array.from({ length: BUF }, () => ({ zFrom: 0, zTo: 0, a1: 0, b1: 0, a2: 0, b2: 0 }));
 const segView: Segment[] = [];
-const ps = new Float64Array(6);
-const zs = new Float64Array(6);
-const t1s = new Float64Array(6);
-const t2s = new Float64Array(6);
+const ps = new Float64Array(BUF);
+const zs = new Float64Array(BUF);
+const t1s = new Float64Array(BUF);
+const t2s = new Float64Array(BUF);
+const kinkBuf = new Float64Array(BUF);
 const geo: Geometry = { P1: 0, P2: 0, cP: 0, zLift: 0 };
 const law: ValveLaw = { knee: 0, ratio: 0 };
 
@@ -194,6 +204,81 @@ function fillSegments(P: number, G1: number, G2: number, th1: number, th2: numbe
     t1s[i] = a;
     t2s[i] = b;
   }
+  return pointsToSegments(n);
+}
+
+/** The state of one travel-sensing evaluation (module scope: no closures per sample). */
+const dyn = { P: 0, G1: 0, G2: 0, th1: 0, th2: 0, m2: 0, perZ: 0, kneeScale: 0, ratio: 0, table: [] as ReadonlyArray<readonly [number, number]> };
+const dynKnee = (z: number) => loadSensingKneeBar(dyn.table, dyn.m2 - z * dyn.perZ) * dyn.kneeScale;
+/** Braking rate at master pressure p with the rear line at p (below the knee). */
+const dynZs = (p: number) => (dyn.G1 * Math.max(0, p - dyn.th1) + dyn.G2 * Math.max(0, p - dyn.th2)) / dyn.P;
+
+/**
+ * dynamicSensingDistribution + segments (core/installed-distribution.ts) into buffers, for a travel-sensing
+ * valve whose thresholds lie below its lowest knee (every practical valve; null otherwise, and the caller
+ * builds the distribution). The knee K(z) = table(m2 − z·perZ)·kneeScale never meets a threshold then, so
+ * z − zs(K(z)) has its kinks at the table points only, and the breakpoints are 0, the thresholds, the table
+ * points and the knee crossing z*, as there. The forces at a breakpoint z (target force F = zP):
+ *  - z ≤ z*, rear line at master pressure p: F = G1 (p − t1)⁺ + G2 (p − t2)⁺, linear between the thresholds;
+ *  - z > z*, both brakes applied above the knee: F = G1 (p − t1) + G2 (K + r (p − K) − t2), so
+ *    p = (F + G1 t1 + G2 t2 − G2 K (1 − r)) / (G1 + G2 r).
+ */
+function fillDynamicSegments(): Segment[] | null {
+  const { P, G1, G2, th1, th2, table, m2, perZ, ratio } = dyn;
+  let nK = 0;
+  for (let i = table.length - 1; i >= 0; i--) {
+    const z = (m2 - table[i]![0]) / perZ;
+    if (z > 0) kinkBuf[nK++] = z; // ascending: the table rises in load
+  }
+  const last = nK ? kinkBuf[nK - 1]! : 0;
+  const kneeLast = dynKnee(last);
+  if (!(Math.max(th1, th2) < kneeLast)) return null;
+  // knee crossing: g(z) = z − zs(K(z)) bracketed over 0, the kinks and a point beyond where g > 0
+  let za = 0;
+  let ga = -dynZs(dynKnee(0));
+  let zStar = NaN;
+  for (let i = 0; i <= nK; i++) {
+    const zb = i < nK ? kinkBuf[i]! : last + dynZs(kneeLast) + 1;
+    const gb = zb - dynZs(dynKnee(zb));
+    if (ga <= 0 && gb > 0) {
+      zStar = za - (ga * (zb - za)) / (gb - ga);
+      break;
+    }
+    za = zb;
+    ga = gb;
+  }
+  nPs = 0;
+  addPressure(0); // a sorted set of braking rates here
+  addPressure(dynZs(th1));
+  addPressure(dynZs(th2));
+  for (let i = 0; i < nK; i++) addPressure(kinkBuf[i]!);
+  addPressure(zStar);
+  let n = nPs;
+  ps[n] = ps[n - 1]! + 1;
+  n++;
+  const lowT = Math.min(th1, th2);
+  const lowG = th1 <= th2 ? G1 : G2;
+  const fAtHighT = lowG * (Math.max(th1, th2) - lowT);
+  for (let i = 0; i < n; i++) {
+    const z = ps[i]!;
+    const F = z * P;
+    let p: number;
+    if (!(z > 0)) p = 0;
+    else if (z <= zStar) p = F <= fAtHighT && lowG > 0 ? lowT + F / lowG : (F + G1 * th1 + G2 * th2) / (G1 + G2);
+    else {
+      const K = dynKnee(z);
+      p = (F + G1 * th1 + G2 * th2 - G2 * K * (1 - ratio)) / (G1 + G2 * ratio);
+    }
+    const front = G1 * Math.max(0, p - th1);
+    zs[i] = z;
+    t1s[i] = front;
+    t2s[i] = F - front;
+  }
+  return pointsToSegments(n);
+}
+
+/** The linear pieces through the n points (zs, t1s, t2s), as core/distribution.ts segments. */
+function pointsToSegments(n: number): Segment[] {
   segView.length = 0;
   for (let j = 0; j < n - 1; j++) {
     const z0 = zs[j]!;
@@ -231,12 +316,37 @@ export function stateMargin(m: RobustnessModel, i: number, p: SharedPerturbation
   geo.zLift = P2 / (chi * P);
   const rf = 1 / (1 + p.radius);
   const v = m.design.hydraulics.rear_valve;
-  const kneeNominal = v.type === 'load_sensing' ? (loadSensingKneeBar(v.knee_bar_at_rear_axle_kg, s.massKg - frontKg) * PA_PER_BAR) / m.lambda : s.knee;
-  law.knee = kneeNominal * (1 + p.knee);
-  law.ratio = Math.min(1, s.ratio * (1 + p.ratio));
+  const G1 = s.G1 * s.gainAt1(p.mu1) * rf;
+  const G2 = s.G2 * s.gainAt2(p.mu2) * rf;
   const th1 = Math.max(0, s.threshold1 + p.th1);
   const th2 = Math.max(0, s.threshold2 + p.th2 / m.lambda);
-  const segs = fillSegments(P, s.G1 * s.gainAt1(p.mu1) * rf, s.G2 * s.gainAt2(p.mu2) * rf, th1, th2, law);
+  let segs: Segment[];
+  if (v.type === 'load_sensing' && m.dynamic) {
+    // the knee follows the rear axle load while braking (core/state-model.ts dynamicSensing), on the perturbed state
+    const ratio = Math.min(1, v.ratio * (1 + p.ratio));
+    const perZ = (s.massKg * h) / s.E;
+    dyn.P = P;
+    dyn.G1 = G1;
+    dyn.G2 = G2;
+    dyn.th1 = th1;
+    dyn.th2 = th2;
+    dyn.table = v.knee_bar_at_rear_axle_kg;
+    dyn.m2 = s.massKg - frontKg;
+    dyn.perZ = perZ;
+    dyn.kneeScale = (PA_PER_BAR / m.lambda) * (1 + p.knee);
+    dyn.ratio = ratio;
+    const fast = fillDynamicSegments();
+    if (fast) segs = fast;
+    else {
+      const base = dynamicSensing(m.design, { ...s.state, front_axle_kg: frontKg, cg_height_m: h }, m.lambda)!;
+      segs = segments(dynamicSensingDistribution({ P, G1, G2, threshold1: th1, threshold2: th2 }, { kneeAt: (z) => base.kneeAt(z) * (1 + p.knee), kinks: base.kinks, ratio }));
+    }
+  } else {
+    const kneeNominal = v.type === 'load_sensing' ? (loadSensingKneeBar(v.knee_bar_at_rear_axle_kg, s.massKg - frontKg) * PA_PER_BAR) / m.lambda : s.knee;
+    law.knee = kneeNominal * (1 + p.knee);
+    law.ratio = Math.min(1, s.ratio * (1 + p.ratio));
+    segs = fillSegments(P, G1, G2, th1, th2, law);
+  }
   let worst = Infinity;
   for (const j of rules) {
     const v = ruleMargin(m.rules[j]!.compiled, geo, segs);

@@ -16,6 +16,7 @@ import { mulberry32 } from '../../../core/sizing/prng.ts';
 import { monteCarlo, robustnessModel, sampleMargins, sensitivity, worstCorner } from '../../../core/sizing/robustness.ts';
 import { sizingCurveRules } from '../../../core/sizing/sizing-rules.ts';
 import { demoDesign } from '../../../core/demo.ts';
+import { designMargins } from '../../../core/sizing/design-margins.ts';
 import { fixedSplitDesign } from './fixtures.ts';
 
 /** Standard normal CDF via erf, Abramowitz & Stegun 7.1.26 (|error| ≤ 1.5e-7; coefficients from memory). */
@@ -234,5 +235,37 @@ describe('zero tolerances', () => {
     expect(wc.worst.smallest_margin).toBe(s.nominal);
     expect(s.ranking.map((r) => r.input)).toEqual(expect.arrayContaining(['valve_knee', 'valve_ratio', 'threshold_front', 'threshold_rear']));
     for (const r of s.ranking) expect(r.effect).toBe(0);
+  });
+});
+
+describe('a travel-sensing load-sensing valve', () => {
+  it("the perturbed vehicles are judged on the engine's dynamic distribution (knee following the braking rear load)", () => {
+    // The robustness analysis builds the distribution of a travel-sensing valve in its own buffers; each
+    // one-at-a-time case must give the smallest margin the curve checks give (core/checks/curve-check.ts on the
+    // engine's distribution, core/installed-distribution.ts, itself checked by hand in its own tests) for the
+    // design with that input changed in the file. The demo's valve senses travel (the default).
+    const d = demoDesign();
+    expect(d.hydraulics.rear_valve.type).toBe('load_sensing');
+    d.tolerances = { ...noTolerances, valve_knee_pct: 10, valve_ratio_pct: 5, front_axle_kg: 40, cg_height_m: 0.08, threshold_rear_bar: 0.5 };
+    const rules = sizingCurveRules(d);
+    const s = sensitivity(robustnessModel(d, rules));
+    const engine = (f: (x: DesignFile) => void) => {
+      const c = structuredClone(d);
+      f(c);
+      return designMargins(c, rules).smallest_margin!;
+    };
+    expect(s.nominal!).toBeCloseTo(engine(() => {}), 9);
+    const at = (input: string) => s.ranking.find((r) => r.input === input)!;
+    const valve = (x: DesignFile) => x.hydraulics.rear_valve as Extract<DesignFile['hydraulics']['rear_valve'], { type: 'load_sensing' }>;
+    expect(at('valve_knee').margin_at_plus!).toBeCloseTo(engine((x) => (valve(x).knee_bar_at_rear_axle_kg = valve(x).knee_bar_at_rear_axle_kg.map(([kg, b]) => [kg, 1.1 * b]))), 9);
+    expect(at('valve_knee').margin_at_minus!).toBeCloseTo(engine((x) => (valve(x).knee_bar_at_rear_axle_kg = valve(x).knee_bar_at_rear_axle_kg.map(([kg, b]) => [kg, 0.9 * b]))), 9);
+    expect(at('valve_ratio').margin_at_minus!).toBeCloseTo(engine((x) => (valve(x).ratio *= 0.95)), 9);
+    expect(at('front_axle_load').margin_at_plus!).toBeCloseTo(engine((x) => x.load_states.forEach((st) => (st.front_axle_kg += 40))), 9);
+    expect(at('cg_height').margin_at_plus!).toBeCloseTo(engine((x) => x.load_states.forEach((st) => (st.cg_height_m += 0.08))), 9);
+    expect(at('threshold_rear').margin_at_plus!).toBeCloseTo(engine((x) => (x.axles.rear.brake.threshold_pressure_bar += 0.5)), 9);
+    // and the static reading differs: the travel-sensing knee is not the static one here
+    const st = structuredClone(d);
+    (st.hydraulics.rear_valve as { senses?: string }).senses = 'static';
+    expect(Math.abs(sensitivity(robustnessModel(st, rules)).nominal! - s.nominal!)).toBeGreaterThan(0.01);
   });
 });

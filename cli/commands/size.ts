@@ -89,10 +89,10 @@ export function sizingText(r: SizingResult): string {
   }
   const rb = r.robustness;
   out.push(`Robustness of ${rb.applies_to}`);
-  out.push(`  (${rb.samples} samples, seed ${rb.seed}, ${rb.distribution}; tolerances: pad friction ±${rb.tolerances.pad_friction_front_pct} % front / ±${rb.tolerances.pad_friction_rear_pct} % rear, CG height ±${rb.tolerances.cg_height_m} m, front axle ±${rb.tolerances.front_axle_kg} kg, tyre radius ±${rb.tolerances.tyre_radius_pct} %):`);
+  out.push(`  (${rb.samples} samples, seed ${rb.seed}, ${rb.distribution}; tolerances: pad friction ±${rb.tolerances.pad_friction_front_pct} % front / ±${rb.tolerances.pad_friction_rear_pct} % rear, CG height ±${rb.tolerances.cg_height_m} m, front axle ±${rb.tolerances.front_axle_kg} kg, tyre radius ±${rb.tolerances.tyre_radius_pct} %, rear valve knee ±${rb.tolerances.valve_knee_pct} % and ratio ±${rb.tolerances.valve_ratio_pct} %, threshold pressure ±${rb.tolerances.threshold_front_bar} bar front / ±${rb.tolerances.threshold_rear_bar} bar rear):`);
   out.push(`  probability that a rule fails in some load state: ${(100 * rb.probability_of_failure).toFixed(2)} % (± ${(100 * rb.probability_standard_error).toFixed(2)} %)`);
   out.push(`  5th-percentile smallest margin: ${fmt(rb.p05_margin, 4)}; worst corner: ${fmt(rb.worst_corner.smallest_margin, 4)} (${rb.failing_corners} of ${rb.corners} corners fail)`);
-  out.push(`  matters most: ${rb.most_influential ?? '—'} (${rb.sensitivity.map((s) => `${s.input} ${s.effect.toFixed(4)}`).join(', ')})`);
+  out.push(`  matters most: ${rb.most_influential ? rb.sensitivity[0]!.label : '—'} (${rb.sensitivity.map((s) => `${s.label} ${s.effect.toFixed(4)}`).join('; ')})`);
   out.push('');
   for (const m of r.messages) out.push(`Note: ${m}`);
   if (r.verify_note) out.push(`Rules marked partly verified or from memory: ${r.verify_note}.`);

@@ -22,6 +22,16 @@ export const Tolerances = z.strictObject({
   front_axle_kg: num(0, 5000).optional(),
   /** Dynamic tyre radius, ± per cent (the same tyres front and rear drawn together). */
   tyre_radius_pct: num(0, 20).optional(),
+  /**
+   * Rear valve knee, ± per cent of the knee pressure (limiting and proportioning valves; a load-sensing
+   * valve's whole knee table moves together, as a change of its spring preload would move it).
+   */
+  valve_knee_pct: num(0, 50).optional(),
+  /** Rear valve ratio above the knee, ± per cent (proportioning and load-sensing valves; never above 1). */
+  valve_ratio_pct: num(0, 50).optional(),
+  /** Threshold (push-out) pressure of the front and rear brakes, ± bar (never below 0). */
+  threshold_front_bar: num(0, 10).optional(),
+  threshold_rear_bar: num(0, 10).optional(),
   /** Shape of the Monte Carlo draws inside the ± limits. */
   distribution: z.enum(['normal', 'uniform']).optional(),
 });
@@ -33,7 +43,11 @@ export type Tolerances = z.infer<typeof Tolerances>;
  *    (New Zealand gazette notice, field-practice.md section 1.2); one market's pad sheet states
  *    ± 0.05 on about 0.4 (field-practice.md section 3), about ± 12 %;
  *  - CG height ± 0.05 m, front axle load ± 20 kg (weighbridge reading and load placement), tyre
- *    radius ± 2 % (wear and pressure): common practice, no source.
+ *    radius ± 2 % (wear and pressure): common practice, no source;
+ *  - rear valve knee ± 10 % and ratio ± 5 %: from memory (valve makers' data sheets state knee
+ *    pressures to roughly ± 10 %), not from a named source;
+ *  - threshold pressure ± 0.3 bar front, ± 0.5 bar rear: from memory (a disc's push-out pressure is a
+ *    few tenths of a bar, a drum's return-spring threshold spreads more), not from a named source.
  */
 export const DEFAULT_TOLERANCES = {
   pad_friction_front_pct: 15,
@@ -41,6 +55,10 @@ export const DEFAULT_TOLERANCES = {
   cg_height_m: 0.05,
   front_axle_kg: 20,
   tyre_radius_pct: 2,
+  valve_knee_pct: 10,
+  valve_ratio_pct: 5,
+  threshold_front_bar: 0.3,
+  threshold_rear_bar: 0.5,
   distribution: 'normal',
 } as const satisfies Required<Tolerances>;
 

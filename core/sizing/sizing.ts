@@ -115,6 +115,9 @@ function balanceBarSizing(design: DesignFile, rules: readonly SizingRule[], band
   };
 }
 
+/** A rear valve type in words for people (the text report and the page print `applies_to`). */
+const VALVE_WORDS: Readonly<Record<DesignFile['hydraulics']['rear_valve']['type'], string>> = { none: 'no valve', limiting: 'limiting valve', proportioning: 'proportioning valve', load_sensing: 'load-sensing valve' };
+
 export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): SizingResult {
   const rules = sizingCurveRules(design, opts.rules);
   const selection = rules.map((r) => r.compiled.rule.id);
@@ -161,7 +164,7 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
       appliesTo = `the design with the recommended change: ${recOption.change}`;
     } else if (valveRec?.passes) {
       assessed = applySizingChange(design, 'hydraulics.rear_valve', valveRec.valve);
-      appliesTo = `the design with the recommended rear valve (${valveRec.valve.type})`;
+      appliesTo = `the design with the recommended rear valve (${VALVE_WORDS[valveRec.valve.type]})`;
     } else if (barRec?.with_recommended.passes) {
       assessed = applySizingChange(design, barRec.path, barRec.recommended_setting_front_share);
       appliesTo = 'the design with the balance bar locked at the recommended setting';
@@ -196,7 +199,7 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
       seed: mc.seed,
       distribution: mc.distribution,
       tolerances: rm.tol,
-      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults (core/sizing/sizing-schema.ts: pad friction ± 15 % per field-practice.md 1.2; the rest common practice, no source)',
+      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults (core/sizing/sizing-schema.ts: pad friction ± 15 % per field-practice.md 1.2; valve knee and ratio and threshold pressures from memory; the rest common practice, no source)',
       probability_of_failure: mc.probability_of_failure,
       probability_standard_error: mc.probability_standard_error,
       p05_margin: mc.p05_margin,

@@ -11,6 +11,7 @@ import { designToValues, readForm } from '../../server/forms/design-form.ts';
 import { applySizingOp, SIZING_UNDO_FIELD, sizingOp } from '../../server/forms/sizing-apply.ts';
 import { update } from '../../server/routes/workbench.ts';
 import { buildApp } from '../../server/app.ts';
+import { fieldsWithMessages } from '../../views/pages/workbench.ts';
 
 function failing(): DesignFile {
   const d = demoDesign();
@@ -67,6 +68,34 @@ describe('sizing panel', () => {
     const eq = undo.indexOf('=');
     const back = readForm(applySizingOp(applied, sizingOp(undo.slice(0, eq), JSON.parse(undo.slice(eq + 1))), 'metric'), 'metric');
     expect(back.ok && back.design).toEqual(readForm(before, 'metric').ok && (readForm(before, 'metric') as { design: unknown }).design);
+  });
+
+  it('the tolerances inputs have fields for the valve knee and ratio and the thresholds; the ranking names inputs in words', async () => {
+    // round trip: the fields carry the design's tolerances back unchanged (the US page shows the thresholds in psi)
+    const d = demoDesign();
+    d.tolerances = { valve_knee_pct: 12, valve_ratio_pct: 4, threshold_front_bar: 0.2, threshold_rear_bar: 0.7 };
+    for (const units of ['metric', 'us'] as const) {
+      const values = designToValues(d, units);
+      const { names, labels } = fieldsWithMessages(values, units);
+      for (const k of ['valve_knee_pct', 'valve_ratio_pct', 'threshold_front_bar', 'threshold_rear_bar']) expect(names.has(`tolerances.${k}`)).toBe(true);
+      expect(labels.get('tolerances.threshold_rear_bar')).toBe('Threshold pressure, rear brakes ±');
+      const back = readForm(values, units);
+      expect(back.ok).toBe(true);
+      if (!back.ok) return;
+      expect(back.design.tolerances!.valve_knee_pct).toBe(12);
+      expect(back.design.tolerances!.valve_ratio_pct).toBe(4);
+      expect(back.design.tolerances!.threshold_front_bar).toBeCloseTo(0.2, 6);
+      expect(back.design.tolerances!.threshold_rear_bar).toBeCloseTo(0.7, 6);
+    }
+    const app = buildApp();
+    try {
+      const body = (await app.inject({ method: 'POST', url: '/workbench/panel/sizing', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: new URLSearchParams({ ...designToValues(d, 'metric'), _robust: '1' }).toString() })).body;
+      expect(body).toContain('<th scope="row">rear valve knee pressure</th>');
+      expect(body).toContain('<th scope="row">threshold pressure, rear brakes</th>');
+      expect(body).not.toMatch(/<th scope="row">(valve_knee|threshold_rear|pad_friction_front)<\/th>/);
+    } finally {
+      await app.close();
+    }
   });
 
   it('an apply to a path no proposal uses is refused with APP_ERR_UNKNOWN_OPERATION', () => {

@@ -130,15 +130,15 @@ export const ROBUST_CONTROL = '_robust';
 function robustnessSection(r: SizingResult, asked: boolean): SafeHtml {
   if (!asked) {
     return html`<h3>Robustness</h3>
-<p>How often a rule fails when pad friction, CG height, axle load and tyre radius stray within their tolerances: ${PAGE_SAMPLES} perturbed vehicles, worst corner and sensitivity. Computed on request for the design as it is now.</p>
+<p>How often a rule fails when pad friction, CG height, axle load, tyre radius, the rear valve's knee and ratio and the threshold pressures stray within their tolerances: ${PAGE_SAMPLES} perturbed vehicles, worst corner and sensitivity. Computed on request for the design as it is now.</p>
 <p><button type="button" class="secondary run-robust" hx-post="/workbench/panel/sizing" hx-include="#design-form" hx-vals='{"${ROBUST_CONTROL}": "1"}' hx-target="#deferred-sizing" hx-swap="outerHTML">Run robustness analysis</button></p>`;
   }
   const rb = r.robustness;
   return html`<h3>Robustness</h3>
-<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ?? '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
+<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ? rb.sensitivity[0]!.label : '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
 ${chartBlock('chart-sizing-histogram', histogram(r), html`Red line: margin 0 (below it a rule fails); dotted: 5th percentile.`, 'Histogram of the smallest margin over the perturbed vehicles')}
 <div class="scroll"><table class="data"><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
-<tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.input}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>`;
+<tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.label}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>`;
 }
 
 export function sizingResults(ctx: ResultContext): SafeHtml {
@@ -175,12 +175,16 @@ function sizingInputs(ctx: InputContext): SafeHtml {
     }
   }
   return html`${undoButton}
-<p class="hint">How well the inputs are known, for the robustness analysis; empty fields take the defaults (pad friction ±15 %, CG height ±0.05 m, front axle ±20 kg, tyre radius ±2 %).</p>
+<p class="hint">How well the inputs are known, for the robustness analysis; empty fields take the defaults (pad friction ±15 %, CG height ±0.05 m, front axle ±20 kg, tyre radius ±2 %, rear valve knee ±10 % and ratio ±5 %, threshold pressure ±0.3 bar front and ±0.5 bar rear; the valve and threshold defaults are from memory).</p>
 ${numberField(ctx, `${T}.pad_friction_front_pct`, 'Pad friction, front ±', { optional: true, unitText: '%', width: 's' })}
 ${numberField(ctx, `${T}.pad_friction_rear_pct`, 'Pad friction, rear ±', { optional: true, unitText: '%', width: 's' })}
 ${numberField(ctx, `${T}.cg_height_m`, 'CG height ±', { optional: true, width: 's' })}
 ${numberField(ctx, `${T}.front_axle_kg`, 'Front axle load ±', { optional: true, width: 's' })}
 ${numberField(ctx, `${T}.tyre_radius_pct`, 'Tyre radius ±', { optional: true, unitText: '%', width: 's' })}
+${numberField(ctx, `${T}.valve_knee_pct`, 'Rear valve knee pressure ±', { optional: true, unitText: '%', width: 's', hint: 'limiting, proportioning and load-sensing valves; a load-sensing valve\'s whole knee table moves together' })}
+${numberField(ctx, `${T}.valve_ratio_pct`, 'Rear valve ratio above the knee ±', { optional: true, unitText: '%', width: 's', hint: 'proportioning and load-sensing valves' })}
+${numberField(ctx, `${T}.threshold_front_bar`, 'Threshold pressure, front brakes ±', { optional: true, width: 's' })}
+${numberField(ctx, `${T}.threshold_rear_bar`, 'Threshold pressure, rear brakes ±', { optional: true, width: 's' })}
 ${selectField(ctx, `${T}.distribution`, 'Distribution inside the ± limits', [
   ['', 'normal (default)'],
   ['normal', 'normal, ± = 2 standard deviations'],

@@ -111,6 +111,17 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
     d.p2!.push(f.p2);
   };
   push(0);
+  // at z = 0 the line pressure rises to the first threshold with no force yet (as installedDistribution lists it)
+  law.knee = sensing.kneeAt(0);
+  const start: ForcesAt = { front: 0, rear: 0, p: Math.min(h.threshold1, masterPressureForRear(law, h.threshold2)), p2: 0 };
+  start.p2 = rearPressure(law, start.p);
+  if (start.p > 0 && Number.isFinite(start.p)) {
+    d.z.push(0);
+    d.t1.push(0);
+    d.t2.push(0);
+    d.p!.push(start.p);
+    d.p2!.push(start.p2);
+  }
   // a threshold at or above some knee value is the only case with breakpoints not listed above
   const listed = Math.max(h.threshold1, h.threshold2) < kneeLast;
   for (let i = 1; i < zsSorted.length; i++) {
@@ -127,7 +138,7 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
   function refine(za: number, zb: number, depth: number) {
     if (!(zb > za)) return;
     const zm = (za + zb) / 2;
-    const fa = at(za);
+    const fa = za === 0 && start.p > 0 ? start : at(za);
     const fb = at(zb);
     const fm = at(zm);
     const off = (k: 'front' | 'rear' | 'p') => Math.abs(fm[k] - (fa[k] + fb[k]) / 2) > 1e-10 * Math.max(1, Math.abs(fb[k]));

@@ -86,4 +86,17 @@ describe('dynamic load-sensing valve', () => {
       expect(f.front + f.rear).toBeCloseTo(z * 3500 * g, 6);
     }
   });
+
+  it('just above z = 0 the line pressure already stands at the first threshold (T1 = G1 (p − t1), front alone)', () => {
+    // Hand derivation: below the rear threshold only the front brakes, z P = G1 (p − t1), so p = t1 + z P / G1;
+    // the pressure at z → 0 is the front threshold, not 0 (found by the T1 + T2 = z P property test).
+    const d = withSenses('dynamic');
+    d.axles.rear.brake.threshold_pressure_bar = 5;
+    const laden = stateModels(d)[1]!;
+    const z = 1e-4;
+    const f = forcesAt(laden.dist, z);
+    expect(f.rear).toBe(0);
+    expect(f.p).toBeCloseTo(0.5e5 + (z * 3500 * g) / G1, 3);
+    expect(f.front).toBeCloseTo(G1 * (f.p - 0.5e5), 9);
+  });
 });

@@ -5,7 +5,7 @@
  * valve knee, so the distribution in z is exact at those breakpoints and linear between them.
  */
 import type { Distribution, ForcesAt } from './distribution.ts';
-import { masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
 
 export interface HydraulicAxles {
   /** Vehicle weight P, N. */
@@ -45,11 +45,21 @@ export function installedDistribution(h: HydraulicAxles): Distribution {
  * dynamic rear load (kg), divided by `referTo` (λ of a balance bar, else 1). Knee pressures in Pa.
  */
 export interface DynamicSensing {
-  /** Knee pressure (Pa, referred to the master pressure) at braking rate z. */
-  kneeAt(z: number): number;
-  /** Braking rates at which kneeAt changes slope (the table points reached by the dynamic load), ascending. */
+  /** The valve's table: rear axle load (kg) against knee (bar). */
+  table: ReadonlyArray<readonly [number, number]>;
+  /** Rear static axle load, kg, and the rear load moved to the front per unit z, kg (χ·m). */
+  rearKg: number;
+  perZ: number;
+  /** Knee in Pa referred to the master pressure per bar of the table: 1e5 / λ (and any scaling applied). */
+  kneeScale: number;
+  /** Braking rates at which the knee changes slope (the table points reached by the dynamic load), ascending. */
   kinks: readonly number[];
   ratio: number;
+}
+
+/** Knee pressure (Pa, referred to the master pressure) at braking rate z. */
+export function kneeAtRate(s: DynamicSensing, z: number): number {
+  return loadSensingKneeBar(s.table, s.rearKg - z * s.perZ) * s.kneeScale;
 }
 
 /**
@@ -62,93 +72,105 @@ export interface DynamicSensing {
  * below the knee. z − zs(K(z)) is increasing (K falls as z rises) and piecewise linear, so z* is found
  * exactly by bracketing between its kinks and interpolating on the bracketing piece.
  */
-export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sensing: DynamicSensing): Distribution {
-  const zs = (p: number) => (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+export function dynamicSensingDistribution(h: Axles, sensing: DynamicSensing): Distribution {
+  // The helpers are module functions, not closures: this runs for every load state of every evaluation.
   const law: ValveLaw = { knee: 0, ratio: sensing.ratio };
-  const at = (z: number) => {
-    law.knee = sensing.kneeAt(z);
-    return staticForcesAt(h, law, z);
-  };
   // Knee crossing: kinks of g(z) = z − zs(K(z)) are the table kinks and where K(z) meets a threshold.
-  const g = (z: number) => z - zs(sensing.kneeAt(z));
   const cand = [0, ...sensing.kinks];
   const n0 = cand.length; // the table kinks are ascending, so K is linear between neighbours
   for (let i = 0; i + 1 < n0; i++) {
     const za = cand[i]!;
     const zb = cand[i + 1]!;
-    const ka = sensing.kneeAt(za);
-    const kb = sensing.kneeAt(zb);
+    const ka = kneeAtRate(sensing, za);
+    const kb = kneeAtRate(sensing, zb);
     if ((ka - h.threshold1) * (kb - h.threshold1) < 0) cand.push(za + ((h.threshold1 - ka) * (zb - za)) / (kb - ka));
     if ((ka - h.threshold2) * (kb - h.threshold2) < 0) cand.push(za + ((h.threshold2 - ka) * (zb - za)) / (kb - ka));
   }
   const last = cand[n0 - 1]!;
-  const kneeLast = sensing.kneeAt(last); // K is non-increasing in z (the schema keeps the knee rising with load): its lowest value
-  cand.push(last + zs(kneeLast) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
-  cand.sort((a, b) => a - b);
+  const kneeLast = kneeAtRate(sensing, last); // K is non-increasing in z (the schema keeps the knee rising with load): its lowest value
+  cand.push(last + rateBelowKnee(h, kneeLast) + 1); // beyond the last kink K is constant: g is linear there and positive at this z
+  cand.sort((x, y) => x - y);
   let zStar = NaN;
-  let ga = g(cand[0]!);
+  let ga = kneeGap(h, sensing, cand[0]!);
   for (let i = 0; i + 1 < cand.length; i++) {
     const za = cand[i]!;
     const zb = cand[i + 1]!;
-    const gb = g(zb);
+    const gb = kneeGap(h, sensing, zb);
     if (ga <= 0 && gb > 0) {
       zStar = za - (ga * (zb - za)) / (gb - ga);
       break;
     }
     ga = gb;
   }
-  const bps = [0, zs(h.threshold1), zs(h.threshold2), ...sensing.kinks, zStar].sort((a, b) => a - b);
+  const bps = [0, rateBelowKnee(h, h.threshold1), rateBelowKnee(h, h.threshold2), ...sensing.kinks, zStar].sort((x, y) => x - y);
   const zsSorted: number[] = [];
   for (const z of bps) if (Number.isFinite(z) && z >= 0 && z !== zsSorted[zsSorted.length - 1]) zsSorted.push(z);
   zsSorted.push(zsSorted[zsSorted.length - 1]! + 1);
   const d: Distribution = { P: h.P, z: [], t1: [], t2: [], p: [], p2: [] };
-  const push = (z: number) => {
-    const f = at(z);
-    d.z.push(z);
-    d.t1.push(f.front);
-    d.t2.push(f.rear);
-    d.p!.push(f.p);
-    d.p2!.push(f.p2);
-  };
-  push(0);
+  pushPoint(d, 0, forcesWithKneeAt(h, sensing, law, 0));
   // at z = 0 the line pressure rises to the first threshold with no force yet (as installedDistribution lists it)
-  law.knee = sensing.kneeAt(0);
+  law.knee = kneeAtRate(sensing, 0);
   const start: ForcesAt = { front: 0, rear: 0, p: Math.min(h.threshold1, masterPressureForRear(law, h.threshold2)), p2: 0 };
   start.p2 = rearPressure(law, start.p);
-  if (start.p > 0 && Number.isFinite(start.p)) {
-    d.z.push(0);
-    d.t1.push(0);
-    d.t2.push(0);
-    d.p!.push(start.p);
-    d.p2!.push(start.p2);
-  }
+  const hasStart = start.p > 0 && Number.isFinite(start.p);
+  if (hasStart) pushPoint(d, 0, start);
   // a threshold at or above some knee value is the only case with breakpoints not listed above
   const listed = Math.max(h.threshold1, h.threshold2) < kneeLast;
   for (let i = 1; i < zsSorted.length; i++) {
-    if (listed) push(zsSorted[i]!);
-    else refine(zsSorted[i - 1]!, zsSorted[i]!, 0);
+    if (listed) pushPoint(d, zsSorted[i]!, forcesWithKneeAt(h, sensing, law, zsSorted[i]!));
+    else refinePiece(h, sensing, law, d, hasStart ? start : null, zsSorted[i - 1]!, zsSorted[i]!, 0);
   }
   return d;
+}
 
-  /**
-   * Adds the breakpoint zb after za. With thresholds below the knee (every practical valve) the pieces
-   * are linear already; a threshold above the knee moves its own breakpoint with z, and those pieces are
-   * split until the midpoint of forces and pressure lies on the chord (to 1e-10 relative).
-   */
-  function refine(za: number, zb: number, depth: number) {
-    if (!(zb > za)) return;
-    const zm = (za + zb) / 2;
-    const fa = za === 0 && start.p > 0 ? start : at(za);
-    const fb = at(zb);
-    const fm = at(zm);
-    const off = (k: 'front' | 'rear' | 'p') => Math.abs(fm[k] - (fa[k] + fb[k]) / 2) > 1e-10 * Math.max(1, Math.abs(fb[k]));
-    if (depth < 40 && (off('front') || off('rear') || off('p'))) {
-      refine(za, zm, depth + 1);
-      refine(zm, zb, depth + 1);
-      return;
-    }
-    push(zb);
+type Axles = Omit<HydraulicAxles, 'valve'>;
+
+/** zs(p): the braking rate at line pressure p below the knee, [G1(p − t1)⁺ + G2(p − t2)⁺]/P. */
+function rateBelowKnee(h: Axles, p: number): number {
+  return (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+}
+
+/** g(z) = z − zs(K(z)): negative below the knee crossing, positive above. */
+function kneeGap(h: Axles, sensing: DynamicSensing, z: number): number {
+  return z - rateBelowKnee(h, kneeAtRate(sensing, z));
+}
+
+/** The forces at z with the knee of the dynamic rear load at z (law is reused as scratch). */
+function forcesWithKneeAt(h: Axles, sensing: DynamicSensing, law: ValveLaw, z: number): ForcesAt {
+  law.knee = kneeAtRate(sensing, z);
+  return staticForcesAt(h, law, z);
+}
+
+function pushPoint(d: Distribution, z: number, f: ForcesAt): void {
+  d.z.push(z);
+  d.t1.push(f.front);
+  d.t2.push(f.rear);
+  d.p!.push(f.p);
+  d.p2!.push(f.p2);
+}
+
+function offChord(fm: ForcesAt, fa: ForcesAt, fb: ForcesAt, k: 'front' | 'rear' | 'p'): boolean {
+  return Math.abs(fm[k] - (fa[k] + fb[k]) / 2) > 1e-10 * Math.max(1, Math.abs(fb[k]));
+}
+
+/**
+ * Adds the breakpoint zb after za. With thresholds below the knee (every practical valve) the pieces
+ * are linear already; a threshold above the knee moves its own breakpoint with z, and those pieces are
+ * split until the midpoint of forces and pressure lies on the chord (to 1e-10 relative). `start` is the
+ * point at z = 0 where the pressure stands at the first threshold (null when there is none).
+ */
+function refinePiece(h: Axles, sensing: DynamicSensing, law: ValveLaw, d: Distribution, start: ForcesAt | null, za: number, zb: number, depth: number): void {
+  if (!(zb > za)) return;
+  const zm = (za + zb) / 2;
+  const fa = za === 0 && start ? start : forcesWithKneeAt(h, sensing, law, za);
+  const fb = forcesWithKneeAt(h, sensing, law, zb);
+  const fm = forcesWithKneeAt(h, sensing, law, zm);
+  if (depth < 40 && (offChord(fm, fa, fb, 'front') || offChord(fm, fa, fb, 'rear') || offChord(fm, fa, fb, 'p'))) {
+    refinePiece(h, sensing, law, d, start, za, zm, depth + 1);
+    refinePiece(h, sensing, law, d, start, zm, zb, depth + 1);
+    return;
   }
+  pushPoint(d, zb, fb);
 }
 
 /**
@@ -157,8 +179,11 @@ export function dynamicSensingDistribution(h: Omit<HydraulicAxles, 'valve'>, sen
  * pressure at the rear threshold and the knee, so p for F(p) = z·P is interpolated on its piece.
  */
 const KS = new Float64Array(4);
+/** F(p) = G1 (p − t1)⁺ + G2 (p2(p) − t2)⁺, N (a module function, not a closure: it runs in every evaluation). */
+function totalForce(h: Axles, law: ValveLaw, p: number): number {
+  return h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, rearPressure(law, p) - h.threshold2);
+}
 function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: number): ForcesAt {
-  const total = (p: number) => h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, rearPressure(law, p) - h.threshold2);
   const target = z * h.P;
   const k1 = h.threshold1;
   const k2 = masterPressureForRear(law, h.threshold2);
@@ -182,7 +207,7 @@ function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: numb
   let p = NaN;
   for (let i = 0; i <= n; i++) {
     const hi = ks[i]!;
-    const fhi = total(hi);
+    const fhi = totalForce(h, law, hi);
     if (fhi >= target || i === n) {
       p = fhi > flo ? lo + ((target - flo) * (hi - lo)) / (fhi - flo) : lo;
       break;

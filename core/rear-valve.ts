@@ -21,11 +21,12 @@ export function loadSensingKneeBar(table: ReadonlyArray<readonly [number, number
   const last = table[table.length - 1]!;
   if (rearAxleKg <= first[0]) return first[1];
   if (rearAxleKg >= last[0]) return last[1];
+  // indices, not array destructuring: this runs for every knee a travel-sensing valve reads (bench/engine.ts)
   for (let i = 1; i < table.length; i++) {
-    const [x1, y1] = table[i]!;
-    if (rearAxleKg <= x1) {
-      const [x0, y0] = table[i - 1]!;
-      return y0 + ((y1 - y0) * (rearAxleKg - x0)) / (x1 - x0);
+    const b = table[i]!;
+    if (rearAxleKg <= b[0]) {
+      const a = table[i - 1]!;
+      return a[1] + ((b[1] - a[1]) * (rearAxleKg - a[0])) / (b[0] - a[0]);
     }
   }
   return last[1];

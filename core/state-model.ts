@@ -9,7 +9,7 @@ import type { DesignFile, LoadState } from './design.ts';
 import type { Distribution } from './distribution.ts';
 import { type DynamicSensing, dynamicSensingDistribution, installedDistribution } from './installed-distribution.ts';
 import { hydraulicPedalModel, type PedalModel } from './pedal-force.ts';
-import { loadSensingKneeBar, type ValveLaw, valveLaw } from './rear-valve.ts';
+import { type ValveLaw, valveLaw } from './rear-valve.ts';
 import { balanceBarPressureRatio } from './sizing/sizing-schema.ts';
 
 export interface StateModel {
@@ -44,7 +44,7 @@ export function dynamicSensing(design: DesignFile, state: LoadState, lambda: num
   const perZ = (state.mass_kg * state.cg_height_m) / design.vehicle.wheelbase_m; // kg of rear load moved per unit z
   const table = v.knee_bar_at_rear_axle_kg;
   const kinks = table.map(([kg]) => (m2 - kg) / perZ).filter((z) => z > 0).sort((a, b) => a - b);
-  return { kneeAt: (z) => (loadSensingKneeBar(table, m2 - z * perZ) * PA_PER_BAR) / lambda, kinks, ratio: v.ratio };
+  return { table, rearKg: m2, perZ, kneeScale: PA_PER_BAR / lambda, kinks, ratio: v.ratio };
 }
 
 export function stateModel(design: DesignFile, state: LoadState): StateModel {
@@ -66,9 +66,10 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
   const valve = bar ? { knee: law.knee / lambda, ratio: law.ratio } : law;
   const sensing = dynamicSensing(design, state, lambda);
   const axles = { P: loads.P, G1, G2, threshold1, threshold2 };
-  const dist = sensing ? dynamicSensingDistribution(axles, sensing) : installedDistribution({ ...axles, valve });
+  // no object spread here: on Node 20 it costs more than building the distribution (bench/engine.ts)
+  const dist = sensing ? dynamicSensingDistribution(axles, sensing) : installedDistribution({ P: loads.P, G1, G2, threshold1, threshold2, valve });
   if (bar) dist.p2 = dist.p2!.map((q) => q * lambda);
-  return {
+  const model: StateModel = {
     state,
     loads,
     G1,
@@ -79,6 +80,7 @@ export function stateModel(design: DesignFile, state: LoadState): StateModel {
     dist,
     pedal: hydraulicPedalModel(h),
     rearMasterRatio: lambda,
-    ...(sensing ? { sensing } : {}),
   };
+  if (sensing) model.sensing = sensing;
+  return model;
 }

@@ -339,7 +339,7 @@ export function stateMargin(m: RobustnessModel, i: number, p: SharedPerturbation
     if (fast) segs = fast;
     else {
       const base = dynamicSensing(m.design, { ...s.state, front_axle_kg: frontKg, cg_height_m: h }, m.lambda)!;
-      segs = segments(dynamicSensingDistribution({ P, G1, G2, threshold1: th1, threshold2: th2 }, { kneeAt: (z) => base.kneeAt(z) * (1 + p.knee), kinks: base.kinks, ratio }));
+      segs = segments(dynamicSensingDistribution({ P, G1, G2, threshold1: th1, threshold2: th2 }, { table: base.table, rearKg: base.rearKg, perZ: base.perZ, kneeScale: base.kneeScale * (1 + p.knee), kinks: base.kinks, ratio }));
     }
   } else {
     const kneeNominal = v.type === 'load_sensing' ? (loadSensingKneeBar(v.knee_bar_at_rear_axle_kg, s.massKg - frontKg) * PA_PER_BAR) / m.lambda : s.knee;

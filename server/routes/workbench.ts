@@ -22,6 +22,7 @@ import {
 } from '../../views/pages/workbench.ts';
 import { panels } from '../../views/panels/index.ts';
 import { resultCsv } from '../../views/panels/table.ts';
+import { verdictBar } from '../../views/panels/verdict.ts';
 import { AppError, appErrors, UPLOAD_LIMIT } from '../errors.ts';
 import {
   applyListOp,
@@ -135,7 +136,7 @@ export function update(posted: FormValues): UpdateOutcome {
   parts.push(structural ? inputsSection(values, units, errors, true) : fieldMessagesOob(values, units, errors));
   // a restored draft or a loaded file that cannot be read: the results on the page are another design's
   const replaced = posted._restore === '1' || posted._upload !== undefined;
-  parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : replaced ? noResultsSection(errors.length, true) : staleNote(errors.length, true));
+  parts.push(reading.ok ? cachedResults(reading.design, reading.warnings, units) : replaced ? noResultsSection(errors.length, true) : html`${staleNote(errors.length, true)}${verdictBar(null, true)}`);
   return { status: reading.ok ? 200 : 422, body: html`${parts}` };
 }
 

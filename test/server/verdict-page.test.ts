@@ -82,4 +82,21 @@ describe('the top verdict of the workbench', () => {
     const r = await postForm(app, '/workbench/update', formBody(shape, values));
     expect(top(r.body).section).toMatch(/not checked: needs the parking brake(&#39;|')s holding force at the tyres, or its mechanism/);
   });
+
+  it('the sticky bar carries the same verdict in short, and says "not current" while an input is wrong (issue 15 point 1)', async () => {
+    const bar = (body: string) => body.slice(body.indexOf('<div id="verdict-bar"'), body.indexOf('</div>', body.indexOf('<div id="verdict-bar"')));
+    const v = evaluate(demoDesign()).verdict;
+    const failing = bar(await pageFor(demoDesign()));
+    expect(failing).toContain('hx-swap-oob="true"');
+    expect(failing).toContain(`<a class="vb vb-fail" href="#overall-verdict"><strong>FAIL</strong> ${v.counts.failed} failing · 0 not checked</a>`);
+    const passing = structuredClone(demoDesign()) as DesignFile;
+    delete passing.regen;
+    expect(bar(await pageFor(passing))).toContain('<strong>PASS</strong> 0 failing');
+    const values = designToValues(demoDesign(), 'metric');
+    values['vehicle.wheelbase_m'] = '-1';
+    const r = await postForm(app, '/workbench/update', formBody(shape, values));
+    expect(r.statusCode).toBe(422);
+    expect(bar(r.body)).toContain('Verdict not current');
+    expect(bar(r.body)).not.toMatch(/FAIL|PASS/);
+  });
 });

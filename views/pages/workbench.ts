@@ -6,14 +6,14 @@
  * - #results: verdict, charts, table of the last valid design; #results-note marks it "not current".
  * - .msg slots under each field, updated out of band.
  */
-import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Warning } from '../../core/index.ts';
+import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
 import type { FormValues } from '../../server/forms/design-form.ts';
 import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
 import { panels, type ResultContext } from '../panels/index.ts';
 import { DESIGN_FILE_MAX_BYTES, DESIGN_FILE_MAX_TEXT } from '../../core/file-limits.ts';
-import { overallVerdict } from '../panels/verdict.ts';
+import { overallVerdict, verdictBar } from '../panels/verdict.ts';
 
 export interface ValidView {
   design: DesignFile;
@@ -119,7 +119,7 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
     return inGroup.length || head ? html`<div class="${groupClass(g)} out-group">${head}${inGroup.map((p) => foldSection(`panel-${p.id}`, p.title, p.deferred ? deferredSlot(p.id) : p.results!(ctx)))}</div>` : '';
   });
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>
-<div class="result-body">${groups}</div></div>`;
+<div class="result-body">${groups}</div></div>${oob ? verdictBar(v.result.verdict, true) : ''}`;
 }
 
 /**
@@ -127,7 +127,7 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
  * another design (the demo the page opened with), so they are removed rather than shown as "not current".
  */
 export function noResultsSection(problems: number, oob = false): SafeHtml {
-  return html`<div id="results" class="no-results"${oob ? html` hx-swap-oob="true"` : ''}>${staleNote(problems)}</div>`;
+  return html`<div id="results" class="no-results"${oob ? html` hx-swap-oob="true"` : ''}>${staleNote(problems)}</div>${oob ? verdictBar(null, true) : ''}`;
 }
 
 /**
@@ -214,13 +214,13 @@ function sectionIndex(): SafeHtml {
  * inputs, the section index, the state of the answer (computing… / current / inputs to fix, kept up to date by
  * static/js/workbench.js from #status) and a slot for a compact verdict (#verdict-bar).
  */
-function jumpBar(): SafeHtml {
+function jumpBar(verdict: Verdict | null): SafeHtml {
   return html`<nav class="jumpbar" aria-label="Sections">
 <a class="jb-link jb-results" href="#results-top">Results</a>
 <a class="jb-link" href="#design-top">Inputs</a>
 ${sectionIndex()}
 <span class="jb-live" id="jb-live" aria-hidden="true"></span>
-<div id="verdict-bar" class="verdict-bar"></div>
+${verdictBar(verdict)}
 </nav>`;
 }
 
@@ -241,7 +241,7 @@ export function workbenchPage(
 <button type="button" name="_op" value="demo" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" hx-confirm="${START_AGAIN_CONFIRM}" class="secondary" data-reset-draft="1">Start again from the demo</button>
 </nav>
 </header>
-${jumpBar()}
+${jumpBar(valid ? valid.result.verdict : null)}
 ${uploadDialog()}
 <main class="wb">
 <form id="design-form" class="inputs-col" hx-post="/workbench/update" hx-trigger="input delay:400ms, submit" hx-target="#status" hx-swap="outerHTML" hx-sync="this:replace" aria-label="Design" autocomplete="off" novalidate>

@@ -3,7 +3,7 @@
  * regeneration cases), green only when it is "pass", each failing or not-checked item linked to its row in the checks
  * table; then per load state the lock order on every surface, critical braking rate, lowest efficiency, warnings.
  */
-import { type CheckRef, type EvaluationResult, type LoadStateResult, type LockResult, overallWord } from '../../core/index.ts';
+import { type CheckRef, type EvaluationResult, type LoadStateResult, type LockResult, overallWord, type Verdict } from '../../core/index.ts';
 import { fixed } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
@@ -33,6 +33,17 @@ function itemLine(ref: CheckRef, word: string, cls: string): SafeHtml {
  * The overall verdict, shown above everything else in the results column: the summary, then one line per failing and
  * per not-checked item (each a link to its row in the checks table), then the results shown for information.
  */
+/**
+ * The compact verdict in the sticky bar (views/pages/workbench.ts jumpBar): the word and the counts, one tap to
+ * the full verdict above the results. Null: the results on the page are not current (inputs to fix).
+ */
+export function verdictBar(v: Verdict | null, oob = false): SafeHtml {
+  const swap = oob ? html` hx-swap-oob="true"` : '';
+  if (!v) return html`<div id="verdict-bar" class="verdict-bar"${swap}><a class="vb vb-stale" href="#results-top">Verdict not current: fix the marked inputs</a></div>`;
+  const c = v.counts;
+  return html`<div id="verdict-bar" class="verdict-bar"${swap}><a class="vb vb-${v.overall}" href="#overall-verdict"><strong>${overallWord(v)}</strong> ${c.failed} failing · ${c.not_checked} not checked</a></div>`;
+}
+
 export function overallVerdict(result: EvaluationResult): SafeHtml {
   const v = result.verdict;
   return html`<section class="overall-verdict ov-is-${v.overall}" id="overall-verdict" aria-labelledby="overall-verdict-h">

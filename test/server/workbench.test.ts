@@ -159,6 +159,19 @@ describe('static assets', () => {
       await none.close();
     }
   });
+  it('takes each mount from the build only when the build holds it (static/ edited since: the rest stays precompressed)', async () => {
+    const partDir = join(dirname(publicDir), 'part');
+    await writePublic(sourceMounts().filter((m) => m.prefix.startsWith('/vendor/htmx-')), partDir, 4);
+    const part = buildApp({ publicDir: partDir });
+    try {
+      const enc = async (url: string) => (await part.inject({ method: 'GET', url, headers: { 'accept-encoding': 'br' } })).headers['content-encoding'];
+      expect(await enc(part.assets.htmx)).toBe('br');
+      expect(await enc(`${part.assets.app}/js/workbench.js`)).toBeUndefined();
+      expect(await enc(part.assets.plotly)).toBeUndefined();
+    } finally {
+      await part.close();
+    }
+  });
   it('serves no path outside the listed files', async () => {
     for (const a of [app, built]) {
       const prefix = a.assets.app;

@@ -180,7 +180,7 @@ export async function run(): Promise<void> {
 
     const cold = await timedPost(`${base}/workbench/update`, fresh(0));
     const plotlyFirst = /<script[^>]+src="(\/vendor\/plotly[^"]+)"/.exec(html)?.[1];
-    if (plotlyFirst) console.log(`first GET of plotly by a fresh server process (compressed once, then kept) ${(await timedGet(`${base}${plotlyFirst}`)).toFixed(0)} ms`);
+    if (plotlyFirst) console.log(`first GET of plotly by a fresh server process (the brotli file the build step wrote; from the sources, uncompressed, without a current build) ${(await timedGet(`${base}${plotlyFirst}`)).toFixed(0)} ms`);
     const second = await timedPost(`${base}/workbench/update`, fresh(-1));
     console.log(`first recompute answered by a fresh server process (after it served the page once) ${cold.toFixed(0)} ms; the next, another design, ${second.toFixed(0)} ms`);
     const duration = Number(process.env.BENCH_DURATION ?? 10);

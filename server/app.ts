@@ -4,15 +4,11 @@
  *
  * Features register their routes below, one line each (see DEVELOPERS.md, "Workbench panels" and "Routes").
  */
-import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { constants as zlibConstants } from 'node:zlib';
 import compress from '@fastify/compress';
 import formbody from '@fastify/formbody';
 import helmet from '@fastify/helmet';
+import fastifyStatic from '@fastify/static';
 import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
 import type { AssetUrls } from '../views/layout.ts';
 import { messagePage, statusBlock } from '../views/pages/workbench.ts';
@@ -23,28 +19,37 @@ import { cgLiftRoutes } from './routes/cg-lift.ts';
 import { packetRoutes } from './routes/packet.ts';
 import { storeRoutes } from './routes/store.ts';
 import { requestGuard, SERVER_LIMITS } from './plugins/request-guard.ts';
-import { filesUnder, precompressedStatic } from './plugins/precompressed-static.ts';
-
-const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..');
-const STATIC_DIR = join(ROOT, 'static');
-const require = createRequire(import.meta.url);
+import { builtMount, PUBLIC_DIR, sourceMounts, type StaticMount } from './static-assets.ts';
 
 export interface AppOptions {
   logger?: boolean;
   /** Host names answered besides the loopback names and the bound address (server/plugins/request-guard.ts). */
   allowedHosts?: readonly string[];
+  /** The build folder with the precompressed static files (default dist/public, server/static-assets.ts). */
+  publicDir?: string;
 }
 
-function packageDir(name: string): { dir: string; version: string } {
-  const pkgJson = require.resolve(`${name}/package.json`);
-  return { dir: dirname(pkgJson), version: (JSON.parse(readFileSync(pkgJson, 'utf8')) as { version: string }).version };
-}
-
-/** A hash of every file under static/, so app assets can be cached for a year under a changing URL. */
-function staticHash(dir: string): string {
-  const h = createHash('sha256');
-  for (const f of filesUnder(dir)) h.update(f.slice(f.lastIndexOf('/') + 1)).update(readFileSync(join(dir, f)));
-  return h.digest('hex').slice(0, 10);
+/**
+ * GET (and HEAD) routes for exactly the listed files of each mount, sent by @fastify/static: a fixed list, so no
+ * path from the request reaches the file system, and `compress: false` on each route keeps @fastify/compress
+ * away. preCompressed: the `.br`/`.gz` sibling the build step wrote is sent when the request accepts it.
+ * Every answer is immutable for a year (the URLs carry a content hash or a version), with an ETag.
+ */
+function staticFiles(app: FastifyInstance, mounts: readonly StaticMount[], preCompressed: boolean): void {
+  if (mounts.length === 0) return;
+  app.register(async (scope) => {
+    await scope.register(fastifyStatic, {
+      serve: false,
+      preCompressed,
+      maxAge: '365d',
+      immutable: true,
+      // the body depends on accept-encoding only when a compressed sibling can be chosen
+      setHeaders: preCompressed ? (res) => res.setHeader('vary', 'accept-encoding') : undefined,
+    });
+    for (const m of mounts) {
+      for (const f of m.files) scope.get(`${m.prefix}${f}`, { compress: false }, (_req, reply) => reply.sendFile(f, m.root));
+    }
+  });
 }
 
 export const CSP_DIRECTIVES = {
@@ -77,12 +82,12 @@ function sendError(req: FastifyRequest, reply: FastifyReply, e: AppError, assets
 export function buildApp(opts: AppOptions = {}): FastifyInstance {
   const app = Fastify({ logger: opts.logger ?? false, bodyLimit: BODY_LIMIT, ...SERVER_LIMITS });
   requestGuard(app, { allowedHosts: opts.allowedHosts }); // Host, cross-site changes, media types, connection cap
-  const htmx = packageDir('htmx.org');
-  const plotly = packageDir('plotly.js-dist-min');
+  const sources = sourceMounts();
+  const [appFiles, htmx, plotly] = sources;
   const assets: AssetUrls = {
-    app: `/static/${staticHash(STATIC_DIR)}`,
-    htmx: `/vendor/htmx-${htmx.version}/htmx.min.js`,
-    plotly: `/vendor/plotly-${plotly.version}/plotly.min.js`,
+    app: appFiles!.prefix.slice(0, -1),
+    htmx: `${htmx!.prefix}htmx.min.js`,
+    plotly: `${plotly!.prefix}plotly.min.js`,
   };
   app.decorate('assets', assets);
 
@@ -91,19 +96,16 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
     strictTransportSecurity: false,
     crossOriginEmbedderPolicy: false,
   });
-  // dynamic answers: the fastest levels (CPU matters more than a few per cent of bytes; kept answers and static
-  // files are compressed once elsewhere, server/response-cache.ts and server/plugins/precompressed-static.ts)
+  // dynamic answers: the fastest levels (CPU matters more than a few per cent of bytes; kept answers are
+  // compressed once in server/response-cache.ts, static files at build time, server/static-assets.ts)
   app.register(compress, { threshold: 1024, brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 1 } }, zlibOptions: { level: 1 } });
   app.register(formbody, { bodyLimit: BODY_LIMIT });
 
-  // every asset from memory, compressed once per process (server/plugins/precompressed-static.ts)
-  app.register(async (scope) =>
-    precompressedStatic(scope, [
-      { prefix: `${assets.app}/`, root: STATIC_DIR, files: filesUnder(STATIC_DIR) },
-      { prefix: `/vendor/htmx-${htmx.version}/`, root: join(htmx.dir, 'dist'), files: ['htmx.min.js'] },
-      { prefix: `/vendor/plotly-${plotly.version}/`, root: plotly.dir, files: ['plotly.min.js'] },
-    ]),
-  );
+  // each mount from the build folder with its precompressed siblings, or from its sources (uncompressed) when
+  // the build has no current copy of it (no build yet, or static/ edited since)
+  const mounts = sources.map((m) => ({ source: m, built: builtMount(m, opts.publicDir ?? PUBLIC_DIR) }));
+  staticFiles(app, mounts.flatMap((m) => (m.built ? [m.built] : [])), true);
+  staticFiles(app, mounts.flatMap((m) => (m.built ? [] : [m.source])), false);
 
   app.register(async (scope) => workbenchRoutes(scope, assets));
   app.register(async (scope) => cgLiftRoutes(scope));

@@ -5,7 +5,7 @@
  */
 import { buildApp } from './app.ts';
 import { parseAllowedHosts } from './plugins/request-guard.ts';
-import { warmStaticAssets } from './plugins/precompressed-static.ts';
+import { builtMount, PUBLIC_DIR, sourceMounts } from './static-assets.ts';
 
 export const DEFAULT_PORT = 3000;
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
@@ -27,7 +27,9 @@ if (!LOOPBACK.has(host)) {
 const app = buildApp({ logger: process.env.LOG === '1', allowedHosts: parseAllowedHosts(process.env.ALLOWED_HOSTS) });
 try {
   await app.listen({ host, port });
-  void warmStaticAssets(); // compress every asset once now, in zlib's thread pool, rather than on its first request
+  if (sourceMounts().some((m) => !builtMount(m, PUBLIC_DIR))) {
+    console.warn('Note: some page files are sent uncompressed from the sources (no current build); `npm run build` precompresses them.');
+  }
   const shown = host.includes(':') ? `[${host}]` : host;
   console.log(`Lockstep workbench: http://${shown}:${app.server.address() && typeof app.server.address() === 'object' ? (app.server.address() as { port: number }).port : port}/`);
 } catch (e) {

@@ -4,11 +4,16 @@
 // configured; we configure 422); NIST SP 811 appendix B.8 (1 in = 0.0254 m, 1 lb = 0.45359237 kg);
 // RFC 9110 (413 Content Too Large, 415 Unsupported Media Type, 422 Unprocessable Content);
 // RFC 4180 (CSV); the design contract /work/shared/spec/design-file.md.
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
 import { BODY_LIMIT } from '../../server/errors.ts';
+import { sourceMounts, writePublic } from '../../server/static-assets.ts';
 import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
 import { HTMX_CONFIG } from '../../views/layout.ts';
 import { formBody, openPage, postForm } from './form-post.ts';
@@ -75,7 +80,23 @@ describe('GET /', () => {
 });
 
 describe('static assets', () => {
+  // the build step's output (scripts/precompress.ts), written here to a temporary folder so the tests do not
+  // depend on whether `npm run build` ran; brotli quality 4 instead of the build's 11 only to keep the test quick
+  let built: FastifyInstance;
+  let publicDir = '';
+  beforeAll(async () => {
+    publicDir = join(mkdtempSync(join(tmpdir(), 'lockstep-public-')), 'public');
+    await writePublic(sourceMounts(), publicDir, 4);
+    built = buildApp({ publicDir });
+    await built.ready();
+  });
+  afterAll(async () => {
+    await built.close();
+    rmSync(dirname(publicDir), { recursive: true, force: true });
+  });
+
   it('serves htmx and plotly from node_modules under versioned URLs, cached for a year, compressed', async () => {
+    const app = built;
     const page = (await app.inject({ method: 'GET', url: '/' })).body;
     const htmx = /src="(\/vendor\/htmx-2\.0\.11\/htmx\.min\.js)"/.exec(page)![1]!;
     const plotly = /src="(\/vendor\/plotly-[\d.]+\/plotly\.min\.js)"/.exec(page)![1]!;
@@ -93,8 +114,81 @@ describe('static assets', () => {
     expect(c.headers['content-type']).toMatch(/text\/css/);
   });
   it('serves nothing else from node_modules', async () => {
-    const r = await app.inject({ method: 'GET', url: '/vendor/htmx-2.0.11/htmx.js' });
-    expect(r.statusCode).toBe(404);
+    for (const a of [app, built]) {
+      const r = await a.inject({ method: 'GET', url: '/vendor/htmx-2.0.11/htmx.js' });
+      expect(r.statusCode).toBe(404);
+    }
+  });
+  it('answers brotli from the precompressed file, the same bytes once decompressed, and plain bytes otherwise', async () => {
+    // RFC 9110 §8.4 (Content-Encoding) and §12.5.5 (Vary): the body varies with Accept-Encoding
+    const url = `${built.assets.app}/js/workbench.js`;
+    const source = readFileSync(join(process.cwd(), 'static/js/workbench.js'));
+    const br = await built.inject({ method: 'GET', url, headers: { 'accept-encoding': 'gzip, deflate, br' } });
+    expect(br.statusCode).toBe(200);
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers['content-type']).toMatch(/javascript/);
+    expect(String(br.headers.vary)).toMatch(/accept-encoding/i);
+    expect(String(br.headers['cache-control'])).toBe('public, max-age=31536000, immutable');
+    // byte for byte the file the build wrote (not compressed again for this request) ...
+    const brFile = readFileSync(join(publicDir, ...url.split('/').filter(Boolean)) + '.br');
+    expect(br.rawPayload.equals(brFile)).toBe(true);
+    // ... which decompresses to the source file
+    expect(brotliDecompressSync(br.rawPayload).equals(source)).toBe(true);
+    const gz = await built.inject({ method: 'GET', url, headers: { 'accept-encoding': 'gzip' } });
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gunzipSync(gz.rawPayload).equals(source)).toBe(true);
+    const plain = await built.inject({ method: 'GET', url, headers: { 'accept-encoding': 'identity' } });
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.rawPayload.equals(source)).toBe(true);
+  });
+  it('without a current build, sends the source files uncompressed, still cached for a year', async () => {
+    // `app` has no build folder for the current URLs unless `npm run build` ran after the last edit of static/;
+    // this one points at a folder that does not exist
+    const none = buildApp({ publicDir: join(dirname(publicDir), 'missing') });
+    try {
+      const source = readFileSync(join(process.cwd(), 'static/js/workbench.js'));
+      const r = await none.inject({ method: 'GET', url: `${none.assets.app}/js/workbench.js`, headers: { 'accept-encoding': 'br, gzip' } });
+      expect(r.statusCode).toBe(200);
+      expect(r.headers['content-encoding']).toBeUndefined();
+      expect(r.rawPayload.equals(source)).toBe(true);
+      expect(String(r.headers['cache-control'])).toBe('public, max-age=31536000, immutable');
+      const h = await none.inject({ method: 'GET', url: none.assets.htmx, headers: { 'accept-encoding': 'br' } });
+      expect(h.statusCode).toBe(200);
+      expect(h.headers['content-encoding']).toBeUndefined();
+    } finally {
+      await none.close();
+    }
+  });
+  it('takes each mount from the build only when the build holds it (static/ edited since: the rest stays precompressed)', async () => {
+    const partDir = join(dirname(publicDir), 'part');
+    await writePublic(sourceMounts().filter((m) => m.prefix.startsWith('/vendor/htmx-')), partDir, 4);
+    const part = buildApp({ publicDir: partDir });
+    try {
+      const enc = async (url: string) => (await part.inject({ method: 'GET', url, headers: { 'accept-encoding': 'br' } })).headers['content-encoding'];
+      expect(await enc(part.assets.htmx)).toBe('br');
+      expect(await enc(`${part.assets.app}/js/workbench.js`)).toBeUndefined();
+      expect(await enc(part.assets.plotly)).toBeUndefined();
+    } finally {
+      await part.close();
+    }
+  });
+  it('serves no path outside the listed files', async () => {
+    for (const a of [app, built]) {
+      const prefix = a.assets.app;
+      for (const url of [
+        `${prefix}/../package.json`,
+        `${prefix}/..%2f..%2fpackage.json`,
+        `${prefix}/%2e%2e/%2e%2e/package.json`,
+        `${prefix}/js/workbench.js.br`,
+        `${prefix}/`,
+        `${a.assets.htmx}/../package.json`,
+        '/static/0000000000/js/workbench.js',
+      ]) {
+        const r = await a.inject({ method: 'GET', url });
+        expect(r.statusCode, url).toBe(404);
+        expect(r.body, url).not.toContain('"name": "lockstep"');
+      }
+    }
   });
 });
 

@@ -5,7 +5,7 @@
  *     foot control force ≤ 500 N (M1) / 700 N (others);
  *   service braking Type-0, engine disconnected, 71/320 Annex II 2.1.1 ≈ R13 Annex 4 2.1.1 [P]:
  *     d_m ≥ 5.8 (M1), 5.0 m/s² (others); pedal force ≤ 500 N (M1) / 700 N (others).
- * (Reference sheet /work/shared/reference/braking-requirements.md, 5.2 and 5.3.)
+ * (71/320/EEC Annex II 2.1.1 ≈ UN R13 Annex 4 2.1.1, and UN R13 Annex 4 2.2; statuses in docs/sources.md.)
  */
 import type { Vehicle } from './design.ts';
 import { SECONDARY_FIGURES, SERVICE_FIGURES } from './rules/performance.ts';

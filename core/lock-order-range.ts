@@ -1,7 +1,7 @@
 /**
  * The braking-rate range in which a category's front axle must lock first (front adhesion-utilisation
  * curve above the rear one), 71/320/EEC Annex II Appendix point 3.1.1, as tabulated in
- * /work/shared/reference/braking-requirements.md section 2.2(b) [V]: M1 0.15–0.80, N1 0.15–0.50,
+ * verified: M1 0.15–0.80, N1 0.15–0.50,
  * other power-driven categories 0.15–0.30; surfaces k from 0.2 to 0.8 (point 3.1.1 heading [V]).
  * Only the main rule: the permitted deviations (M1 inversion zone 0.30–0.45, N1 ±0.08 corridor,
  * band for other categories) are not applied here, so a verdict from this table errs on the strict side.

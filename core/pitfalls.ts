@@ -1,6 +1,6 @@
 /**
  * Pitfall warnings: things converters report getting wrong and inspectors ask about
- * (/work/shared/reference/field-practice.md, sections 1, 2 and 4 item 12). Each warning names the
+ * (inspection regimes and converters' reports; common practice). Each warning names the
  * practice or regime it comes from. They use the optional `base_vehicle` and `conversion` blocks and
  * fire only on facts the design states; a design without those blocks raises none.
  */

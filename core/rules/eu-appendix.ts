@@ -2,7 +2,7 @@
  * Rule set `eu-appendix`: 71/320/EEC Annex II Appendix, "Distribution of braking effort among
  * vehicle axles" (the UN R13 Annex 10 family), two-axle motor vehicles, every load state.
  * Text version: legislation.gov.uk point-in-time version of 01/01/2007. Paraphrased in
- * /work/shared/reference/braking-requirements.md section 2.2; statuses as there.
+ * our own notes; the status of each paragraph is listed in docs/sources.md.
  */
 import { type Branch, type CurveRule, lineFromRegulationForm, parallelToIdeal, type RuleSet } from './rule-types.ts';
 

@@ -2,7 +2,7 @@
  * Crossings of the ideal distribution and the critical braking rate.
  * Sources: 71/320/EEC Annex II Appendix point 2 (φ = front share of the braking force, ψ = P1/P,
  * χ = h/E) and point 3.1 (the installed curve crosses the ideal where f1 = f2; for a fixed share φ the
- * crossing is at z = (φ − ψ)/χ), /work/shared/reference/braking-requirements.md section 1;
+ * crossing is at z = (φ − ψ)/χ), 71/320/EEC Annex II Appendix point 2;
  * design-file spec "Physics" (crossings in (0, 1.5] below lift-off, critical = lowest + to − crossing);
  * hand derivations in the comments.
  */

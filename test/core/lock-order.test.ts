@@ -2,8 +2,8 @@
  * First lock and braking efficiency.
  * Sources: design-file spec "Physics" (first lock = smallest z with f1 or f2 = k; "both" when the two
  * rates differ by less than 0.001; efficiency = z / k), 71/320/EEC Annex II Appendix point 3.1.1
- * (f = T / N), /work/shared/reference/braking-requirements.md section 1; worked example E1
- * (/work/shared/reference/worked-examples.md, T. Bevan, The Theory of Machines, ch. 8, Example 6);
+ * (f = T / N), 71/320/EEC Annex II Appendix point 2; worked example E1
+ * (T. Bevan, The Theory of Machines, ch. 8, Example 6);
  * hand derivations in the comments.
  */
 import fc from 'fast-check';

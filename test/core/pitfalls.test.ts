@@ -1,4 +1,4 @@
-// Sources: /work/shared/reference/field-practice.md — 1.1 (NSW Brake assessment manual Table 1: tyre
+// Sources (inspection practice): 1.1 (NSW Brake assessment manual Table 1: tyre
 // diameter change above ±7 %, booster removed, diagonal split converted to front/rear; ESC disabled
 // blocks a certificate), 1.3 (IVA: bias adjuster within the driver's reach fails), section 2
 // (load-sensing valves on modified suspension; drum master cylinders with calipers; EV conversions need a

@@ -1,6 +1,6 @@
 // Sources: NIST SP 811 (2008) appendix B.8 for the factors (1 in = 0.0254 m exactly, 1 lb = 0.45359237 kg,
 // 1 psi = 6894.757 Pa); hand-derived conversions shown beside each check. Design contract:
-// /work/shared/spec/design-file.md (field paths and units).
+// design-file contract (docs/design-file.md) (field paths and units).
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
 import {

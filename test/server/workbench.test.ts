@@ -3,7 +3,7 @@
 // rule #3.1 (JSON data blocks with < escaped); htmx 2 docs "Response Handling" (4xx not swapped unless
 // configured; we configure 422); NIST SP 811 appendix B.8 (1 in = 0.0254 m, 1 lb = 0.45359237 kg);
 // RFC 9110 (413 Content Too Large, 415 Unsupported Media Type, 422 Unprocessable Content);
-// RFC 4180 (CSV); the design contract /work/shared/spec/design-file.md.
+// RFC 4180 (CSV); the design contract design-file contract (docs/design-file.md).
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';

@@ -4,7 +4,7 @@
  * Demo design (invented), laden: 3500 kg, front 1610 kg, h 0.9 m, E 3.665 m; table (1200 kg, 20 bar),
  * (1900 kg, 48 bar), ratio 0.45; k = 0.8.
  *
- * Hand calculation:
+ * Source: hand calculation from the Appendix 3.1.3 axle loads (derived here, no published example):
  *   G1 = 2·2·0.4·(2·π/4·0.048²)·0.128/0.345 = 2.14839e-3 N/Pa, G2 = 2·2·0.4·(π/4·0.048²)·0.118/0.345 = 9.90274e-4 N/Pa
  *   thresholds 0.5 and 1 bar; χ·m = 3500·0.9/3.665 = 859.48 kg of rear load moved per unit z
  *   static: rear load 1890 kg → knee 20 + 28·690/700 = 47.6 bar

@@ -2,6 +2,7 @@
  * Every numeric result is finite or an explicit null (issue 12 point 9): for any schema-valid design,
  * realistic (arbitrary-design.ts) or pushed to the schema's lower limits, the lockstep-result/1 object
  * holds no Infinity or NaN (JSON would print them as null where a number is promised).
+ * Source: an invariant of the result format (design-file contract), no outside value.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

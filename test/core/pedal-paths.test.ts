@@ -3,7 +3,7 @@
  * (core/pedal-force.ts hydraulicPedalModel). Design: docs/examples/balance-bar-booster-failed.json
  * (invented, issue 12 point 2).
  *
- * Hand calculation, written out (bar s = 0.6 = front share of the pushrod force):
+ * Source: hand calculation, written out (bar s = 0.6 = front share of the pushrod force):
  *   front bore 22.2 mm: A_f = π/4 · 0.0222² = 3.8708e-4 m²; rear bore 19.05 mm: A_r = 2.8502e-4 m²
  *   pushrod force at 500 N pedal, ratio 3.5, no assist: F = 1750 N
  *   front line p1 = s·F/A_f = 1050 / 3.8708e-4 = 27.126 bar; rear master (1 − s)·F/A_r = 700 / 2.8502e-4 = 24.560 bar

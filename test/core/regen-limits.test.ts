@@ -3,7 +3,8 @@
  * bisection they replace (test/core/regen-limits-reference.ts, run to 1e-9 N), on random designs (fast-check).
  * The reference decides each step with the predicate itself (the first lock of core/lock-order.ts judged by the
  * lock-order range of 71/320/EEC Annex II Appendix 3.1.1), so agreement to 1e-6 N checks the exact solution; the
- * designs are those of the other property tests with a regeneration block added.
+ * designs are those of the other property tests with a regeneration block added. Source: derived (the reference
+ * search), no outside value.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -1,6 +1,7 @@
 // The workbench's top verdict (issue 12 point 1): above every result, green ("ov-is-pass") only when the one verdict of
 // core/verdict.ts is "pass", each failing or not-checked item linked to its row in the checks table.
-// Designs: the demo (core/demo.ts; fails on purpose with its regeneration, unladen at 20 and 50 km/h), the demo
+// Source: the project's verdict rule (issue 12), no outside value. Designs: the demo (core/demo.ts; fails on purpose
+// with its regeneration at the lower speeds, unladen and laden), the demo
 // without regeneration (every check passes) and without its parking brake (the parking check cannot be made).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';

@@ -21,7 +21,7 @@ import { request } from 'node:http';
 import autocannon from 'autocannon';
 import { demoDesign } from '../core/index.ts';
 import { buildApp } from '../server/app.ts';
-import { designToValues } from '../server/forms/design-form.ts';
+import { designToValues } from '../form/design-form.ts';
 import { answers, update } from '../server/routes/workbench.ts';
 
 interface Fetched {

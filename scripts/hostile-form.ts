@@ -6,7 +6,7 @@
  */
 import fc from 'fast-check';
 import { demoDesign } from '../core/index.ts';
-import { designToValues, type FormValues } from '../server/forms/design-form.ts';
+import { designToValues, type FormValues } from '../form/design-form.ts';
 import { panels } from '../views/panels/index.ts';
 
 /** Every route that reads a form body (the deferred panels included); the packet PDF is left out (slow to draw). */

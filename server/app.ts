@@ -12,7 +12,7 @@ import fastifyStatic from '@fastify/static';
 import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
 import type { AssetUrls } from '../views/layout.ts';
 import { messagePage, statusBlock } from '../views/pages/workbench.ts';
-import { AppError, appErrors, BODY_LIMIT, fromFrameworkError } from './errors.ts';
+import { AppError, appErrors, BODY_LIMIT, fromFrameworkError } from '../form/errors.ts';
 import { sendHtml } from './html-reply.ts';
 import { workbenchRoutes } from './routes/workbench.ts';
 import { cgLiftRoutes } from './routes/cg-lift.ts';

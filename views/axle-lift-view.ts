@@ -1,14 +1,14 @@
 /**
  * The axle-lift tool of the conversion panel: a form for the workshop readings (fields named `lift.<file path>`,
- * server/forms/axle-lift-form.ts) that posts to POST /workbench/cg-lift, and the block that answers it: the form
+ * form/axle-lift-form.ts) that posts to POST /workbench/cg-lift, and the block that answers it: the form
  * again with every typed value and the problems marked, then the result (CG height, standard uncertainty, budget
  * with the largest contributor, warnings) and one "Apply to load state" button per load state of the design.
  * The block (#cg-lift) is kept across recomputes of the results by static/js/workbench.js, so what was typed here
  * survives a change in the design form. Pasting a `lockstep-axle-lift/1` file is offered as a second way.
  */
 import { type AxleLiftResultFile, BUDGET_SOURCE_WORDS, CAUTION, type FieldIssue, type UnitSystem } from '../core/index.ts';
-import { cgLiftOp, LIFT_MASS_TOLERANCE, LIFT_UNITS_FIELD, MAX_LIFTS } from '../server/forms/axle-lift-form.ts';
-import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../server/forms/design-form.ts';
+import { cgLiftOp, LIFT_MASS_TOLERANCE, LIFT_UNITS_FIELD, MAX_LIFTS } from '../form/axle-lift-form.ts';
+import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../form/design-form.ts';
 import { type InputContext, numberField, selectField } from './fields.ts';
 import { fixed, shownUnit } from './format.ts';
 import { html, type SafeHtml } from './html.ts';

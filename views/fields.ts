@@ -1,9 +1,9 @@
 /**
  * Small input components for the workbench form. Each takes the field's design path as its name and shows
- * the value as typed, the unit of the user's unit system and the field's messages (see server/forms/design-form.ts).
+ * the value as typed, the unit of the user's unit system and the field's messages (see form/design-form.ts).
  */
 import type { UnitSystem } from '../core/index.ts';
-import { displayUnitOf, type FormValues, unitLabel } from '../server/forms/design-form.ts';
+import { displayUnitOf, type FormValues, unitLabel } from '../form/design-form.ts';
 import { html, type SafeHtml } from './html.ts';
 
 export interface InputContext {
@@ -97,7 +97,7 @@ export function checkField(ctx: InputContext, name: string, label: string, o: Fi
 ${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
 }
 
-/** Values of a three-way yes/no choice: "" leaves the key out (server/forms/design-form.ts). */
+/** Values of a three-way yes/no choice: "" leaves the key out (form/design-form.ts). */
 export const TRI_STATE_OPTIONS = [['', 'not stated'], ['true', 'yes'], ['false', 'no']] as const;
 
 /**

@@ -1,6 +1,6 @@
 /** Numbers for people: fixed decimals, units of the chosen system, a dash for "no value". */
 import { type Quantity, TO_SI, type Unit, type UnitSystem } from '../core/index.ts';
-import { unitLabel } from '../server/forms/design-form.ts';
+import { unitLabel } from '../form/design-form.ts';
 
 export function fixed(v: number | null | undefined, digits: number): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '–';

@@ -6,8 +6,8 @@
 import { writeFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { readDesign } from '../../core/index.ts';
-import { buildPacket } from '../../server/packet/build-packet.ts';
-import { openStore } from '../../server/store/design-store.ts';
+import { buildPacket } from '../../packet/build-packet.ts';
+import { openStore } from '../../store/design-store.ts';
 import { CliError, cliErrors } from '../errors.ts';
 import { exitCodeFor } from '../exit-code.ts';
 import { readJsonFile } from '../read-json.ts';

@@ -4,9 +4,9 @@
  * evaluated or packed: `lockstep store show 1a2b3c4d > x.json && lockstep evaluate x.json`.
  */
 import { parseArgs } from 'node:util';
-import { type DesignStore, openStore } from '../../server/store/design-store.ts';
-import { StoreError } from '../../server/store/errors.ts';
-import { designJson } from '../../server/export/exports.ts';
+import { type DesignStore, openStore } from '../../store/design-store.ts';
+import { StoreError } from '../../store/errors.ts';
+import { designJson } from '../../packet/exports.ts';
 import { CliError, cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
 import type { CommandOutput } from '../main.ts';

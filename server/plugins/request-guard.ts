@@ -18,7 +18,7 @@
  *   closed at once, before a request is read.
  */
 import type { FastifyInstance, FastifyRequest } from 'fastify';
-import { appErrors } from '../errors.ts';
+import { appErrors } from '../../form/errors.ts';
 
 /** Fastify options of the app (spread into Fastify({...}) in server/app.ts). */
 export const SERVER_LIMITS = {

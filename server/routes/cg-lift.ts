@@ -1,6 +1,6 @@
 /**
  * POST /workbench/cg-lift: the axle-lift tool of the conversion panel (views/axle-lift-view.ts). The body is the
- * tool's form (`lift.*` fields, server/forms/axle-lift-form.ts) together with the design form (for the page's
+ * tool's form (`lift.*` fields, form/axle-lift-form.ts) together with the design form (for the page's
  * unit system `_units` and the load states the result can be applied to). `_lift_op` says what to do:
  * `compute` (default when lift fields are present), `add`, `remove:<i>` (lift rows), `restore` (the readings kept
  * in the browser after a reload: computed when complete, no problems marked otherwise), or `paste` (read the
@@ -21,8 +21,8 @@ import {
   loadStatesOf,
   readLiftForm,
   startingLiftValues,
-} from '../forms/axle-lift-form.ts';
-import { appErrors } from '../errors.ts';
+} from '../../form/axle-lift-form.ts';
+import { appErrors } from '../../form/errors.ts';
 import { sendHtml } from '../html-reply.ts';
 import { formValues, unitsOf } from './workbench.ts';
 

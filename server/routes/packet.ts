@@ -6,11 +6,11 @@
 import type { FastifyPluginAsync, FastifyReply } from 'fastify';
 import type { DesignFile, Warning } from '../../core/index.ts';
 import { packetHtml } from '../../views/store-views.ts';
-import { checksCsv, curvesCsv, designJson } from '../export/exports.ts';
-import { evaluateForPacket, warningsOf } from '../packet/build-packet.ts';
-import { packetContent } from '../packet/packet-content.ts';
-import { renderPacketPdf } from '../packet/packet-pdf.ts';
-import { revisionId } from '../store/revision-id.ts';
+import { checksCsv, curvesCsv, designJson } from '../../packet/exports.ts';
+import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
+import { packetContent } from '../../packet/packet-content.ts';
+import { renderPacketPdf } from '../../packet/packet-pdf.ts';
+import { revisionId } from '../../store/revision-id.ts';
 import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
 
 const EXPORTS = ['design.json', 'curves.csv', 'checks.csv', 'packet.pdf', 'packet.html'] as const;

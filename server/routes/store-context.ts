@@ -5,12 +5,12 @@
  */
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { type DesignFile, readDesign, type UnitSystem, type Warning } from '../../core/index.ts';
-import { type FormValues, readForm } from '../forms/design-form.ts';
-import { type DesignStore, openStore } from '../store/design-store.ts';
-import { StoreError } from '../store/errors.ts';
+import { type FormValues, readForm } from '../../form/design-form.ts';
+import { type DesignStore, openStore } from '../../store/design-store.ts';
+import { StoreError } from '../../store/errors.ts';
 import { errorView } from '../../views/store-views.ts';
-import { fromFrameworkError } from '../errors.ts';
-import { checkFieldNames } from '../forms/field-names.ts';
+import { fromFrameworkError } from '../../form/errors.ts';
+import { checkFieldNames } from '../../form/field-names.ts';
 
 export interface StoreRouteOptions {
   /** An open store (tests); otherwise one is opened in `dataDir` (default LOCKSTEP_DATA_DIR or ./data). */

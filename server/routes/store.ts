@@ -6,9 +6,9 @@
 import type { FastifyPluginAsync } from 'fastify';
 import type { EvaluationResult } from '../../core/index.ts';
 import { compareView, designChoicesView, designsListView, diffView, historyView, saveResultView } from '../../views/store-views.ts';
-import { type CompareSide, compare } from '../packet/compare.ts';
-import { evaluateForPacket, warningsOf } from '../packet/build-packet.ts';
-import type { DesignStore } from '../store/design-store.ts';
+import { type CompareSide, compare } from '../../packet/compare.ts';
+import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
+import type { DesignStore } from '../../store/design-store.ts';
 import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
 
 const HTML = 'text/html; charset=utf-8';

@@ -23,7 +23,7 @@ import {
 import { panels } from '../../views/panels/index.ts';
 import { resultCsv } from '../../views/panels/table.ts';
 import { verdictBar } from '../../views/panels/verdict.ts';
-import { AppError, appErrors, UPLOAD_LIMIT } from '../errors.ts';
+import { AppError, appErrors, UPLOAD_LIMIT } from '../../form/errors.ts';
 import {
   applyListOp,
   convertValues,
@@ -31,18 +31,18 @@ import {
   type FormValues,
   parseListOp,
   readForm,
-} from '../forms/design-form.ts';
+} from '../../form/design-form.ts';
 import { sendHtml } from '../html-reply.ts';
-import { checkFieldNames } from '../forms/field-names.ts';
-import { applySizingOp, SIZING_OP } from '../forms/sizing-apply.ts';
-import { applyCgLiftOp, CG_LIFT_OP } from '../forms/axle-lift-form.ts';
+import { checkFieldNames } from '../../form/field-names.ts';
+import { applySizingOp, SIZING_OP } from '../../form/sizing-apply.ts';
+import { applyCgLiftOp, CG_LIFT_OP } from '../../form/axle-lift-form.ts';
 import { ResponseCache, sendCached } from '../response-cache.ts';
-import { keepSwitchedOut, withoutDraftRows } from '../forms/keep-typed.ts';
+import { keepSwitchedOut, withoutDraftRows } from '../../form/keep-typed.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
   if (body === null || typeof body !== 'object' || Array.isArray(body)) throw appErrors.badRequest('Expected the design form as the request body.');
-  checkFieldNames(Object.keys(body)); // prototype keys, odd names, positions beyond a list's limit (server/forms/field-names.ts)
+  checkFieldNames(Object.keys(body)); // prototype keys, odd names, positions beyond a list's limit (form/field-names.ts)
   const out: FormValues = {};
   for (const [k, v] of Object.entries(body as Record<string, unknown>)) {
     const last = Array.isArray(v) ? v[v.length - 1] : v;
@@ -103,10 +103,10 @@ export function update(posted: FormValues): UpdateOutcome {
     fresh = true;
     structural = true;
   } else if (posted._op?.startsWith(CG_LIFT_OP)) {
-    values = applyCgLiftOp(values, posted._op, units); // the axle-lift tool's "Apply to load state" (server/forms/axle-lift-form.ts)
+    values = applyCgLiftOp(values, posted._op, units); // the axle-lift tool's "Apply to load state" (form/axle-lift-form.ts)
     structural = true;
   } else if (posted._op?.startsWith(SIZING_OP)) {
-    values = applySizingOp(values, posted._op, units); // the sizing panel's apply / undo (server/forms/sizing-apply.ts)
+    values = applySizingOp(values, posted._op, units); // the sizing panel's apply / undo (form/sizing-apply.ts)
     structural = true;
   } else if (posted._op) {
     const op = parseListOp(posted._op);

@@ -1,5 +1,5 @@
 // `lockstep packet` and `lockstep store`, run in process (spec: docs/evidence-packet.md; SHA-256 test vector source: FIPS 180-2, in test/core). Exit codes per docs (0 ok, 2 invalid input);
-// the revision id is the SHA-256 of the canonical design JSON (server/store/revision-id.ts).
+// the revision id is the SHA-256 of the canonical design JSON (store/revision-id.ts).
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -7,7 +7,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../../cli/main.ts';
 import { demoDesign } from '../../core/index.ts';
-import { revisionId } from '../../server/store/revision-id.ts';
+import { revisionId } from '../../store/revision-id.ts';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-cli-store-'));
 let saved: string | undefined;

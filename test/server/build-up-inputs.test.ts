@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
+import { designToValues, type FormValues } from '../../form/design-form.ts';
 import { messageId } from '../../views/fields.ts';
 import { formBody, openPage, postForm, unescapeAttr } from './form-post.ts';
 

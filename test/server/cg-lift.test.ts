@@ -6,8 +6,8 @@ import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { applyCgLiftOp, cgLiftOp } from '../../server/forms/axle-lift-form.ts';
-import { designToValues, type FormValues, readForm } from '../../server/forms/design-form.ts';
+import { applyCgLiftOp, cgLiftOp } from '../../form/axle-lift-form.ts';
+import { designToValues, type FormValues, readForm } from '../../form/design-form.ts';
 import { update } from '../../server/routes/workbench.ts';
 import { KNOWN_LIFT, knownLiftFile, knownLiftGain } from '../fixtures/known-lift.ts';
 

@@ -3,7 +3,7 @@
 // errors declared once and tested as data).
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { APP_ERROR_STATUS, AppError, appErrors } from '../../server/errors.ts';
+import { APP_ERROR_STATUS, AppError, appErrors } from '../../form/errors.ts';
 
 const docs = readFileSync(new URL('../../docs/errors.md', import.meta.url), 'utf8');
 

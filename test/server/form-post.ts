@@ -3,7 +3,7 @@
  * way htmx sends it, and posting it through inject (no network).
  */
 import type { FastifyInstance, LightMyRequestResponse } from 'fastify';
-import type { FormValues } from '../../server/forms/design-form.ts';
+import type { FormValues } from '../../form/design-form.ts';
 
 /** An attribute value as the browser reads it (the escaping of views/html.ts undone). */
 export const unescapeAttr = (s: string) => s.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');

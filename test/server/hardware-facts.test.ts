@@ -8,7 +8,7 @@ import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
+import { designToValues, type FormValues } from '../../form/design-form.ts';
 import { postForm } from './form-post.ts';
 
 let app: FastifyInstance;

@@ -1,10 +1,10 @@
-// Nothing typed is lost on the workbench form (server/forms/keep-typed.ts, issue 15 point 4): fields of a type
+// Nothing typed is lost on the workbench form (form/keep-typed.ts, issue 15 point 4): fields of a type
 // switched away are carried in `_stash` and come back; new build-up rows are drafts until filled.
 // Expectations are hand-derived from the demo design's values (core demoDesign) and the list rules below.
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
-import { applyListOp, designToValues, type FormValues, readForm } from '../../server/forms/design-form.ts';
-import { keepSwitchedOut, withoutDraftRows } from '../../server/forms/keep-typed.ts';
+import { applyListOp, designToValues, type FormValues, readForm } from '../../form/design-form.ts';
+import { keepSwitchedOut, withoutDraftRows } from '../../form/keep-typed.ts';
 import { update } from '../../server/routes/workbench.ts';
 
 const demo = (): FormValues => designToValues(demoDesign(), 'metric');

@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { designToValues } from '../../server/forms/design-form.ts';
+import { designToValues } from '../../form/design-form.ts';
 import { type Answer, chooseEncoding, ResponseCache } from '../../server/response-cache.ts';
 import { answers, update } from '../../server/routes/workbench.ts';
 import { raw } from '../../views/html.ts';

@@ -1,14 +1,14 @@
 /**
  * The sizing panel on the workbench (views/panels/sizing.ts) and its apply / undo operation
- * (server/forms/sizing-apply.ts): applying the recommended part writes it into the form, the design then
+ * (form/sizing-apply.ts): applying the recommended part writes it into the form, the design then
  * passes the curve rules in every load state, and "Undo" restores the replaced value.
  * Failing design (test data): the demo van with a 66 mm rear piston and no valve fails lock order. No outside
  * values here: the rules are those of core/rules, whose sources are cited in test/core/rules.
  */
 import { describe, expect, it } from 'vitest';
 import { demoDesign, type DesignFile, sizeDesign } from '../../core/index.ts';
-import { designToValues, readForm } from '../../server/forms/design-form.ts';
-import { applySizingOp, SIZING_UNDO_FIELD, sizingOp } from '../../server/forms/sizing-apply.ts';
+import { designToValues, readForm } from '../../form/design-form.ts';
+import { applySizingOp, SIZING_UNDO_FIELD, sizingOp } from '../../form/sizing-apply.ts';
 import { update } from '../../server/routes/workbench.ts';
 import { buildApp } from '../../server/app.ts';
 import { fieldsWithMessages } from '../../views/pages/workbench.ts';

@@ -8,8 +8,8 @@ import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { designToValues } from '../../server/forms/design-form.ts';
-import { revisionId } from '../../server/store/revision-id.ts';
+import { designToValues } from '../../form/design-form.ts';
+import { revisionId } from '../../store/revision-id.ts';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-app-store-'));
 let app: FastifyInstance;

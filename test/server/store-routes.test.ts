@@ -8,10 +8,10 @@ import formbody from '@fastify/formbody';
 import Fastify, { type FastifyInstance } from 'fastify';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { demoDesign, type DesignFile } from '../../core/index.ts';
-import { designToValues } from '../../server/forms/design-form.ts';
+import { designToValues } from '../../form/design-form.ts';
 import { packetRoutes } from '../../server/routes/packet.ts';
 import { storeRoutes } from '../../server/routes/store.ts';
-import { revisionId } from '../../server/store/revision-id.ts';
+import { revisionId } from '../../store/revision-id.ts';
 
 let dir: string;
 let app: FastifyInstance;

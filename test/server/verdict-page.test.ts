@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { demoDesign, type DesignFile, evaluate } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { designToValues } from '../../server/forms/design-form.ts';
+import { designToValues } from '../../form/design-form.ts';
 import { formBody, openPage, postForm } from './form-post.ts';
 
 let app: FastifyInstance;

@@ -12,9 +12,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { BODY_LIMIT } from '../../server/errors.ts';
+import { BODY_LIMIT } from '../../form/errors.ts';
 import { sourceMounts, writePublic } from '../../server/static-assets.ts';
-import { designToValues, type FormValues } from '../../server/forms/design-form.ts';
+import { designToValues, type FormValues } from '../../form/design-form.ts';
 import { HTMX_CONFIG } from '../../views/layout.ts';
 import { formBody, openPage, postForm } from './form-post.ts';
 

@@ -4,7 +4,7 @@
 // Unit: 1 in = 25.4 mm exactly (NIST SP 811 B.8).
 import { describe, expect, it } from 'vitest';
 import { demoDesign, evaluate, VERIFY_NOTE } from '../../core/index.ts';
-import { designToValues, readForm } from '../../server/forms/design-form.ts';
+import { designToValues, readForm } from '../../form/design-form.ts';
 import { hardwareInputs, hardwarePanel, pedalTravelChart, pitfallsPanel } from '../../views/panels/hardware.ts';
 import type { ResultContext } from '../../views/panels/index.ts';
 

@@ -4,7 +4,7 @@
 // Cheat Sheet rule #1 (user text escaped in HTML); 1 ft = 0.3048 m exactly (NIST SP 811 B.8).
 import { describe, expect, it } from 'vitest';
 import { demoDesign, evaluate } from '../../core/index.ts';
-import { designToValues, readForm } from '../../server/forms/design-form.ts';
+import { designToValues, readForm } from '../../form/design-form.ts';
 import { limitsInputs, limitsPanel, tractionChart } from '../../views/panels/limits.ts';
 import type { ResultContext } from '../../views/panels/index.ts';
 

@@ -2,9 +2,9 @@
 // rule #1: & < > " ' escaped in element content and quoted attribute values).
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';
-import { evaluateForPacket } from '../../server/packet/build-packet.ts';
-import { packetContent } from '../../server/packet/packet-content.ts';
-import type { DesignSummary } from '../../server/store/design-store.ts';
+import { evaluateForPacket } from '../../packet/build-packet.ts';
+import { packetContent } from '../../packet/packet-content.ts';
+import type { DesignSummary } from '../../store/design-store.ts';
 import { storeInputsPanel } from '../../views/panels/store.ts';
 import { designsListView, diffView, historyView, packetHtml } from '../../views/store-views.ts';
 

@@ -7,7 +7,7 @@
  * - .msg slots under each field, updated out of band.
  */
 import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
-import type { FormValues } from '../../server/forms/design-form.ts';
+import type { FormValues } from '../../form/design-form.ts';
 import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';

@@ -1,6 +1,6 @@
 /** Front and rear brakes: tyre radius, disc or drum, and that type's figures. */
 import type { UnitSystem } from '../../core/index.ts';
-import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
+import { type FormValues, formatFieldNumber } from '../../form/design-form.ts';
 import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, prefixLabels, selectField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';

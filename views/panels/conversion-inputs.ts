@@ -1,11 +1,11 @@
 /**
  * Inputs of the conversion: the optional `build_up` block (base vehicle as weighed, items removed and added,
  * occupant mass, seats, payload, tanks) and the optional `ratings` block (docs/build-up.md). Every field is
- * optional here: a block left empty stays out of the design (server/forms/design-form.ts prunes empty blocks).
- * Lists may be emptied and started again (EMPTYABLE_LISTS in server/forms/design-form.ts).
+ * optional here: a block left empty stays out of the design (form/design-form.ts prunes empty blocks).
+ * Lists may be emptied and started again (EMPTYABLE_LISTS in form/design-form.ts).
  */
 import { CG_HEIGHT_SOURCES, OCCUPANT_MASSES, type UnitSystem } from '../../core/index.ts';
-import type { FormValues } from '../../server/forms/design-form.ts';
+import type { FormValues } from '../../form/design-form.ts';
 import {
   type InputContext,
   blockMessage,

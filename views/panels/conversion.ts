@@ -3,7 +3,7 @@
  * against the ratings per load state, and where each CG height comes from (axle lift, build-up, entered).
  */
 import { buildUp, type BuildUpResult, type MassTotals } from '../../core/index.ts';
-import { designLiftDefaults, startingLiftValues } from '../../server/forms/axle-lift-form.ts';
+import { designLiftDefaults, startingLiftValues } from '../../form/axle-lift-form.ts';
 import { axleLiftBlock } from '../axle-lift-view.ts';
 import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';

@@ -1,6 +1,6 @@
 /** Master cylinder, pedal, booster, circuit split and the rear pressure valve (with the load-sensing table). */
 import type { UnitSystem } from '../../core/index.ts';
-import { type FormValues, formatFieldNumber } from '../../server/forms/design-form.ts';
+import { type FormValues, formatFieldNumber } from '../../form/design-form.ts';
 import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField, triStateField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';

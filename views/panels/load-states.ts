@@ -1,6 +1,6 @@
 /** Load states: one row each (mass, front axle load, CG height); add, duplicate, remove. */
 import type { UnitSystem } from '../../core/index.ts';
-import type { FormValues } from '../../server/forms/design-form.ts';
+import type { FormValues } from '../../form/design-form.ts';
 import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, prefixLabels, selectField, textField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';

@@ -3,7 +3,7 @@
  * verdict); the list in views/panels/index.ts decides the order. See DEVELOPERS.md, "Workbench panels".
  */
 import type { DesignFile, EvaluationResult, UnitSystem, Warning } from '../../core/index.ts';
-import type { FormValues } from '../../server/forms/design-form.ts';
+import type { FormValues } from '../../form/design-form.ts';
 import type { InputContext } from '../fields.ts';
 import type { SafeHtml } from '../html.ts';
 
@@ -27,7 +27,7 @@ export interface Panel {
   /** Stable id; the panel's section gets id="panel-<id>" (its input section "panel-<id>-inputs" when it has both). */
   id: string;
   title: string;
-  /** Inputs, inside the design form. Field names are design paths (server/forms/design-form.ts). */
+  /** Inputs, inside the design form. Field names are design paths (form/design-form.ts). */
   inputs?: (ctx: InputContext) => SafeHtml;
   /** Results, rendered only for a valid design. */
   results?: (ctx: ResultContext) => SafeHtml;

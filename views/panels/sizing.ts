@@ -2,13 +2,13 @@
  * The sizing assistant (core/sizing, issue 5) on the workbench: the band of fixed front shares per rule and
  * load state, the parts that give the recommended share (each with an "Apply" button), the master-cylinder
  * bore, the rear-valve margin map when no fixed split works, the balance-bar setting, and the robustness
- * histogram. "Apply" posts the form with `_op = size:apply:<path>=<value>` (server/forms/sizing-apply.ts);
+ * histogram. "Apply" posts the form with `_op = size:apply:<path>=<value>` (form/sizing-apply.ts);
  * the inputs panel then offers "Undo", which applies the replaced value again.
  * Deferred (computed when in view). The page runs the Monte Carlo with PAGE_SAMPLES samples, only when the
  * "Run robustness analysis" button asks for it; `lockstep size` defaults to 100 000.
  */
 import { CAUTION, PA_PER_BAR, type SizingResult, sizeDesign, type UnitSystem, VERIFY_NOTE } from '../../core/index.ts';
-import { sizingOp, SIZING_UNDO_FIELD } from '../../server/forms/sizing-apply.ts';
+import { sizingOp, SIZING_UNDO_FIELD } from '../../form/sizing-apply.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText } from '../chart.ts';
 import { numberField, selectField } from '../fields.ts';
 import { fixed, shownUnit } from '../format.ts';

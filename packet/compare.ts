@@ -3,7 +3,7 @@
  * Gives the curves of both overlaid as a plotly spec, the per-load-state figures and the check verdicts
  * next to each other, and the field-level differences of the inputs.
  */
-import { type DesignFile, type DiffEntry, designDiff, type EvaluationResult } from '../../core/index.ts';
+import { type DesignFile, type DiffEntry, designDiff, type EvaluationResult } from '../core/index.ts';
 import { checkRows, fmtNum } from './packet-content.ts';
 
 export interface CompareSide {

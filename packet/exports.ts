@@ -4,7 +4,7 @@
  * break quoted, quotes doubled); cells a spreadsheet would run as a formula (=, +, -, @ first) get a
  * leading apostrophe when they are text, not numbers.
  */
-import { type DesignFile, type EvaluationResult, VERIFY_NOTE } from '../../core/index.ts';
+import { type DesignFile, type EvaluationResult, VERIFY_NOTE } from '../core/index.ts';
 
 export function csvCell(v: unknown): string {
   if (v === null || v === undefined) return '';

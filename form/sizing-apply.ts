@@ -5,8 +5,8 @@
  * the new design in the user's units. The value it replaced is kept in the page control `_sizing_undo`
  * ("<path>=<JSON>"), which the panel offers as "Undo" (an apply of the old value).
  */
-import { applySizingChange, isSizingPath, type UnitSystem } from '../../core/index.ts';
-import { appErrors } from '../errors.ts';
+import { applySizingChange, isSizingPath, type UnitSystem } from '../core/index.ts';
+import { appErrors } from './errors.ts';
 import { designToValues, type FormValues, readForm } from './design-form.ts';
 
 export const SIZING_OP = 'size:apply:';

@@ -1,8 +1,8 @@
-// Titles and number formats of the generic result sections in the evidence packet (server/packet/packet-content.ts).
+// Titles and number formats of the generic result sections in the evidence packet (packet/packet-content.ts).
 // Sources: unit symbols as in NIST SP 811 (2008) section 5 and table 6 (m/s², km/h, °, °C, N·m); the expected
 // roundings are hand-derived below (4 significant digits; braking rates and utilisations to 3 decimals).
 import { describe, expect, it } from 'vitest';
-import { columnTitle, fmtKeyed, fmtSig, recordTables, textOf } from '../../server/packet/packet-content.ts';
+import { columnTitle, fmtKeyed, fmtSig, recordTables, textOf } from '../../packet/packet-content.ts';
 
 describe('column titles from result keys', () => {
   it('names the unit of the key suffix in brackets', () => {

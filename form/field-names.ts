@@ -1,6 +1,6 @@
 /**
  * The gate every posted form passes before any of it is read. A form field's name is a design-file path
- * (server/forms/design-form.ts), and names come from the network, so a name is refused unless it is a path the
+ * (form/design-form.ts), and names come from the network, so a name is refused unless it is a path the
  * design could have:
  * - no segment is `__proto__`, `constructor`, `prototype` or any other member of Object.prototype (such a key
  *   would reach the shared prototype, or a function where a value is expected);
@@ -12,8 +12,8 @@
  * Page controls (names starting with "_") are single words and are never turned into paths.
  */
 import { z } from 'zod';
-import { designShape, formatPath } from '../../core/index.ts';
-import { AppError } from '../errors.ts';
+import { designShape, formatPath } from '../core/index.ts';
+import { AppError } from './errors.ts';
 
 /** Keys that are never accepted: Object.prototype's own members as this module loads, and the special names. */
 export const FORBIDDEN_KEYS: ReadonlySet<string> = new Set([...Object.getOwnPropertyNames(Object.prototype), '__proto__', 'constructor', 'prototype']);
@@ -116,7 +116,7 @@ function findProblem(name: string): string | null {
   if (path === null) return 'not written as a field of the page (parts separated by dots, list positions as [0], [1], ...)';
   const bad = path.find((k) => typeof k === 'string' && FORBIDDEN_KEYS.has(k));
   if (bad !== undefined) return `"${bad}" is a reserved word and never the name of an input`;
-  if (path[0] === 'lift') return pathProblem(null, path, 1); // the axle-lift tool (server/forms/axle-lift-form.ts)
+  if (path[0] === 'lift') return pathProblem(null, path, 1); // the axle-lift tool (form/axle-lift-form.ts)
   designSchema ??= z.object(designShape);
   return pathProblem(defOf(designSchema), path, 0);
 }

@@ -8,10 +8,10 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION, demoDesign, type DesignFile, type EvaluationResult, VERIFY_NOTE } from '../../core/index.ts';
-import { buildPacket, evaluateForPacket } from '../../server/packet/build-packet.ts';
-import { checkRows, fmtNum, packetContent } from '../../server/packet/packet-content.ts';
-import { latin1, renderPacketPdf } from '../../server/packet/packet-pdf.ts';
-import { revisionId } from '../../server/store/revision-id.ts';
+import { buildPacket, evaluateForPacket } from '../../packet/build-packet.ts';
+import { checkRows, fmtNum, packetContent } from '../../packet/packet-content.ts';
+import { latin1, renderPacketPdf } from '../../packet/packet-pdf.ts';
+import { revisionId } from '../../store/revision-id.ts';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-packet-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

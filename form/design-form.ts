@@ -14,7 +14,7 @@
  *   "" (not stated) leaves the key out, "true" / "false" set it. Other text is reported on the field.
  * - everything else is text, sent as typed (enums are <select>s); empty text leaves the key out. White space is
  *   kept as typed, as in the design file (a label of spaces is valid in both; the form never refuses a file's value).
- * - names are checked first (server/forms/field-names.ts): prototype words, odd names and list positions beyond
+ * - names are checked first (form/field-names.ts): prototype words, odd names and list positions beyond
  *   the schema's list limits are refused.
  * - objects that end up without keys are left out (an optional block nobody filled in stays absent).
  */
@@ -32,7 +32,7 @@ import {
   formatPath,
   parseQuantity,
   readDesign,
-} from '../../core/index.ts';
+} from '../core/index.ts';
 import { FORBIDDEN_KEYS, fieldNameProblem } from './field-names.ts';
 
 /** Field name -> text as shown or typed. */
@@ -495,7 +495,7 @@ export function applyListOp(values: FormValues, op: ListOp, maxEntries = 64): Fo
   const from = [...idx];
   const emptyable = EMPTYABLE_LISTS.find((l) => l.list === op.list);
   if (op.op === 'add' && emptyable) {
-    // a new entry of these lists starts blank (a draft until filled, server/forms/keep-typed.ts), in the last one's group
+    // a new entry of these lists starts blank (a draft until filled, form/keep-typed.ts), in the last one's group
     if (idx.length >= maxEntries) return values;
     const at = idx.length === 0 ? 0 : idx.at(-1)! + 1;
     const out = { ...values };

@@ -3,7 +3,7 @@
 // run it as a formula). Curve values are compared with evaluate(design, { curves: true }) of the same design.
 import { describe, expect, it } from 'vitest';
 import { demoDesign, evaluate } from '../../core/index.ts';
-import { checksCsv, csv, csvCell, curvesCsv, designJson } from '../../server/export/exports.ts';
+import { checksCsv, csv, csvCell, curvesCsv, designJson } from '../../packet/exports.ts';
 
 describe('csvCell', () => {
   it('quotes commas, quotes and line breaks, doubling quotes (RFC 4180 §2.6, §2.7)', () => {

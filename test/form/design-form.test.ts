@@ -13,7 +13,7 @@ import {
   readForm,
   unitOfField,
   valuesToInput,
-} from '../../server/forms/design-form.ts';
+} from '../../form/design-form.ts';
 
 describe('field names are design paths', () => {
   it('parseFieldPath reads dots and indices', () => {

@@ -8,7 +8,7 @@ import { mkdirSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import Database from 'better-sqlite3';
-import { canonicalJson, type DesignFile, type DiffEntry, designDiff, readDesign, type Warning } from '../../core/index.ts';
+import { canonicalJson, type DesignFile, type DiffEntry, designDiff, readDesign, type Warning } from '../core/index.ts';
 import { StoreError, storeErrors } from './errors.ts';
 import { migrate } from './migrations.ts';
 import { revisionIdOfCanonical } from './revision-id.ts';

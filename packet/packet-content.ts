@@ -18,7 +18,7 @@ import {
   unitOfDiffPath,
   VERIFY_NOTE,
   verdictItems,
-} from '../../core/index.ts';
+} from '../core/index.ts';
 import { type ChartSeries, chartSvg } from './chart-svg.ts';
 
 export type Block =

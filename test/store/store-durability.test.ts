@@ -9,10 +9,10 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
-import { openStore } from '../../server/store/design-store.ts';
+import { openStore } from '../../store/design-store.ts';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const child = path.join(here, 'fixtures', 'save-loop.ts');
+const child = path.join(here, 'save-loop.ts');
 const dir = mkdtempSync(path.join(tmpdir(), 'lockstep-durability-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

@@ -2,7 +2,7 @@
  * The axle-lift form of the conversion panel (views/axle-lift-view.ts) and the `lockstep-axle-lift/1` file
  * (docs/axle-lift.md), both ways. Field names are the file's paths behind the prefix `lift.`
  * (`lift.wheelbase_m`, `lift.level.front_axle_kg`, `lift.lifts[1].lift_height_m`), so lengths and masses are
- * shown and typed in the page's unit system exactly as in the design form (server/forms/design-form.ts).
+ * shown and typed in the page's unit system exactly as in the design form (form/design-form.ts).
  * One difference from the file: a lift's scale reading is one field, `lift.lifts[i].reading_kg`, with
  * `lift.lifts[i].read_axle` saying which axle stood on the scales (the file writes `front_axle_kg` or
  * `rear_axle_kg`).
@@ -12,8 +12,8 @@
  * `cg_height_uncertainty_m`, `cg_height_derived_from: "measured"` and adds `cg_height_m` to `overrides`
  * (docs/build-up.md, "Load states from the build-up").
  */
-import { type AxleLiftFile, type FieldIssue, readAxleLift, type UnitSystem } from '../../core/index.ts';
-import { appErrors } from '../errors.ts';
+import { type AxleLiftFile, type FieldIssue, readAxleLift, type UnitSystem } from '../core/index.ts';
+import { appErrors } from './errors.ts';
 import {
   applyListOp,
   convertValues,

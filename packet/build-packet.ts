@@ -2,7 +2,7 @@
  * One design → its evaluation (with curves) → the packet PDF. The CLI and the page both come here, so
  * the packet for a revision always has the numbers the page and `lockstep evaluate` show for it.
  */
-import { type DesignFile, evaluate, type EvaluationResult, readDesign, type Warning } from '../../core/index.ts';
+import { type DesignFile, evaluate, type EvaluationResult, readDesign, type Warning } from '../core/index.ts';
 import { revisionId } from '../store/revision-id.ts';
 import { packetPdf } from './packet-pdf.ts';
 

@@ -7,10 +7,10 @@ import path from 'node:path';
 import Database from 'better-sqlite3';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { canonicalJson, demoDesign, type DesignFile } from '../../core/index.ts';
-import { DB_FILE_NAME, dataDir, DesignStore, openStore } from '../../server/store/design-store.ts';
-import { StoreError } from '../../server/store/errors.ts';
-import { MIGRATIONS, SCHEMA_VERSION } from '../../server/store/migrations.ts';
-import { revisionId, revisionIdOfCanonical } from '../../server/store/revision-id.ts';
+import { DB_FILE_NAME, dataDir, DesignStore, openStore } from '../../store/design-store.ts';
+import { StoreError } from '../../store/errors.ts';
+import { MIGRATIONS, SCHEMA_VERSION } from '../../store/migrations.ts';
+import { revisionId, revisionIdOfCanonical } from '../../store/revision-id.ts';
 
 const clone = (d: DesignFile): DesignFile => JSON.parse(JSON.stringify(d)) as DesignFile;
 let dir: string;

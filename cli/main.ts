@@ -3,15 +3,11 @@
  * process; the process wrapper (bin/lockstep.mjs) maps the returned code to the exit status.
  */
 import { CAUTION } from '../core/caution.ts';
-import { CliError } from './errors.ts';
+import { cliErrors, isCommandError } from './errors.ts';
 import { EXIT_CODES_TEXT } from './exit-code.ts';
+import type { Command, CommandOutput } from './output.ts';
 
-export interface CommandOutput {
-  stdout(text: string): void;
-  stderr(text: string): void;
-}
-
-type Command = (argv: string[], out: CommandOutput) => number | Promise<number>;
+export type { CommandOutput } from './output.ts';
 
 // Each command is imported only when it runs: the packet (pdfkit) and the store (SQLite) are not loaded to evaluate.
 const commands: Record<string, { load: () => Promise<Command>; summary: string }> = {
@@ -52,15 +48,12 @@ export async function runCli(argv: string[], out: CommandOutput): Promise<number
   }
   try {
     return await (await cmd.load())(rest, out);
-  } catch (e) {
-    if (e instanceof CliError) {
-      out.stderr([`lockstep ${name}: ${e.message} [${e.code}]`, ...e.details.map((d) => `  - ${d}`)].join('\n'));
-      return 2;
-    }
-    if (e instanceof TypeError && (e as NodeJS.ErrnoException).code?.startsWith('ERR_PARSE_ARGS')) {
-      out.stderr(`lockstep ${name}: ${e.message} [CLI_ERR_USAGE]`);
-      return 2;
-    }
-    throw e;
+  } catch (thrown) {
+    // node:util parseArgs refuses an unknown option or a missing value with a TypeError of its own
+    const parseArgs = thrown instanceof TypeError && (thrown as NodeJS.ErrnoException).code?.startsWith('ERR_PARSE_ARGS');
+    const e = parseArgs ? cliErrors.usage((thrown as Error).message) : thrown;
+    if (!isCommandError(e)) throw thrown;
+    out.stderr([`lockstep ${name}: ${e.message} [${e.code}]`, ...e.details.map((d) => `  - ${d}`)].join('\n'));
+    return 2;
   }
 }

@@ -4,6 +4,7 @@
  * read. `-` means standard input.
  */
 import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
+import { LockstepError } from '../core/errors.ts';
 import { cliErrors, MAX_INPUT_BYTES } from './errors.ts';
 
 const CHUNK = 64 * 1024;
@@ -47,7 +48,7 @@ export function readJsonFile(file: string): unknown {
     if (st.isFile() && st.size > MAX_INPUT_BYTES) throw cliErrors.fileTooLarge(file, st.size);
     bytes = readCapped(fd, MAX_INPUT_BYTES);
   } catch (e) {
-    if (e instanceof Error && e.name === 'CliError') throw e;
+    if (e instanceof LockstepError) throw e;
     throw cliErrors.fileUnreadable(file, (e as Error).message);
   } finally {
     if (!stdin) closeSync(fd);

@@ -21,6 +21,7 @@
  * F.2.2.1, from memory). Lift heights, lift angles, the wheelbase and the wheel-centre height carry the
  * standard uncertainties the user states. Inputs are taken as uncorrelated.
  */
+import { coreErrors } from './errors.ts';
 
 export type AxleEnd = 'front' | 'rear';
 
@@ -185,7 +186,7 @@ interface Layout {
 function readAxleOf(l: AxleLiftReading): AxleEnd {
   if (l.front_axle_kg !== undefined && l.rear_axle_kg === undefined) return 'front';
   if (l.rear_axle_kg !== undefined && l.front_axle_kg === undefined) return 'rear';
-  throw new Error('CORE_ERR_AXLE_LIFT_READING: each lift needs exactly one of front_axle_kg and rear_axle_kg');
+  throw coreErrors.axleLiftReading();
 }
 
 function layout(inp: AxleLiftInput): Layout {
@@ -208,7 +209,7 @@ function layout(inp: AxleLiftInput): Layout {
     const read = readAxleOf(l);
     const name = `lift ${i + 1} (${l.raised_axle} raised)`;
     const isAngle = l.lift_height_m === undefined;
-    if (isAngle && l.lift_angle_deg === undefined) throw new Error('CORE_ERR_AXLE_LIFT_MEASURE: each lift needs lift_height_m or lift_angle_deg');
+    if (isAngle && l.lift_angle_deg === undefined) throw coreErrors.axleLiftMeasure();
     out.liftIsAngle.push(isAngle);
     out.liftMeasure.push(
       isAngle
@@ -313,7 +314,7 @@ function combined(c: readonly number[], params: readonly Param[]): number {
 
 /** CG height from one or more axle lifts, with its GUM uncertainty budget and warnings. */
 export function axleLift(inp: AxleLiftInput): AxleLiftResult {
-  if (inp.lifts.length === 0) throw new Error('CORE_ERR_AXLE_LIFT_EMPTY: at least one lift is needed');
+  if (inp.lifts.length === 0) throw coreErrors.axleLiftEmpty();
   const lay = layout(inp);
   const v0 = lay.params.map((p) => p.value);
   const W = inp.level.front_axle_kg + inp.level.rear_axle_kg;

@@ -4,24 +4,16 @@
  * keys whose value is undefined left out (as JSON does), numbers normalised (-0 → 0; rounded to
  * CANONICAL_DIGITS significant digits, which removes conversion noise such as 0.30000000000000004, then
  * printed in the shortest round-trip form ECMAScript defines for Number.prototype.toString).
- * Non-finite numbers, functions, symbols and bigints have no JSON form and are refused.
+ * Non-finite numbers, functions, symbols and bigints have no JSON form and are refused (CORE_ERR_CANONICAL_*, a
+ * programming error at the caller: designs are parsed JSON).
  */
-/** A value that has no canonical JSON form (a programming error at the caller: designs are parsed JSON). */
-export class CanonicalJsonError extends Error {
-  constructor(
-    readonly code: 'CORE_ERR_CANONICAL_NON_FINITE' | 'CORE_ERR_CANONICAL_TYPE',
-    message: string,
-  ) {
-    super(message);
-    this.name = 'CanonicalJsonError';
-  }
-}
+import { coreErrors } from './errors.ts';
 
 /** Significant digits kept in canonical numbers: below the 15.95 digits a double carries. */
 export const CANONICAL_DIGITS = 15;
 
 export function canonicalNumber(n: number): string {
-  if (!Number.isFinite(n)) throw new CanonicalJsonError('CORE_ERR_CANONICAL_NON_FINITE', `${String(n)} has no JSON form (numbers must be finite)`);
+  if (!Number.isFinite(n)) throw coreErrors.canonicalNonFinite(null, n);
   if (n === 0) return '0';
   const rounded = Number(n.toPrecision(CANONICAL_DIGITS));
   // Next to the largest double, rounding up would overflow to Infinity: keep the number as it is.
@@ -37,8 +29,8 @@ function write(v: unknown, path: string, out: string[]): void {
     case 'number':
       try {
         out.push(canonicalNumber(v));
-      } catch (e) {
-        throw new CanonicalJsonError('CORE_ERR_CANONICAL_NON_FINITE', `${path || '(root)'}: ${(e as Error).message}`);
+      } catch {
+        throw coreErrors.canonicalNonFinite(path, v);
       }
       return;
     case 'string':
@@ -70,7 +62,7 @@ function write(v: unknown, path: string, out: string[]): void {
       return;
     }
     default:
-      throw new CanonicalJsonError('CORE_ERR_CANONICAL_TYPE', `${path || '(root)'}: a ${typeof v} has no JSON form`);
+      throw coreErrors.canonicalType(path, typeof v);
   }
 }
 

@@ -9,6 +9,7 @@
  */
 import type { Vehicle } from './design.ts';
 import { SECONDARY_FIGURES, SERVICE_FIGURES } from './rules/performance.ts';
+import { coreErrors } from './errors.ts';
 
 export interface CategoryFigures {
   /** Secondary-braking mean fully developed deceleration, m/s². */
@@ -30,7 +31,7 @@ const SERVICE_SOURCE = '71/320/EEC Annex II 2.1.1 ≈ UN R13 Annex 4 2.1.1 (Type
 
 /** The rule-set tables give every category a deceleration; a gap is a programming error. */
 function required(v: number | undefined, what: string): number {
-  if (v === undefined) throw Object.assign(new Error(`core/rules/performance.ts has no ${what}`), { code: 'CORE_ERR_RULE_TABLE' });
+  if (v === undefined) throw coreErrors.ruleTable(what);
   return v;
 }
 

@@ -3,6 +3,7 @@
  * chooses one in `build_up.occupant.basis` (or "custom" with their own figure); nothing is defaulted.
  */
 import { TO_SI } from './units.ts';
+import { coreErrors } from './errors.ts';
 
 export interface OccupantMass {
   id: string;
@@ -46,7 +47,7 @@ export type OccupantBasis = (typeof OCCUPANT_BASES)[number];
 /** The occupant mass of a basis, kg; `custom` takes the user's figure. */
 export function occupantMass(basis: OccupantBasis, customKg?: number): number {
   if (basis === 'custom') {
-    if (customKg === undefined) throw new Error('CORE_ERR_OCCUPANT_MASS: basis "custom" needs mass_kg');
+    if (customKg === undefined) throw coreErrors.occupantMass();
     return customKg;
   }
   return OCCUPANT_MASSES.find((o) => o.id === basis)!.mass_kg;

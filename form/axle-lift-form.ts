@@ -13,7 +13,7 @@
  * (docs/build-up.md, "Load states from the build-up").
  */
 import { type AxleLiftFile, type FieldIssue, readAxleLift, type UnitSystem } from '../core/index.ts';
-import { appErrors } from './errors.ts';
+import { formErrors } from './errors.ts';
 import {
   applyListOp,
   convertValues,
@@ -87,7 +87,7 @@ export function applyLiftRowOp(values: FormValues, op: string): FormValues {
   }
   const m = /^remove:(\d+)$/.exec(op);
   if (m) return applyListOp(values, { op: 'remove', list: 'lift.lifts', index: Number(m[1]) });
-  throw appErrors.unknownOperation(op);
+  throw formErrors.unknownOperation(op);
 }
 
 function setAt(root: Record<string, unknown>, path: string, value: unknown): void {
@@ -217,10 +217,10 @@ export function applyCgLiftOp(values: FormValues, op: string, units: UnitSystem)
   const m = /^cglift:apply:(.+)=([0-9.eE+-]+),([0-9.eE+-]+)$/.exec(op);
   const h = m ? Number(m[2]) : NaN;
   const u = m ? Number(m[3]) : NaN;
-  if (!m || !Number.isFinite(h) || !Number.isFinite(u)) throw appErrors.unknownOperation(op);
+  if (!m || !Number.isFinite(h) || !Number.isFinite(u)) throw formErrors.unknownOperation(op);
   const state = loadStatesOf(values).find((s) => s.id === m[1]);
   if (!state) {
-    throw appErrors.badRequest(`Load state "${m[1]!.slice(0, 60)}" is no longer in the design. Compute the CG height again and choose one of the load states listed.`);
+    throw formErrors.badRequest(`Load state "${m[1]!.slice(0, 60)}" is no longer in the design. Compute the CG height again and choose one of the load states listed.`);
   }
   const p = `load_states[${state.index}]`;
   const out: FormValues = { ...values };

@@ -13,7 +13,7 @@
  */
 import { z } from 'zod';
 import { designShape, formatPath } from '../core/index.ts';
-import { AppError } from './errors.ts';
+import { formErrors } from './errors.ts';
 
 /** Keys that are never accepted: Object.prototype's own members as this module loads, and the special names. */
 export const FORBIDDEN_KEYS: ReadonlySet<string> = new Set([...Object.getOwnPropertyNames(Object.prototype), '__proto__', 'constructor', 'prototype']);
@@ -121,16 +121,11 @@ function findProblem(name: string): string | null {
   return pathProblem(defOf(designSchema), path, 0);
 }
 
-/** The coded refusal of a form with a field name that cannot be read. */
-export function fieldNameError(name: string, why: string): AppError {
-  return new AppError('APP_ERR_FIELD_NAME', `The form field "${name.slice(0, 80)}" cannot be read: ${why}. The page never sends such a field; reload the page.`);
-}
-
 /** Throws APP_ERR_FIELD_NAME for the first name that cannot be read (or APP_ERR_TOO_MANY_FIELDS). */
 export function checkFieldNames(names: readonly string[]): void {
-  if (names.length > MAX_FIELDS) throw new AppError('APP_ERR_TOO_MANY_FIELDS', `The form has ${names.length} fields; at most ${MAX_FIELDS} are read. Reload the page.`);
+  if (names.length > MAX_FIELDS) throw formErrors.tooManyFields(names.length, MAX_FIELDS);
   for (const n of names) {
     const why = fieldNameProblem(n);
-    if (why !== null) throw fieldNameError(n, why);
+    if (why !== null) throw formErrors.fieldName(n, why);
   }
 }

@@ -6,7 +6,7 @@
  * ("<path>=<JSON>"), which the panel offers as "Undo" (an apply of the old value).
  */
 import { applySizingChange, isSizingPath, type UnitSystem } from '../core/index.ts';
-import { appErrors } from './errors.ts';
+import { formErrors } from './errors.ts';
 import { designToValues, type FormValues, readForm } from './design-form.ts';
 
 export const SIZING_OP = 'size:apply:';
@@ -27,12 +27,12 @@ export function applySizingOp(values: FormValues, op: string, units: UnitSystem)
   const body = op.slice(SIZING_OP.length);
   const eq = body.indexOf('=');
   const path = eq > 0 ? body.slice(0, eq) : '';
-  if (!isSizingPath(path)) throw appErrors.unknownOperation(op);
+  if (!isSizingPath(path)) throw formErrors.unknownOperation(op);
   let value: unknown;
   try {
     value = JSON.parse(body.slice(eq + 1));
   } catch {
-    throw appErrors.unknownOperation(op);
+    throw formErrors.unknownOperation(op);
   }
   const reading = readForm(values, units);
   if (!reading.ok) return values;
@@ -42,7 +42,7 @@ export function applySizingOp(values: FormValues, op: string, units: UnitSystem)
     changed = applySizingChange(reading.design, path, value);
   } catch {
     // the proposal names a part the design no longer has (e.g. a balance bar setting without a balance bar)
-    throw appErrors.sizingNotApplicable(`it changes a part this design does not have`);
+    throw formErrors.sizingNotApplicable(`it changes a part this design does not have`);
   }
   const next = designToValues(changed, units);
   // other carried page data (names starting with "_") travel along, except what the rebuilt form states anew

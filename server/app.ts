@@ -9,11 +9,10 @@ import compress from '@fastify/compress';
 import formbody from '@fastify/formbody';
 import helmet from '@fastify/helmet';
 import fastifyStatic from '@fastify/static';
-import Fastify, { type FastifyError, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
+import Fastify, { type FastifyInstance } from 'fastify';
 import type { AssetUrls } from '../views/layout.ts';
-import { messagePage, statusBlock } from '../views/pages/workbench.ts';
-import { AppError, appErrors, BODY_LIMIT, fromFrameworkError } from '../form/errors.ts';
-import { sendHtml } from './html-reply.ts';
+import { BODY_LIMIT } from './errors.ts';
+import { errorReplies } from './error-reply.ts';
 import { workbenchRoutes } from './routes/workbench.ts';
 import { cgLiftRoutes } from './routes/cg-lift.ts';
 import { packetRoutes } from './routes/packet.ts';
@@ -67,18 +66,6 @@ export const CSP_DIRECTIVES = {
   upgradeInsecureRequests: null,
 };
 
-const wantsFragment = (req: FastifyRequest) => req.headers['hx-request'] === 'true';
-const wantsHtml = (req: FastifyRequest) => String(req.headers.accept ?? '').includes('text/html');
-
-function sendError(req: FastifyRequest, reply: FastifyReply, e: AppError, assets: AssetUrls): FastifyReply {
-  if (wantsFragment(req)) return sendHtml(reply, statusBlock('error', { message: e.message, code: e.code }), e.statusCode);
-  if (wantsHtml(req)) {
-    const title = e.statusCode === 404 ? 'Page not found' : 'Request not handled';
-    return sendHtml(reply, messagePage(assets, title, e.message, e.code), e.statusCode);
-  }
-  return reply.code(e.statusCode).send({ statusCode: e.statusCode, code: e.code, message: e.message });
-}
-
 export function buildApp(opts: AppOptions = {}): FastifyInstance {
   const app = Fastify({ logger: opts.logger ?? false, bodyLimit: BODY_LIMIT, ...SERVER_LIMITS });
   requestGuard(app, { allowedHosts: opts.allowedHosts }); // Host, cross-site changes, media types, connection cap
@@ -90,6 +77,7 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
     plotly: `${plotly!.prefix}plotly.min.js`,
   };
   app.decorate('assets', assets);
+  errorReplies(app, assets); // the one error answer of every route below (server/error-reply.ts)
 
   app.register(helmet, {
     contentSecurityPolicy: { useDefaults: false, directives: CSP_DIRECTIVES },
@@ -112,19 +100,6 @@ export function buildApp(opts: AppOptions = {}): FastifyInstance {
   app.register(storeRoutes); // design store: LOCKSTEP_DATA_DIR (default ./data), opened on first use
   app.register(packetRoutes);
 
-  app.setNotFoundHandler((req, reply) => sendError(req, reply, appErrors.notFound(req.url.split('?')[0]!.slice(0, 200)), assets));
-  app.setErrorHandler((err: FastifyError | AppError, req, reply) => {
-    let e: AppError;
-    const framework = err instanceof AppError ? null : fromFrameworkError(err, req.headers['content-type']);
-    if (err instanceof AppError) e = err;
-    else if (framework) e = framework;
-    else if (typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 500) e = appErrors.badRequest(err.message);
-    else {
-      req.log.error(err);
-      e = appErrors.internal();
-    }
-    return sendError(req, reply, e, assets);
-  });
   return app;
 }
 

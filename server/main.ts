@@ -4,15 +4,18 @@
  * bound address (and the loopback names) or a name in ALLOWED_HOSTS (server/plugins/request-guard.ts).
  */
 import { buildApp } from './app.ts';
+import type { LockstepError } from '../core/errors.ts';
+import { serverErrors } from './errors.ts';
 import { parseAllowedHosts } from './plugins/request-guard.ts';
 import { builtMount, PUBLIC_DIR, sourceMounts } from './static-assets.ts';
 
 export const DEFAULT_PORT = 3000;
+const printError = (e: LockstepError) => console.error(`${e.code}: ${e.message}`);
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
 
 const port = process.env.PORT ? Number(process.env.PORT) : DEFAULT_PORT;
 if (!Number.isInteger(port) || port < 0 || port > 65535) {
-  console.error(`APP_ERR_BAD_PORT: PORT="${process.env.PORT}" is not a port number (0 to 65535).`);
+  printError(serverErrors.badPort(process.env.PORT));
   process.exit(2);
 }
 const host = process.env.HOST?.trim() || '127.0.0.1';
@@ -33,12 +36,7 @@ try {
   const shown = host.includes(':') ? `[${host}]` : host;
   console.log(`Lockstep workbench: http://${shown}:${app.server.address() && typeof app.server.address() === 'object' ? (app.server.address() as { port: number }).port : port}/`);
 } catch (e) {
-  const code = (e as { code?: string }).code;
-  console.error(
-    code === 'EADDRINUSE'
-      ? `APP_ERR_PORT_IN_USE: port ${port} on ${host} is in use; start with another, e.g. PORT=3001 npm start`
-      : `APP_ERR_LISTEN: cannot listen on ${host}:${port}: ${(e as Error).message}`,
-  );
+  printError((e as { code?: string }).code === 'EADDRINUSE' ? serverErrors.portInUse(port, host) : serverErrors.listen(port, host, (e as Error).message));
   process.exit(1);
 }
 

@@ -9,7 +9,7 @@ import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import { canonicalJson, type DesignFile, type DiffEntry, designDiff, readDesign, type Warning } from '../core/index.ts';
-import { StoreError, storeErrors } from './errors.ts';
+import { storeErrors } from './errors.ts';
 import { migrate } from './migrations.ts';
 import { revisionIdOfCanonical } from './revision-id.ts';
 
@@ -199,7 +199,7 @@ export class DesignStore {
       | undefined;
     if (!row) throw storeErrors.revisionNotFound(id);
     if (revisionIdOfCanonical(row.canonical_json) !== row.id) {
-      throw new StoreError('STORE_ERR_REVISION_CORRUPT', `revision ${id} does not match its content; restore the data folder from a backup`, 500);
+      throw storeErrors.revisionCorrupt(id);
     }
     // Parsed again so that keys come back in the schema's order (the stored text has them sorted).
     const parsed: unknown = JSON.parse(row.canonical_json);

@@ -12,6 +12,7 @@ import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../form/
 import { type InputContext, numberField, selectField } from './fields.ts';
 import { fixed, shownUnit } from './format.ts';
 import { html, type SafeHtml } from './html.ts';
+import { formErrors } from '../form/errors.ts';
 
 const AXLES = [['front', 'front'], ['rear', 'rear']] as const;
 
@@ -81,7 +82,8 @@ ${numberField(ctx, 'lift.lift_angle_uncertainty_deg', 'Lift angle uncertainty', 
 </details>
 </form>`;
   const loose = (b.errors ?? []).filter((e) => !ctx.rendered.has(e.path)); // problems with no field of their own
-  const problem = b.problem ?? (b.errors?.length ? { message: `${b.errors.length} input${b.errors.length === 1 ? ' needs' : 's need'} attention (marked above).`, code: 'APP_ERR_AXLE_LIFT_INVALID', errors: loose } : undefined);
+  const invalid = b.errors?.length ? formErrors.axleLiftInvalid(b.errors.length, 'form') : null;
+  const problem = b.problem ?? (invalid ? { message: invalid.message, code: invalid.code, errors: loose } : undefined);
   return html`<div id="cg-lift" class="cg-lift" data-units="${b.units}" data-design="${JSON.stringify(b.designDefaults ?? {})}">
 ${form}
 <div id="cg-lift-result" aria-live="polite">${problem ? axleLiftErrors(problem.message, problem.code, problem.errors) : ''}${b.result ? axleLiftFragment(b.result, b.units, b.loadStates ?? []) : ''}</div>

@@ -2,7 +2,7 @@
 import { parseArgs } from 'node:util';
 import { type AxleLiftResultFile, axleLiftResultFile, BUDGET_SOURCE_WORDS, readAxleLift } from '../../core/index.ts';
 import { cliErrors } from '../errors.ts';
-import type { CommandOutput } from '../main.ts';
+import type { CommandOutput } from '../output.ts';
 import { readJsonFile } from '../read-json.ts';
 import { fmt, textTable } from '../table.ts';
 

@@ -11,11 +11,12 @@ import { join } from 'node:path';
 import { parseArgs } from 'node:util';
 import { CAUTION, type EvaluationResult, evaluate, readDesign, RULE_SELECTORS, SCENARIO_LABELS } from '../../core/index.ts';
 import { exitCodeFor } from '../exit-code.ts';
-import { CliError, cliErrors } from '../errors.ts';
+import type { LockstepError } from '../../core/errors.ts';
+import { cliErrors, isCommandError } from '../errors.ts';
 import { junitReport, type JunitCase } from '../junit.ts';
 import { readJsonFile } from '../read-json.ts';
 import { textReport } from '../text-report.ts';
-import type { CommandOutput } from '../main.ts';
+import type { CommandOutput } from '../output.ts';
 
 export function parseBrakingRates(text: string): number[] {
   const parts = text.split(',').map((s) => s.trim());
@@ -77,7 +78,7 @@ export function designFiles(paths: readonly string[]): { files: string[]; batch:
   return { files, batch: folder || files.length > 1 };
 }
 
-type Outcome = { file: string; status: number; result: EvaluationResult } | { file: string; status: 2; error: CliError };
+type Outcome = { file: string; status: number; result: EvaluationResult } | { file: string; status: 2; error: LockstepError };
 
 const STATUS_WORDS: Record<number, string> = { 0: 'PASS', 1: 'FAIL', 2: 'INVALID', 3: 'INCOMPLETE' };
 
@@ -153,7 +154,7 @@ export function evaluateCommand(argv: string[], out: CommandOutput): number {
     try {
       o = run(file);
     } catch (e) {
-      if (junitOut !== undefined && e instanceof CliError) writeFileSync(junitOut, junitReport([{ name: file, cases: junitCases({ file, status: 2, error: e }) }]));
+      if (junitOut !== undefined && isCommandError(e)) writeFileSync(junitOut, junitReport([{ name: file, cases: junitCases({ file, status: 2, error: e }) }]));
       throw e;
     }
     if (junitOut !== undefined) writeFileSync(junitOut, junitReport([{ name: file, cases: junitCases(o) }]));
@@ -166,7 +167,7 @@ export function evaluateCommand(argv: string[], out: CommandOutput): number {
     try {
       o = run(file);
     } catch (e) {
-      if (!(e instanceof CliError)) throw e;
+      if (!(isCommandError(e))) throw e;
       o = { file, status: 2, error: e };
     }
     outcomes.push(o);

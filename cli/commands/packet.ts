@@ -8,10 +8,10 @@ import { parseArgs } from 'node:util';
 import { readDesign } from '../../core/index.ts';
 import { buildPacket } from '../../packet/build-packet.ts';
 import { openStore } from '../../store/design-store.ts';
-import { CliError, cliErrors } from '../errors.ts';
+import { cliErrors } from '../errors.ts';
 import { exitCodeFor } from '../exit-code.ts';
 import { readJsonFile } from '../read-json.ts';
-import type { CommandOutput } from '../main.ts';
+import type { CommandOutput } from '../output.ts';
 import { parseRuleSelection } from './evaluate.ts';
 import { runStore } from './store.ts';
 
@@ -51,7 +51,7 @@ export async function packetCommand(argv: string[], out: CommandOutput): Promise
   try {
     writeFileSync(values.out, pdf);
   } catch (e) {
-    throw new CliError('CLI_ERR_FILE_UNWRITABLE', `cannot write "${values.out}": ${(e as Error).message} (choose another --out path)`);
+    throw cliErrors.fileUnwritable(values.out, (e as Error).message);
   }
   out.stdout(`wrote ${values.out} (${pdf.length} bytes), revision ${revisionId}\nVERDICT ${result.verdict.summary}`);
   return exitCodeFor(result.verdict);

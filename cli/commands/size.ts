@@ -9,7 +9,7 @@ import { sizeDesign, type SizingResult } from '../../core/sizing/sizing.ts';
 import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
 import { fmt, textTable } from '../table.ts';
-import type { CommandOutput } from '../main.ts';
+import type { CommandOutput } from '../output.ts';
 import { parseRuleSelection } from './evaluate.ts';
 
 const USAGE = 'usage: lockstep size FILE [--json] [--samples N] [--seed S] [--rules id,...] [--max-line-pressure-bar P]';

@@ -5,11 +5,10 @@
  */
 import { parseArgs } from 'node:util';
 import { type DesignStore, openStore } from '../../store/design-store.ts';
-import { StoreError } from '../../store/errors.ts';
 import { designJson } from '../../packet/exports.ts';
-import { CliError, cliErrors } from '../errors.ts';
+import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
-import type { CommandOutput } from '../main.ts';
+import type { CommandOutput } from '../output.ts';
 import { textTable } from '../table.ts';
 
 export const STORE_USAGE = [
@@ -24,15 +23,12 @@ export const STORE_USAGE = [
   'The store lives in LOCKSTEP_DATA_DIR (default ./data). Revisions may be given by a unique prefix of 8 or more characters.',
 ].join('\n');
 
-/** Runs `fn` on an open store, closing it afterwards and turning store errors into command-line errors. */
+/** Runs `fn` on an open store and closes it afterwards; the store's errors reach cli/main.ts as they are. */
 export function runStore<T>(fn: (s: DesignStore) => T, open: () => DesignStore = () => openStore()): T {
   let store: DesignStore | undefined;
   try {
     store = open();
     return fn(store);
-  } catch (e) {
-    if (e instanceof StoreError) throw new CliError(e.code, e.message, e.details);
-    throw e;
   } finally {
     store?.close();
   }

@@ -10,6 +10,7 @@ import { performanceHotRules, r13hHotRule } from './hot.ts';
 import { r13hRegenRules, r13hSystemRules } from './r13h-cases.ts';
 import { residualRules } from './residual.ts';
 import { performanceTowingRules, r13hCombinationParking } from './towing.ts';
+import { coreErrors } from '../errors.ts';
 
 const CATEGORIES: readonly Category[] = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'];
 
@@ -19,7 +20,7 @@ function extended(set: RuleSet, extra: readonly Rule[]): RuleSet {
 
 export function withCases(performance: RuleSet, unR13h: RuleSet, fmvss135: RuleSet): { performance: RuleSet; unR13h: RuleSet; fmvss135: RuleSet } {
   const service = unR13h.rules.find((r): r is DecelerationRule => r.id === 'un-r13h/service' && r.kind === 'service');
-  if (!service) throw new Error('CORE_ERR_RULE_TABLE: un-r13h has no service rule');
+  if (!service) throw coreErrors.ruleTable('service rule in un-r13h');
   return {
     performance: extended(performance, [...residualRules(CATEGORIES), ...performanceHotRules(CATEGORIES), ...performanceTowingRules(CATEGORIES)]),
     unR13h: extended(unR13h, [r13hHotRule(service.figures), ...r13hRegenRules, ...r13hSystemRules, r13hCombinationParking]),

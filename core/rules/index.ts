@@ -8,6 +8,7 @@ import { performance } from './performance.ts';
 import type { Category, Rule, RuleSet } from './rule-types.ts';
 import { unR13h } from './un-r13h.ts';
 import { withCases } from './case-sets.ts';
+import { coreErrors } from '../errors.ts';
 
 const withCaseRules = withCases(performance, unR13h, fmvss135);
 
@@ -38,7 +39,7 @@ export interface SelectedRule {
 /** The rule records a selection names, for one category, in registry order, each id once. */
 export function selectRules(selection: readonly string[], category: Category): SelectedRule[] {
   const unknown = selection.filter((s) => !RULE_SELECTORS.includes(s));
-  if (unknown.length > 0) throw new Error(`CORE_ERR_UNKNOWN_RULE: unknown rule id ${unknown.join(', ')}; known: ${RULE_SELECTORS.join(', ')}`);
+  if (unknown.length > 0) throw coreErrors.unknownRule(unknown, RULE_SELECTORS);
   const out: SelectedRule[] = [];
   const seen = new Set<string>();
   for (const set of RULE_SETS) {

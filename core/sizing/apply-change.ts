@@ -5,6 +5,7 @@
  * caller validates again with readDesign.
  */
 import type { DesignFile } from '../design.ts';
+import { coreErrors } from '../errors.ts';
 
 export const SIZING_PATHS = [
   'axles.front.brake.piston_diameters_mm',
@@ -23,13 +24,13 @@ export function isSizingPath(p: string): p is SizingPath {
 
 /** A copy of the design with `value` written at `path`; throws CORE_ERR_SIZING_PATH for any other path. */
 export function applySizingChange(design: DesignFile, path: string, value: unknown): DesignFile {
-  if (!isSizingPath(path)) throw new Error(`CORE_ERR_SIZING_PATH: "${path}" is not a path a sizing proposal changes; allowed: ${SIZING_PATHS.join(', ')}`);
+  if (!isSizingPath(path)) throw coreErrors.sizingPath(`"${path}" is not a path a sizing proposal changes; allowed: ${SIZING_PATHS.join(', ')}`);
   const copy = structuredClone(design) as unknown as Record<string, unknown>;
   const keys = path.split('.');
   let node = copy;
   for (const k of keys.slice(0, -1)) {
     const next = node[k];
-    if (next === null || typeof next !== 'object') throw new Error(`CORE_ERR_SIZING_PATH: the design has no "${k}" on the way to "${path}"`);
+    if (next === null || typeof next !== 'object') throw coreErrors.sizingPath(`the design has no "${k}" on the way to "${path}"`);
     node = next as Record<string, unknown>;
   }
   node[keys[keys.length - 1]!] = structuredClone(value);

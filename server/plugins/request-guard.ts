@@ -18,7 +18,7 @@
  *   closed at once, before a request is read.
  */
 import type { FastifyInstance, FastifyRequest } from 'fastify';
-import { appErrors } from '../../form/errors.ts';
+import { serverErrors } from '../errors.ts';
 
 /** Fastify options of the app (spread into Fastify({...}) in server/app.ts). */
 export const SERVER_LIMITS = {
@@ -91,7 +91,7 @@ export function requestGuard(app: FastifyInstance, opts: RequestGuardOptions = {
 
   app.addHook('onRequest', async (req) => {
     const host = req.headers.host ?? '';
-    if (!hostAllowed(host)) throw appErrors.hostNotAllowed(host);
-    if (!SAFE_METHODS.has(req.method) && crossSite(req)) throw appErrors.crossSite();
+    if (!hostAllowed(host)) throw serverErrors.hostNotAllowed(host);
+    if (!SAFE_METHODS.has(req.method) && crossSite(req)) throw serverErrors.crossSite();
   });
 }

@@ -6,10 +6,10 @@
  * in the browser after a reload: computed when complete, no problems marked otherwise), or `paste` (read the
  * `lockstep-axle-lift/1` text in `axle_lift`, fill the form from it and compute; the default when only
  * `axle_lift` is posted). Answers the whole #cg-lift block: 200 with the result, 422 with the problems marked
- * at their fields (htmx swaps 422, views/layout.ts). Codes: APP_ERR_AXLE_LIFT_EMPTY, APP_ERR_AXLE_LIFT_NOT_JSON,
- * APP_ERR_AXLE_LIFT_INVALID.
+ * at their fields (htmx swaps 422, views/layout.ts). Its codes are the APP_ERR_AXLE_LIFT_* of form/errors.ts.
  */
 import type { FastifyInstance } from 'fastify';
+import type { LockstepError } from '../../core/errors.ts';
 import { axleLiftResultFile, readAxleLift } from '../../core/index.ts';
 import { axleLiftBlock, type AxleLiftBlock } from '../../views/axle-lift-view.ts';
 import {
@@ -22,7 +22,7 @@ import {
   readLiftForm,
   startingLiftValues,
 } from '../../form/axle-lift-form.ts';
-import { appErrors } from '../../form/errors.ts';
+import { formErrors } from '../../form/errors.ts';
 import { sendHtml } from '../html-reply.ts';
 import { formValues, unitsOf } from './workbench.ts';
 
@@ -38,6 +38,7 @@ export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
     const loadStates = loadStatesOf(posted, units).filter((s) => s.id !== '');
     const block = (b: Omit<AxleLiftBlock, 'units' | 'values' | 'loadStates'>, status = 200) =>
       sendHtml(reply, axleLiftBlock({ units, values, loadStates, pasted: posted.axle_lift, ...b }), status);
+    const problem = (e: LockstepError, errors?: AxleLiftBlock['errors']) => block({ problem: { message: e.message, code: e.code, ...(errors ? { errors } : {}) } }, e.status);
 
     if (op === 'add' || op.startsWith('remove:')) {
       values = applyLiftRowOp(values, op);
@@ -47,19 +48,16 @@ export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
       const text = posted.axle_lift ?? '';
       if (!hasFields) values = startingLiftValues(units);
       if (text.trim() === '') {
-        return block({ problem: { message: 'Paste the axle-lift readings first (a lockstep-axle-lift/1 file, see docs/axle-lift.md), or fill in the form.', code: 'APP_ERR_AXLE_LIFT_EMPTY' } }, 422);
+        return problem(formErrors.axleLiftEmpty());
       }
       let input: unknown;
       try {
         input = JSON.parse(text);
       } catch (e) {
-        return block({ problem: { message: `The pasted readings are not valid JSON (${(e as Error).message}). The form is unchanged.`, code: 'APP_ERR_AXLE_LIFT_NOT_JSON' } }, 422);
+        return problem(formErrors.axleLiftNotJson((e as Error).message));
       }
       const r = readAxleLift(input);
-      if (!r.ok) {
-        const n = r.errors.length;
-        return block({ problem: { message: `${n} problem${n === 1 ? '' : 's'} in the pasted readings (the form is unchanged):`, code: 'APP_ERR_AXLE_LIFT_INVALID', errors: r.errors } }, 422);
-      }
+      if (!r.ok) return problem(formErrors.axleLiftInvalid(r.errors.length, 'pasted'), r.errors);
       values = liftFileToValues(r.input, units);
       return block({ result: axleLiftResultFile(r.input), pasted: '' });
     }
@@ -69,7 +67,7 @@ export async function cgLiftRoutes(app: FastifyInstance): Promise<void> {
       const r = readLiftForm(values, units);
       return block(r.ok ? { result: axleLiftResultFile(r.input) } : {});
     }
-    if (op !== 'compute') throw appErrors.unknownOperation(op);
+    if (op !== 'compute') throw formErrors.unknownOperation(op);
     const r = readLiftForm(values, units);
     if (!r.ok) return block({ errors: r.errors }, 422);
     return block({ result: axleLiftResultFile(r.input) });

@@ -11,7 +11,8 @@ import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
 import { packetContent } from '../../packet/packet-content.ts';
 import { renderPacketPdf } from '../../packet/packet-pdf.ts';
 import { revisionId } from '../../store/revision-id.ts';
-import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
+import { designFromBody, field, lazyStore, type StoreRouteOptions } from './store-context.ts';
+import { storeErrors } from '../../store/errors.ts';
 
 const EXPORTS = ['design.json', 'curves.csv', 'checks.csv', 'packet.pdf', 'packet.html'] as const;
 type ExportName = (typeof EXPORTS)[number];
@@ -26,7 +27,7 @@ function parseDate(q: unknown, now: () => Date): Date {
   const t = field(q, 'date');
   if (t === undefined || t === '') return now();
   const d = new Date(/^\d{4}-\d{2}-\d{2}$/.test(t) ? `${t}T00:00:00Z` : t);
-  if (Number.isNaN(d.getTime())) throw new RequestError('STORE_ERR_DATE_INVALID', `date "${t.slice(0, 40)}" is not a date; use YYYY-MM-DD`, 400);
+  if (Number.isNaN(d.getTime())) throw storeErrors.dateInvalid(t);
   return d;
 }
 
@@ -57,7 +58,6 @@ export const packetRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, o
   const holder = lazyStore(opts);
   const now = opts.now ?? (() => new Date());
   app.addHook('onClose', async () => holder.close());
-  app.setErrorHandler(storeErrorHandler);
 
   for (const what of EXPORTS) {
     const path = what.startsWith('packet') ? what : `export/${what}`;

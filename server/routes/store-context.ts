@@ -1,15 +1,12 @@
 /**
  * What the store and packet routes share: a lazily opened design store (the data folder is created on the
- * first request that needs it, not when the app is built), reading a design from a request body, and
- * turning store errors into responses.
+ * first request that needs it, not when the app is built) and reading a design from a request body. Their
+ * errors are answered by the app's one error handler (server/app.ts).
  */
-import type { FastifyReply, FastifyRequest } from 'fastify';
-import { type DesignFile, readDesign, type UnitSystem, type Warning } from '../../core/index.ts';
+import { type DesignFile, type FieldIssue, readDesign, type UnitSystem, type Warning } from '../../core/index.ts';
 import { type FormValues, readForm } from '../../form/design-form.ts';
 import { type DesignStore, openStore } from '../../store/design-store.ts';
-import { StoreError } from '../../store/errors.ts';
-import { errorView } from '../../views/store-views.ts';
-import { fromFrameworkError } from '../../form/errors.ts';
+import { storeErrors } from '../../store/errors.ts';
 import { checkFieldNames } from '../../form/field-names.ts';
 
 export interface StoreRouteOptions {
@@ -37,9 +34,6 @@ export function lazyStore(opts: StoreRouteOptions): { get: () => DesignStore; cl
   };
 }
 
-/** Bad input from a request, answered as 400/422 with a code like the store's errors. */
-export class RequestError extends StoreError {}
-
 export type DesignFromBody = { design: DesignFile; warnings: Warning[] };
 
 /**
@@ -48,7 +42,7 @@ export type DesignFromBody = { design: DesignFile; warnings: Warning[] };
  */
 export function designFromBody(body: unknown): DesignFromBody {
   if (body === null || typeof body !== 'object') {
-    throw new RequestError('STORE_ERR_BODY_MISSING', 'send the design as JSON {"design": {...}} or as the workbench form', 400);
+    throw storeErrors.bodyMissing();
   }
   const b = body as Record<string, unknown>;
   let input: unknown;
@@ -57,7 +51,7 @@ export function designFromBody(body: unknown): DesignFromBody {
     try {
       input = JSON.parse(b.design_json);
     } catch (e) {
-      throw new RequestError('STORE_ERR_NOT_JSON', `design_json is not valid JSON (${(e as Error).message})`, 400);
+      throw storeErrors.notJson((e as Error).message);
     }
   } else {
     checkFieldNames(Object.keys(b));
@@ -65,33 +59,19 @@ export function designFromBody(body: unknown): DesignFromBody {
     for (const [k, v] of Object.entries(b)) if (typeof v === 'string') values[k] = v;
     const units: UnitSystem = b._units === 'us' ? 'us' : 'metric';
     const r = readForm(values, units);
-    if (!r.ok) throw new RequestError('STORE_ERR_DESIGN_INVALID', `the design is not valid (${r.errors.length} problem${r.errors.length === 1 ? '' : 's'})`, 422, r.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
+    if (!r.ok) throw storeErrors.designInvalid(issueLines(r.errors), false);
     return { design: r.design, warnings: r.warnings };
   }
   const r = readDesign(input);
-  if (!r.ok) throw new RequestError('STORE_ERR_DESIGN_INVALID', `the design is not valid (${r.errors.length} problem${r.errors.length === 1 ? '' : 's'})`, 422, r.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
+  if (!r.ok) throw storeErrors.designInvalid(issueLines(r.errors), false);
   return { design: r.design, warnings: r.warnings };
 }
+
+const issueLines = (errors: readonly FieldIssue[]): string[] => errors.map((e) => `${e.path || '(file)'}: ${e.message}`);
 
 /** A string field of a body or query, or undefined. */
 export function field(obj: unknown, key: string): string | undefined {
   if (obj === null || typeof obj !== 'object') return undefined;
   const v = (obj as Record<string, unknown>)[key];
   return typeof v === 'string' ? v : undefined;
-}
-
-/** Error handler of the store and packet plugins: coded JSON for /api, an HTML fragment otherwise. */
-export function storeErrorHandler(thrown: Error & { statusCode?: number; code?: string }, req: FastifyRequest, reply: FastifyReply): FastifyReply {
-  const err = fromFrameworkError(thrown, req.headers['content-type']) ?? thrown; // framework codes become the documented APP_ERR_*
-  const isStore = err instanceof StoreError;
-  const status = isStore ? err.status : (err.statusCode ?? 500);
-  const code = isStore ? err.code : status < 500 ? (err.code ?? 'APP_ERR_BAD_REQUEST') : 'APP_ERR_INTERNAL';
-  const message = isStore || status < 500 ? err.message : 'the server could not answer this request; see the server log';
-  const details = isStore ? err.details : [];
-  if (status >= 500) req.log.error(err);
-  // Same JSON shape as the app's other errors; an HTML fragment for htmx and for browsers that ask for HTML.
-  const wantsHtml = req.headers['hx-request'] === 'true' || String(req.headers.accept ?? '').includes('text/html');
-  if (req.url.startsWith('/api/') || !wantsHtml) return reply.status(status).send({ statusCode: status, code, message, details });
-  // htmx does not swap 4xx/5xx by default; the page may opt in (see DEVELOPERS.md). The status stays honest.
-  return reply.status(status).type('text/html; charset=utf-8').send(errorView(code, message, details).html);
 }

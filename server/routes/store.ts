@@ -9,7 +9,8 @@ import { compareView, designChoicesView, designsListView, diffView, historyView,
 import { type CompareSide, compare } from '../../packet/compare.ts';
 import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
 import type { DesignStore } from '../../store/design-store.ts';
-import { designFromBody, field, lazyStore, RequestError, type StoreRouteOptions, storeErrorHandler } from './store-context.ts';
+import { designFromBody, field, lazyStore, type StoreRouteOptions } from './store-context.ts';
+import { storeErrors } from '../../store/errors.ts';
 
 const HTML = 'text/html; charset=utf-8';
 
@@ -31,7 +32,6 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
   const holder = lazyStore(opts);
   const store = holder.get;
   app.addHook('onClose', async () => holder.close());
-  app.setErrorHandler(storeErrorHandler);
 
   // ---- JSON API
   app.get('/api/designs', async () => ({ designs: store().list() }));
@@ -138,6 +138,6 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
 function needPair(q: unknown): { a: string; b: string } {
   const a = field(q, 'a');
   const b = field(q, 'b');
-  if (!a || !b) throw new RequestError('STORE_ERR_PAIR_MISSING', 'give two revisions (or design ids) to compare as ?a=…&b=…', 400);
+  if (!a || !b) throw storeErrors.pairMissing();
   return { a, b };
 }

@@ -23,7 +23,9 @@ import {
 import { panels } from '../../views/panels/index.ts';
 import { resultCsv } from '../../views/panels/table.ts';
 import { verdictBar } from '../../views/panels/verdict.ts';
-import { AppError, appErrors, UPLOAD_LIMIT } from '../../form/errors.ts';
+import type { LockstepError } from '../../core/errors.ts';
+import { formErrors } from '../../form/errors.ts';
+import { serverErrors, UPLOAD_LIMIT } from '../errors.ts';
 import {
   applyListOp,
   convertValues,
@@ -41,7 +43,7 @@ import { keepSwitchedOut, withoutDraftRows } from '../../form/keep-typed.ts';
 
 /** Form body (formbody gives repeated names as arrays): the last value of each name wins. */
 export function formValues(body: unknown): FormValues {
-  if (body === null || typeof body !== 'object' || Array.isArray(body)) throw appErrors.badRequest('Expected the design form as the request body.');
+  if (body === null || typeof body !== 'object' || Array.isArray(body)) throw formErrors.badRequest('Expected the design form as the request body.');
   checkFieldNames(Object.keys(body)); // prototype keys, odd names, positions beyond a list's limit (form/field-names.ts)
   const out: FormValues = {};
   for (const [k, v] of Object.entries(body as Record<string, unknown>)) {
@@ -80,18 +82,18 @@ export function update(posted: FormValues): UpdateOutcome {
   if (posted._upload !== undefined) {
     const text = posted._upload;
     let parsed: unknown;
-    const fail = (e: AppError, errors: FieldIssue[] = []): UpdateOutcome => ({
-      status: e.statusCode,
+    const fail = (e: LockstepError, errors: FieldIssue[] = []): UpdateOutcome => ({
+      status: e.status,
       body: statusBlock('upload-error', { message: e.message, code: e.code, errors }),
     });
-    if (Buffer.byteLength(text) > UPLOAD_LIMIT) return fail(appErrors.uploadTooLarge());
+    if (Buffer.byteLength(text) > UPLOAD_LIMIT) return fail(serverErrors.uploadTooLarge());
     try {
       parsed = JSON.parse(text);
     } catch (e) {
-      return fail(appErrors.uploadNotJson(e instanceof Error ? e.message : 'unreadable'));
+      return fail(serverErrors.uploadNotJson(e instanceof Error ? e.message : 'unreadable'));
     }
     const r = readDesign(parsed);
-    if (!r.ok) return fail(appErrors.uploadInvalid(r.errors.length), r.errors);
+    if (!r.ok) return fail(serverErrors.uploadInvalid(r.errors.length), r.errors);
     // the file is in design-file units; show it in the units the page uses now
     values = designToValues(r.design, units);
     // opened from a design's history, or loaded as a new revision of a saved design: saving adds to that design
@@ -110,7 +112,7 @@ export function update(posted: FormValues): UpdateOutcome {
     structural = true;
   } else if (posted._op) {
     const op = parseListOp(posted._op);
-    if (!op) throw appErrors.unknownOperation(posted._op);
+    if (!op) throw formErrors.unknownOperation(posted._op);
     values = applyListOp(values, op);
     structural = true;
   }
@@ -216,7 +218,7 @@ export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
   // a deferred result panel (views/panels/panel.ts `deferred`) for the current form
   app.post<{ Params: { id: string } }>('/workbench/panel/:id', async (req, reply) => {
     const panel = panels.find((p) => p.id === req.params.id && p.results && p.deferred);
-    if (!panel) throw appErrors.notFound(`/workbench/panel/${req.params.id.slice(0, 60)}`);
+    if (!panel) throw serverErrors.notFound(`/workbench/panel/${req.params.id.slice(0, 60)}`);
     const posted = formValues(req.body);
     reply.header('cache-control', 'no-store');
     const out = answers.answer(cacheSource(`panel:${panel.id}`, posted), () => {
@@ -231,14 +233,14 @@ export function workbenchRoutes(app: FastifyInstance, assets: AssetUrls): void {
 
   app.post('/workbench/design.json', async (req, reply) => {
     const r = validFromRequest(req);
-    if (!r.ok) return reply.code(422).send({ code: 'APP_ERR_FORM_INVALID', message: 'Fix the marked inputs before downloading.', errors: r.errors });
+    if (!r.ok) throw serverErrors.formInvalid(r.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
     reply.header('content-disposition', `attachment; filename="${slug(r.design.name)}.lockstep.json"`);
     return reply.type('application/json; charset=utf-8').send(`${JSON.stringify(r.design, null, 2)}\n`);
   });
 
   app.post('/workbench/table.csv', async (req, reply) => {
     const r = validFromRequest(req);
-    if (!r.ok) return reply.code(422).send({ code: 'APP_ERR_FORM_INVALID', message: 'Fix the marked inputs before downloading.', errors: r.errors });
+    if (!r.ok) throw serverErrors.formInvalid(r.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
     const result = evaluate(r.design);
     reply.header('content-disposition', `attachment; filename="${slug(r.design.name)}-table.csv"`);
     return reply.type('text/csv; charset=utf-8').send(resultCsv(result, r.units));

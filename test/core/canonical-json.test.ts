@@ -4,7 +4,8 @@
 // core/canonical-json.ts): IEEE 754 doubles carry 15.95 decimal digits, so 15 removes conversion noise only.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { CanonicalJsonError, canonicalJson, canonicalNumber, demoDesign } from '../../core/index.ts';
+import { canonicalJson, canonicalNumber, demoDesign } from '../../core/index.ts';
+import { LockstepError } from '../../core/errors.ts';
 
 describe('canonicalJson', () => {
   it('sorts keys at every depth and writes no whitespace (RFC 8785 §3.2.3)', () => {
@@ -31,7 +32,9 @@ describe('canonicalJson', () => {
     expect(canonicalNumber(1.23456789012345)).not.toBe(canonicalNumber(1.23456789012346));
   });
   it('refuses values JSON cannot hold (RFC 8259 §6: no NaN or Infinity)', () => {
-    expect(() => canonicalJson({ a: Number.NaN })).toThrow(CanonicalJsonError);
+    expect(() => canonicalJson({ a: Number.NaN })).toThrow(LockstepError);
+    expect(() => canonicalJson({ a: Number.NaN })).toThrow(expect.objectContaining({ code: 'CORE_ERR_CANONICAL_NON_FINITE' }));
+    expect(() => canonicalJson({ f: () => 1 })).toThrow(expect.objectContaining({ code: 'CORE_ERR_CANONICAL_TYPE' }));
     expect(() => canonicalJson({ a: { b: [Infinity] } })).toThrow(/a\.b\[0\]/);
     expect(() => canonicalJson({ f: () => 1 })).toThrow(/function/);
   });

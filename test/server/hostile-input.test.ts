@@ -17,7 +17,7 @@ import { demoDesign } from '../../core/index.ts';
 import { DESIGN_FILE_MAX_BYTES } from '../../core/file-limits.ts';
 import { MAX_INPUT_BYTES } from '../../cli/errors.ts';
 import { buildApp } from '../../server/app.ts';
-import { UPLOAD_LIMIT } from '../../form/errors.ts';
+import { UPLOAD_LIMIT } from '../../server/errors.ts';
 import { designToValues, readForm } from '../../form/design-form.ts';
 import { MAX_FIELDS } from '../../form/field-names.ts';
 import { MAX_CONNECTIONS, SERVER_LIMITS } from '../../server/plugins/request-guard.ts';

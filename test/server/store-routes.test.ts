@@ -12,6 +12,7 @@ import { designToValues } from '../../form/design-form.ts';
 import { packetRoutes } from '../../server/routes/packet.ts';
 import { storeRoutes } from '../../server/routes/store.ts';
 import { revisionId } from '../../store/revision-id.ts';
+import { errorReplies } from '../../server/error-reply.ts';
 
 let dir: string;
 let app: FastifyInstance;
@@ -20,6 +21,7 @@ const EVIL = '<img src=x onerror="alert(1)"> & \'q\'';
 beforeEach(async () => {
   dir = mkdtempSync(path.join(tmpdir(), 'lockstep-routes-'));
   app = Fastify();
+  errorReplies(app, { app: '/static', htmx: '/vendor/htmx.min.js', plotly: '/vendor/plotly.min.js' }); // the app's one error answer (server/app.ts)
   await app.register(formbody);
   await app.register(storeRoutes, { dataDir: dir, now: () => new Date('2026-12-01T10:00:00Z') });
   await app.register(packetRoutes, { dataDir: dir, now: () => new Date('2026-12-01T10:00:00Z') });

@@ -12,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { CAUTION, demoDesign } from '../../core/index.ts';
 import { buildApp } from '../../server/app.ts';
-import { BODY_LIMIT } from '../../form/errors.ts';
+import { BODY_LIMIT } from '../../server/errors.ts';
 import { sourceMounts, writePublic } from '../../server/static-assets.ts';
 import { designToValues, type FormValues } from '../../form/design-form.ts';
 import { HTMX_CONFIG } from '../../views/layout.ts';
@@ -428,7 +428,8 @@ describe('downloads', () => {
     v['hydraulics.pedal_ratio'] = '0';
     const r = await app.inject({ method: 'POST', url: '/workbench/design.json', headers: { 'content-type': 'application/x-www-form-urlencoded' }, payload: form(v) });
     expect(r.statusCode).toBe(422);
-    expect(r.json().errors[0].path).toBe('hydraulics.pedal_ratio');
+    expect(r.json()).toMatchObject({ code: 'APP_ERR_FORM_INVALID' });
+    expect(r.json().details[0]).toMatch(/^hydraulics\.pedal_ratio: /);
   });
 });
 

@@ -8,7 +8,7 @@ import Database from 'better-sqlite3';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { canonicalJson, demoDesign, type DesignFile } from '../../core/index.ts';
 import { DB_FILE_NAME, dataDir, DesignStore, openStore } from '../../store/design-store.ts';
-import { StoreError } from '../../store/errors.ts';
+import { LockstepError } from '../../core/errors.ts';
 import { MIGRATIONS, SCHEMA_VERSION } from '../../store/migrations.ts';
 import { revisionId, revisionIdOfCanonical } from '../../store/revision-id.ts';
 
@@ -32,7 +32,7 @@ function code(fn: () => unknown): string {
   try {
     fn();
   } catch (e) {
-    if (e instanceof StoreError) return e.code;
+    if (e instanceof LockstepError) return e.code;
     throw e;
   }
   return 'no error';

@@ -12,7 +12,7 @@ import { createHash } from 'node:crypto';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import type { SafeHtml } from '../views/html.ts';
-import { sendHtml } from './html-reply.ts';
+import { sendHtml, sendKeptHtml } from './html-reply.ts';
 
 export interface CachedAnswer {
   status: number;
@@ -99,12 +99,12 @@ export class ResponseCache {
 export function sendCached(req: FastifyRequest, reply: FastifyReply, a: Answer): FastifyReply {
   if (!a.entry) return sendHtml(reply, a.body, a.status);
   const encoding = chooseEncoding(req.headers['accept-encoding']);
-  reply.header('vary', 'accept-encoding').code(a.status).type('text/html; charset=utf-8');
-  if (!encoding || a.entry.utf8.length < COMPRESS_THRESHOLD) return reply.send(a.entry.utf8);
+  reply.header('vary', 'accept-encoding');
+  if (!encoding || a.entry.utf8.length < COMPRESS_THRESHOLD) return sendKeptHtml(reply, a.entry.utf8, a.status);
   let buf = a.entry.encoded.get(encoding);
   if (!buf) {
     buf = encoding === 'br' ? brotliCompressSync(a.entry.utf8, { params: { [constants.BROTLI_PARAM_QUALITY]: 1 } }) : gzipSync(a.entry.utf8, { level: 1 });
     a.entry.encoded.set(encoding, buf);
   }
-  return reply.header('content-encoding', encoding).header('content-length', buf.length).send(buf);
+  return sendKeptHtml(reply.header('content-encoding', encoding).header('content-length', buf.length), buf, a.status);
 }

@@ -13,6 +13,7 @@ import { renderPacketPdf } from '../../packet/packet-pdf.ts';
 import { revisionId } from '../../store/revision-id.ts';
 import { designFromBody, field, lazyStore, type StoreRouteOptions } from './store-context.ts';
 import { storeErrors } from '../../store/errors.ts';
+import { sendHtml } from '../html-reply.ts';
 
 const EXPORTS = ['design.json', 'curves.csv', 'checks.csv', 'packet.pdf', 'packet.html'] as const;
 type ExportName = (typeof EXPORTS)[number];
@@ -44,7 +45,7 @@ async function send(reply: FastifyReply, what: ExportName, design: DesignFile, w
       return reply.type('text/csv; charset=utf-8').header('content-disposition', disposition('checks.csv')).send(checksCsv(evaluateForPacket(design, warnings)));
     case 'packet.html': {
       const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });
-      return reply.type('text/html; charset=utf-8').send(packetHtml(content).html);
+      return sendHtml(reply, packetHtml(content));
     }
     case 'packet.pdf': {
       const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });

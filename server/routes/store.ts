@@ -11,8 +11,7 @@ import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
 import type { DesignStore } from '../../store/design-store.ts';
 import { designFromBody, field, lazyStore, type StoreRouteOptions } from './store-context.ts';
 import { storeErrors } from '../../store/errors.ts';
-
-const HTML = 'text/html; charset=utf-8';
+import { sendHtml } from '../html-reply.ts';
 
 /** A side of a comparison from a revision id (or prefix) or a design id (its latest revision). */
 export function compareSide(store: DesignStore, ref: string, label: string): CompareSide {
@@ -84,31 +83,31 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
   });
 
   // ---- HTML fragments
-  app.get('/designs', async (_req, reply) => reply.type(HTML).send(designsListView(store().list()).html));
+  app.get('/designs', async (_req, reply) => sendHtml(reply, designsListView(store().list())));
 
   // the options of the page's upload question: a new revision of which saved design? (latest changed first)
   app.get('/designs/choices', async (_req, reply) => {
     const list = [...store().list()].sort((a, b) => b.updated_at.localeCompare(a.updated_at));
     reply.header('cache-control', 'no-store');
-    return reply.type(HTML).send(designChoicesView(list).html);
+    return sendHtml(reply, designChoicesView(list));
   });
 
   app.get<{ Params: { id: string } }>('/designs/:id/history', async (req, reply) => {
     const s = store();
     const history = s.history(req.params.id);
     const designs = new Map(history.map((h) => [h.revision_id, s.revision(h.revision_id).design] as const));
-    return reply.type(HTML).send(historyView(s.get(req.params.id), history, designs).html);
+    return sendHtml(reply, historyView(s.get(req.params.id), history, designs));
   });
 
   app.get<{ Querystring: { a?: string; b?: string } }>('/diff', async (req, reply) => {
     const { a, b } = needPair(req.query);
     const d = store().diff(a, b);
-    return reply.type(HTML).send(diffView(d.from, d.to, d.entries).html);
+    return sendHtml(reply, diffView(d.from, d.to, d.entries));
   });
 
   app.get<{ Querystring: { a?: string; b?: string } }>('/compare', async (req, reply) => {
     const { a, b } = needPair(req.query);
-    return reply.type(HTML).send(compareView(compare(compareSide(store(), a, 'before'), compareSide(store(), b, 'after'))).html);
+    return sendHtml(reply, compareView(compare(compareSide(store(), a, 'before'), compareSide(store(), b, 'after'))));
   });
 
   /** The page's save button: the workbench form (or design_json), `_design_id` to add a revision, `_message`. */
@@ -116,22 +115,22 @@ export const storeRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, op
     const { design } = designFromBody(req.body);
     const designId = field(req.body, '_design_id') || undefined;
     const r = store().save(design, { designId, message: field(req.body, '_message') ?? null });
-    return reply.type(HTML).send(saveResultView(r).html);
+    return sendHtml(reply, saveResultView(r));
   });
 
   app.post<{ Params: { id: string } }>('/designs/:id/rename', async (req, reply) => {
     store().rename(req.params.id, field(req.body, 'name') ?? '');
-    return reply.type(HTML).send(designsListView(store().list()).html);
+    return sendHtml(reply, designsListView(store().list()));
   });
 
   app.post<{ Params: { id: string } }>('/designs/:id/duplicate', async (req, reply) => {
     store().duplicate(req.params.id, field(req.body, 'name'));
-    return reply.type(HTML).send(designsListView(store().list()).html);
+    return sendHtml(reply, designsListView(store().list()));
   });
 
   app.post<{ Params: { id: string } }>('/designs/:id/delete', async (req, reply) => {
     store().delete(req.params.id, field(req.body, 'confirm'));
-    return reply.type(HTML).send(designsListView(store().list()).html);
+    return sendHtml(reply, designsListView(store().list()));
   });
 };
 

@@ -4,10 +4,10 @@
  * form as the control field `_design_id`, so later saves add revisions to the same design.
  */
 import { textField } from '../fields.ts';
-import { html, raw } from '../html.ts';
+import { html } from '../html.ts';
 import type { Panel } from './panel.ts';
 
-const SAVE_NEW = raw(`hx-vals='{"_design_id": ""}'`);
+const SAVE_NEW = html`hx-vals='{"_design_id": ""}'`;
 
 /** Inputs (left column): the identification printed on the packet's cover. */
 export const storeInputsPanel: Panel = {

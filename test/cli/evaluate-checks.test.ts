@@ -42,7 +42,7 @@ describe('lockstep evaluate: checks decide the exit status', () => {
     expect(r.stdout).toContain('Regulation checks');
     expect(r.stdout).toMatch(/PASS\s+eu-appendix\/lock-order/);
     expect(r.stdout).toContain('71/320/EEC Annex II Appendix, point 3.1.1');
-    // efficiency coefficient 0.85 is [P] in the reference sheet → the verify note
+    // efficiency coefficient 0.85 is held as partial [P] (wording not verified against the official text) → the verify note
     expect(r.stdout).toMatch(/point 3\.1\.1 \(coefficient 0\.85\) \[partial: verify against the current official text\]/);
     expect(r.stdout).toContain('Verdict: PASS: every check that applies passes');
   });
@@ -100,7 +100,7 @@ describe('lockstep evaluate: checks decide the exit status', () => {
 
 describe('lockstep evaluate: a failed distribution device also decides the exit status', () => {
   it('exits 1 when a failed load-sensing valve leaves the vehicle short of the secondary figure, though the selected curve rule passes', async () => {
-    // 71/320/EEC Annex II Appendix point 6 (reference sheet 2.3, partial): with the device failed the vehicle must
+    // 71/320/EEC Annex II Appendix point 6 (held as partial [P]): with the device failed the vehicle must
     // still stop as required for secondary braking (N1: 2.2 m/s², UN R13 Rev.4 Annex 4 para 2.2).
     // The demo's hydraulics made weak on purpose (no booster, 38 mm bore): at 700 N the pedal gives
     // p = 700 · 3.8 / (π/4 · 0.038²) ≈ 23.4 bar, far below what 2.2 m/s² needs, while the split (and so the

@@ -3,7 +3,7 @@
  * reproducibility, the text form with the caution, and exit 2 with CLI_ERR_USAGE for bad options.
  * Design: the fixed-split test vehicle of test/core/sizing/fixtures.ts with the FMVSS 135 lock sequence
  * and the 71/320 efficiency line: the band starts at φ = ψ + 0.8χ = 0.55 + 0.8·0.2 = 0.71 (hand-derived,
- * reference sheet section 1; the efficiency line's own lower bound, about 0.57, is lower) and ends below 1
+ * from the axle loads under braking, common practice, no source; the efficiency line's own lower bound, about 0.57, is lower) and ends below 1
  * (test/core/sizing/split-band.test.ts derives that end).
  */
 import { join } from 'node:path';

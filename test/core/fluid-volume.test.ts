@@ -1,7 +1,7 @@
 // Sources: hand-derived arithmetic shown beside each check (piston area πd²/4, volume = area × travel,
 // pressure from the design-file spec "Physics": T = G p with G from brake-gain, zP = T1 + T2).
-// Targets: service Type-0 d_m 5.0 m/s² for N1 (71/320 Annex II 2.1.1 [P], reference sheet 5.2);
-// secondary braking 2.2 m/s² for N (R13 Rev.4 Annex 4 2.2 [V], reference sheet 5.3).
+// Targets: service Type-0 d_m 5.0 m/s² for N1 (71/320 Annex II 2.1.1 [P]);
+// secondary braking 2.2 m/s² for N (R13 Rev.4 Annex 4 2.2 [V]).
 // Tandem master-cylinder model: the one documented in core/fluid-volume.ts (a failed chamber uses up
 // its stroke first) — common practice, no source. Balance bar: the pivot divides the bar in the ratio of the
 // force shares, so its travel is s·x_front + (1 − s)·x_rear (lever statics, common practice, no source); rear

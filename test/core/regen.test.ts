@@ -1,7 +1,7 @@
 // Regenerative braking (core/regen.ts).
 // Sources: hand derivations in the comments (lock conditions T_i = k N_i with the axle loads of
-// 71/320/EEC Annex II Appendix 3.1.3, as in braking-requirements.md section 1); the "both" tolerance of
-// 0.001 in braking rate is the design-file spec's (spec/design-file.md, "First lock").
+// 71/320/EEC Annex II Appendix 3.1.3); the "both" tolerance of 0.001 in braking rate is the design-file
+// spec's ("First lock").
 import { describe, expect, it } from 'vitest';
 import { axleLoadModel } from '../../core/axle-loads.ts';
 import type { Distribution } from '../../core/distribution.ts';

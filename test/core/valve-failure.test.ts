@@ -1,6 +1,6 @@
-// Sources: 71/320/EEC Annex II Appendix point 6 (failure of the distribution device, status [P] in the
-// reference sheet 2.3); required deceleration and foot-force limits: UN R13 Rev.4 Annex 4 2.2 [V]
-// (reference sheet 5.3: M1 2.9 m/s² at ≤ 500 N, N 2.2 m/s² at ≤ 700 N). Valve laws and axle loads:
+// Sources: 71/320/EEC Annex II Appendix point 6 (failure of the distribution device, held as partial
+// [P]); required deceleration and foot-force limits: UN R13 Rev.4 Annex 4 2.2 [V]
+// (M1 2.9 m/s² at ≤ 500 N, N 2.2 m/s² at ≤ 700 N). Valve laws and axle loads:
 // design-file spec "Physics" (none: p2 = p; proportioning/load-sensing: knee + ratio (p − knee);
 // N1 = P1 + z h P / E). Every expected number is hand-derived in the comment beside it.
 import { describe, expect, it } from 'vitest';

@@ -5,7 +5,7 @@
  * First lock of a fixed split on k: front when φ z = k (ψ + χ z), z = kψ/(φ − kχ);
  * rear when (1 − φ) z = k (1 − ψ − χ z), z = k(1 − ψ)/(1 − φ + kχ).
  * Required deceleration from a distance limit s at v km/h with reaction term c·v: v²/(25.92 (s − c v))
- * (reference sheet 5.1).
+ * (s = v²/(2d) with v in km/h: 2 · 3.6² = 25.92; common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
 import type { CheckResult } from '../../../core/checks/check-result.ts';

@@ -3,7 +3,7 @@
  *
  * Loads: m = 1000 kg, ψ = P1/P = 0.5, χ = h/E = 0.5/2.5 = 0.2, so N1 = P(0.5 + 0.2 z),
  * N2 = P(0.5 − 0.2 z), rear lift-off at z = 2.5.
- * A fixed split φ = T1/(T1 + T2) gives the closed forms (reference sheet, section 1, "Derived"):
+ * A fixed split φ = T1/(T1 + T2) gives the closed forms (hand-derived from the axle loads under braking, N1 = P1 + zPh/E: common practice, no source):
  *   f1(z) = φ z / (ψ + χ z),  f2(z) = (1 − φ) z / (1 − ψ − χ z),  crossing at z* = (φ − ψ)/χ.
  */
 import { axleLoadModel } from '../../../core/axle-loads.ts';

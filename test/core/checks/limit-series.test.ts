@@ -1,6 +1,6 @@
 /**
  * Plot series of the limit lines (core/checks/limit-series.ts) for chart B, checked against the
- * lines of 71/320/EEC Annex II Appendix point 3.1.1 as paraphrased in the reference sheet 2.2 (source of every expected line).
+ * lines of 71/320/EEC Annex II Appendix point 3.1.1 (source of every expected line).
  */
 import { describe, expect, it } from 'vitest';
 import { limitSeries } from '../../../core/checks/limit-series.ts';

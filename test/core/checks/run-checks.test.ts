@@ -1,7 +1,7 @@
 /**
  * Selecting and running rule sets (core/checks/run-checks.ts, core/rules/index.ts):
  * category → default selection, the design's `rules` key and the --rules option, the ABS exemption
- * (71/320/EEC Annex II Appendix point 1 with Annex X, reference sheet 2.1 [P]) and the exit rule.
+ * (71/320/EEC Annex II Appendix point 1 with Annex X, held as partial [P]) and the exit rule.
  * Designs from test/core/checks/fixed-split.ts.
  */
 import { describe, expect, it } from 'vitest';

@@ -1,7 +1,7 @@
 /**
- * Rule set eu-appendix: 71/320/EEC Annex II Appendix point 3.1.1 (reference sheet section 2.2,
- * statuses there). Every expected value is derived by hand from the closed forms of a fixed split
- * (reference sheet section 1, "Derived"): f1 = φz/(ψ + χz), f2 = (1 − φ)z/(1 − ψ − χz), with
+ * Rule set eu-appendix: 71/320/EEC Annex II Appendix point 3.1.1 (each line with its status [V]/[P]/[M] as the
+ * rule set holds it). Every expected value is derived by hand from the closed forms of a fixed split
+ * (from the axle loads under braking, common practice, no source): f1 = φz/(ψ + χz), f2 = (1 − φ)z/(1 − ψ − χz), with
  * ψ = 0.5, χ = 0.2 (test/core/checks/fixed-split.ts). A dense scan is used only as a cross-check.
  */
 import { describe, expect, it } from 'vitest';

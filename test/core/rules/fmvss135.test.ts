@@ -1,7 +1,6 @@
 /**
- * Rule set fmvss135: FMVSS No. 135 wheel-lockup sequence (S7.2 / S7.4 from memory, reference sheet
- * 6.2 [M]): front at or above rear for braking ratios 0.15–0.80 at GVWR and lightly loaded; vehicles
- * up to 3 500 kg GVWR (S3 [V], sheet 6.1); ABS on all axles exempts (sheet 6.2 [M]).
+ * Rule set fmvss135: FMVSS No. 135 wheel-lockup sequence (S7.2 / S7.4 from memory [M]): front at or above rear for braking ratios 0.15–0.80 at GVWR and lightly loaded; vehicles
+ * up to 3 500 kg GVWR (S3 [V]); ABS on all axles exempts (from memory [M]).
  * Expected values from the fixed-split closed forms (test/core/checks/fixed-split.ts).
  */
 import { describe, expect, it } from 'vitest';

@@ -1,7 +1,7 @@
 /**
  * Sources: rule set `performance` (71/320/EEC Annex II 2.1.1 ≈ UN R13 Annex 4 2.1.1 [P]; secondary R13 Rev.4
  * Annex 4 para 2.2 [V]; booster failure against the secondary figures [M]; parking on 18 % [M]):
- * reference sheet sections 5.1–5.5. Designs from test/core/checks/fixed-split.ts: φ = front pistons
+ * statuses as the rule set holds them. Designs from test/core/checks/fixed-split.ts: φ = front pistons
  * / all pistons, ψ = 0.5, χ = 0.2; first locks on k = 0.8 from the closed forms:
  *   intact, rear: z = k(1 − ψ)/((1 − φ) + kχ);  front only: f1 = z/(ψ + χz) = k → z = kψ/(1 − kχ);
  *   rear only: z = k(1 − ψ)/(1 + kχ);  one diagonal (half forces, half loads): z = kψ/(2φ − kχ) (front wheel).
@@ -17,7 +17,7 @@ const g = 9.80665;
 const k = 0.8;
 const run = (d: ReturnType<typeof splitDesign>, rule: string) => runChecks(d, stateModels(d)).filter((c) => c.rule === rule);
 
-describe('category figures (reference sheet 5.2 and 5.3)', () => {
+describe('category figures (71/320/EEC Annex II 2.1.1; UN R13 Rev.4 Annex 4 2.2)', () => {
   it('service: M1 5.8 m/s² ≤ 500 N at 80 km/h, 0.1v + v²/150; N1 5.0 ≤ 700 N, 0.15v + v²/130', () => {
     expect(SERVICE_FIGURES.M1).toMatchObject({ speed_kmh: 80, min_deceleration_ms2: 5.8, max_pedal_force_n: 500 });
     expect(SERVICE_FIGURES.M1.distance!.v2_coeff).toBeCloseTo(1 / 150, 15);

@@ -45,7 +45,7 @@ describe('un-r13h/efficiency (R13-H Annex 5 3.1.1, coefficient from memory)', ()
   });
 });
 
-describe('un-r13h scope and performance (R13-H Annex 3, reference sheet 5.6 [M])', () => {
+describe('un-r13h scope and performance (R13-H Annex 3, from memory [M])', () => {
   it('has no requirement for N2: reported as not applicable, never as a pass or fail', () => {
     const d = splitDesign({ frontPistons: 7, rearPistons: 3, category: 'N2', extra: { rules: ['un-r13h'] } });
     const checks = runChecks(d, stateModels(d));

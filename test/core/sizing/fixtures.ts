@@ -1,7 +1,7 @@
 /**
  * Simple test designs for the sizing assistant (invented, test data only). A one-load-state vehicle
  * with disc brakes, no thresholds and no valve has a fixed front share φ = G1/(G1 + G2), so the
- * reference sheet's fixed-split relations (braking-requirements.md section 1) apply exactly.
+ * fixed-split relations (hand-derived from the axle loads under braking, common practice, no source) apply exactly.
  */
 import type { DesignFile } from '../../../core/index.ts';
 

@@ -5,7 +5,7 @@
  * Hand case: one load state, disc brakes without thresholds or valve (fixed split φ = G1/(G1 + G2),
  * G ∝ piston area when everything else is equal: φ = d1²/(d1² + d2²)), rule FMVSS 135 lock sequence
  * only (front at or above rear for z 0.15–0.80). From the fixed-split relation f1 ≥ f2 ⟺ φ ≥ ψ + χz
- * (reference sheet section 1) the vehicle passes iff φ ≥ ψ + 0.8 h/E, i.e. iff h ≤ h_crit = (φ − ψ)E/0.8.
+ * (hand-derived from the axle loads under braking, common practice, no source) the vehicle passes iff φ ≥ ψ + 0.8 h/E, i.e. iff h ≤ h_crit = (φ − ψ)E/0.8.
  * With only the CG height uncertain, normal with standard deviation σ around h0:
  *   P(fail) = P(h > h_crit) = 1 − Φ((h_crit − h0)/σ);
  * uniform on [h0 − t, h0 + t]: P(fail) = (h0 + t − h_crit)/(2t).

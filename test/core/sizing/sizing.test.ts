@@ -131,7 +131,7 @@ describe('catalogue and master cylinder', () => {
     d.hydraulics.pedal_ratio = 6;
     d.hydraulics.booster_ratio = 1;
     const b = masterCylinderBore(d, { max_line_pressure_bar: 400 })!;
-    expect(b.pedal_force_limit_n).toBe(700); // N1 service figure, reference sheet 5.2 via core/rules/performance.ts
+    expect(b.pedal_force_limit_n).toBe(700); // N1 service figure of 71/320/EEC Annex II 2.1.1 (rule set performance)
     const c = b.candidates.find((x) => x.label === '7/8 in')!;
     const expectedPsi = (998 * 700) / (100 * 4.448222);
     // ±1 psi of the source scaled by 700/444.8 plus the source's π = 3.14 (0.05 %): 3 psi

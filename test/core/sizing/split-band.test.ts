@@ -1,6 +1,6 @@
 /**
  * Exact band of a fixed front/rear split (core/sizing/split-band.ts) against hand derivations.
- * Relations used (reference sheet braking-requirements.md section 1, fixed split, ψ = P1/P, χ = h/E):
+ * Relations used (fixed split, ψ = P1/P, χ = h/E; hand-derived from the axle loads under braking, N1 = P1 + zPh/E: common practice, no source):
  *   f1 = φz/(ψ + χz), f2 = (1 − φ)z/(1 − ψ − χz);  f1 ≥ f2 ⟺ φ ≥ ψ + χz.
  */
 import fc from 'fast-check';
@@ -28,7 +28,7 @@ describe('fixed-split band, lock-order rules', () => {
   });
 
   it('71/320 Appendix N1 main requirement (z 0.15–0.50): φ ≥ ψ + 0.5χ', () => {
-    // hand-derived as above with the N1 range of point 3.1.1 (reference sheet 2.2 (b)): bound at z = 0.50.
+    // hand-derived as above with the N1 range of 71/320/EEC Annex II Appendix point 3.1.1 (b): bound at z = 0.50.
     // An unladen state makes the rear-axle load ratio 900/562 = 1.60 > 1.5 with a maximum mass of 2 t, so the N1
     // requirement applies (light-N1 rule, 71/320/EEC Annex II Appendix 3.1.1, from memory); its own bound
     // ψ + 0.5χ = 638/1200 + 0.5·0.5/3 = 0.615 lies below the laden one.
@@ -49,7 +49,7 @@ describe('fixed-split band, lock-order rules', () => {
 
 describe('fixed-split band, efficiency line', () => {
   it('71/320 Appendix 3.1.1 line k = 0.2 + (z − 0.1)/0.85 for z 0.10–0.61 gives closed-form edges', () => {
-    // hand-derived: with L(z) = c + s z, c = 0.2 − 0.1/0.85, s = 1/0.85 (reference sheet 2.2 (a), coefficient 0.85 [P]):
+    // hand-derived: with L(z) = c + s z, c = 0.2 − 0.1/0.85, s = 1/0.85 (71/320/EEC Annex II Appendix point 3.1.1 (a), coefficient 0.85 held as partial [P]):
     //  front: f1 ≤ L ⟺ φ ≤ g(z) = L(z)(ψ + χz)/z = cψ/z + cχ + sψ + sχz, smallest at z* = √(cψ/(sχ))
     //         (inside [0.10, 0.61] here), where g = 2√(cψ·sχ) + cχ + sψ;
     //  rear:  f2 ≤ L ⟺ φ ≥ 1 − h(z), h(z) = L(z)(1 − ψ − χz)/z, decreasing in z (h' = −c(1 − ψ)/z² − sχ < 0),

@@ -2,7 +2,7 @@
  * HTML is escaped by construction and leaves one way: `raw()` is used only inside views/html.ts, and a reply
  * carries HTML only through server/html-reply.ts (`sendHtml`, or `sendKeptHtml` for the bytes of a kept SafeHtml).
  * A text scan of the sources, as test/architecture/layers.test.ts reads the imports. Source: the project's own
- * rule (DEVELOPERS.md, "Layers"); the escaping itself follows the OWASP XSS Prevention Cheat Sheet, rule #1.
+ * rule (DEVELOPERS.md, "HTML"); the escaping itself follows the OWASP XSS Prevention Cheat Sheet, rule #1.
  */
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';

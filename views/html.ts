@@ -45,16 +45,26 @@ export function raw(markup: string): SafeHtml {
   return make(markup);
 }
 
-/** What a drawing of our chart code never holds: scripts, event attributes, links, foreign content. */
-const NOT_A_CHART = /<(?:script|foreignObject|iframe|object|embed|a[\s>]|use[\s>])|\son[a-z]+\s*=|href\s*=|javascript:/i;
+/** The elements our chart code draws with; anything else (script, a, foreignObject, image, use, …) is refused. */
+const CHART_ELEMENTS = new Set(['svg', 'g', 'line', 'polyline', 'path', 'rect', 'circle', 'text', 'tspan', 'title']);
+/** Attributes a drawing never carries: event handlers, links, styles, script URLs. */
+const NOT_A_CHART_ATTRIBUTE = /\s(?:on[a-z]+|[\w:]*href|style)\s*=|javascript:/i;
+
+function isChart(m: string): boolean {
+  if (!/^<svg[\s>]/.test(m) || !m.endsWith('</svg>') || /<(?![A-Za-z/])/.test(m)) return false; // no comment, CDATA or declaration
+  for (const t of m.matchAll(/<\/?([A-Za-z][\w:-]*)([^>]*)>/g)) {
+    if (!CHART_ELEMENTS.has(t[1]!) || NOT_A_CHART_ATTRIBUTE.test(t[2]!)) return false;
+  }
+  return true;
+}
 
 /**
  * An SVG drawing made by our own chart code (packet/chart-svg.ts, which escapes every label it writes), checked to
- * be one <svg> element without script, event attribute, link or foreign content before it is sent as it is.
+ * be one <svg> of shapes and text without script, event attribute, link or foreign content before it is sent as it is.
  */
 export function ownSvg(markup: string): SafeHtml {
   const m = markup.trim();
-  if (!/^<svg[\s>]/.test(m) || !m.endsWith('</svg>') || NOT_A_CHART.test(m)) throw new Error('ownSvg: not a drawing of the chart code (an <svg> element with shapes and text only)');
+  if (!isChart(m)) throw new Error('ownSvg: not a drawing of the chart code (an <svg> element with shapes and text only)');
   return raw(m);
 }
 

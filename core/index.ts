@@ -41,6 +41,8 @@ export * from './brake-heat.ts';
 export * from './roller-tester.ts';
 export * from './limits.ts';
 export * from './bounded-number.ts';
+export { FIELD_META, type FieldMeta, fieldMetaIn, numericLeaves, type NumericLeaf, parsePath, schemaAt, withField } from './field-registry.ts';
+export * from './field-meta.ts';
 export * from './occupant-masses.ts';
 export * from './build-up-schema.ts';
 export * from './build-up.ts';

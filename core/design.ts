@@ -12,6 +12,9 @@ import { RULE_SELECTORS } from './rules/index.ts';
 import { VEHICLE_CATEGORIES } from './rules/rule-types.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 import { casesIssues, LightlyLoaded, Systems, Towing } from './cases-schema.ts';
+import { RearValve, valveIssues } from './valves/index.ts';
+
+export { RearValve };
 
 export { describeValue, VEHICLE_CATEGORIES };
 
@@ -74,23 +77,6 @@ export const Axle = z.strictObject({
   tyre_radius_m: num(0.1, 1.5, length('Dynamic tyre radius')),
   brake: Brake,
 });
-
-export const RearValve = z.discriminatedUnion('type', [
-  z.strictObject({ type: z.literal('none') }),
-  z.strictObject({ type: z.literal('limiting'), knee_bar: numAbove(0, 300, pressure('Knee pressure')) }),
-  z.strictObject({ type: z.literal('proportioning'), knee_bar: numAbove(0, 300, pressure('Knee pressure')), ratio: numAbove(0, 1, ratio('Ratio above the knee')) }),
-  z.strictObject({
-    type: z.literal('load_sensing'),
-    ratio: numAbove(0, 1, ratio('Ratio above the knee')),
-    /**
-     * What the valve's linkage follows: "dynamic" (default) the suspension travel, so the rear axle load
-     * while braking, N2 = P2 − z·(h/E)·P; "static" the rear axle load at rest (a valve that reads it only
-     * when standing, or a check of the table alone).
-     */
-    senses: z.enum(['static', 'dynamic']).optional(),
-    knee_bar_at_rear_axle_kg: z.array(z.tuple([numAbove(0, 60000, mass('Rear axle load')), numAbove(0, 300, pressure('Knee pressure'))])).min(1).max(20),
-  }),
-]);
 
 export const Hydraulics = z.strictObject({
   master_cylinder_bore_mm: num(10, 60, shortLength('Master cylinder bore')),
@@ -287,25 +273,9 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
       });
     } else seen.set(s.id, i);
   });
-  const v = d.hydraulics.rear_valve;
-  if (v.type === 'load_sensing') {
-    const t = v.knee_bar_at_rear_axle_kg;
-    for (let i = 1; i < t.length; i++) {
-      if (t[i]![0] <= t[i - 1]![0]) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 0],
-          message: `${t[i]![0]} is not above the previous rear axle load ${t[i - 1]![0]} kg (the table must be sorted by rear axle load, ascending, without repeats)`,
-        });
-      }
-      if (t[i]![1] < t[i - 1]![1]) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 1],
-          message: `${t[i]![1]} bar is below the previous knee ${t[i - 1]![1]} bar (a load-sensing valve gives the rear more pressure with more load: the knee must not fall as the rear axle load rises)`,
-        });
-      }
-    }
+  // rules across the fields of the rear valve, from its type's module (core/valves/)
+  for (const iss of valveIssues(d.hydraulics.rear_valve)) {
+    ctx.addIssue({ code: 'custom', path: ['hydraulics', 'rear_valve', ...iss.path], message: iss.message });
   }
   for (const axle of ['front', 'rear'] as const) {
     const b = d.axles[axle].brake;
@@ -344,7 +314,6 @@ export type LoadState = z.infer<typeof LoadState>;
 export type Brake = z.infer<typeof Brake>;
 export type DiscBrake = z.infer<typeof DiscBrake>;
 export type DrumBrake = z.infer<typeof DrumBrake>;
-export type RearValve = z.infer<typeof RearValve>;
 export type Hydraulics = z.infer<typeof Hydraulics>;
 export type Vehicle = z.infer<typeof Vehicle>;
 export type TractionOptions = z.infer<typeof TractionOptions>;

@@ -10,7 +10,7 @@ export * from './validate.ts';
 export * from './axle-loads.ts';
 export * from './ideal-distribution.ts';
 export * from './brake-gain.ts';
-export * from './rear-valve.ts';
+export * from './valves/index.ts';
 export * from './distribution.ts';
 export * from './installed-distribution.ts';
 export * from './adhesion-utilisation.ts';

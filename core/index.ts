@@ -12,6 +12,7 @@ export * from './ideal-distribution.ts';
 export * from './brake-gain.ts';
 export * from './valves/index.ts';
 export * from './distribution.ts';
+export * from './brake-force.ts';
 export * from './installed-distribution.ts';
 export * from './adhesion-utilisation.ts';
 export * from './lock-order.ts';

@@ -6,7 +6,7 @@
  *                     (towing load state, combination gradient);
  *   `systems`         antilock (ABS), stability control (ESC) and electronic brake-force distribution
  *                     (EBD): fitted, retained from the base vehicle, not working or removed.
- * Units are in the key names. Every block is optional; a design without them keeps its meaning.
+ * Each number carries its quantity, unit and label (core/field-registry.ts). Every block is optional; a design without them keeps its meaning.
  */
 import { z } from 'zod';
 import { boundedNumber as num, boundedNumberAbove as numAbove } from './bounded-number.ts';

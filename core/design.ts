@@ -1,6 +1,6 @@
 /**
  * The design file `lockstep-design/1`: the single source of truth for its shape and limits.
- * Types come from z.infer. Units are those in the key names (see docs/design-file.md).
+ * Types come from z.infer. Each number carries its quantity, file unit and label (core/field-registry.ts; docs/design-file.md).
  */
 import { z } from 'zod';
 import { boundedNumber, boundedNumberAbove, describeValue } from './bounded-number.ts';

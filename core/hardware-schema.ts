@@ -3,7 +3,7 @@
  *   `hardware`      fluid-volume and pedal-travel data per axle and for the tandem master cylinder;
  *   `base_vehicle`  what the vehicle was before the conversion (tyres, split, brake types, ABS, booster);
  *   `conversion`    facts about the conversion that practitioners get wrong (flags).
- * Every key is optional; a design without these blocks keeps its meaning. Units are in the key names
+ * Every key is optional; a design without these blocks keeps its meaning. Each number carries its quantity, unit and label (core/field-registry.ts); the key names say the unit too
  * (`_mm`, `_mm3`, `_per_bar_mm3` = mm³ per bar, `_bar`, `_m`, `_pct`); docs/design-file.md lists them with defaults.
  */
 import { z } from 'zod';

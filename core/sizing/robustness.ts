@@ -35,7 +35,7 @@ import type { DesignFile, LoadState } from '../design.ts';
 import { type Segment, segments } from '../distribution.ts';
 import { dynamicSensingDistribution } from '../installed-distribution.ts';
 import { axleBrakeForce } from '../brake-force.ts';
-import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from '../valves/index.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, rearValveFamily, type ValveLaw } from '../valves/index.ts';
 import { PA_PER_BAR } from '../constants.ts';
 import { dynamicSensing, stateModel } from '../state-model.ts';
 import { mulberry32 } from './prng.ts';
@@ -157,7 +157,8 @@ export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]
   const rulesOf = states.map((_, i) => rules.flatMap((r, j) => (r.states.includes(i) ? [j] : [])));
   const v = h.rear_valve;
   const dynamic = v.type === 'load_sensing' && v.senses !== 'static';
-  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: v.type !== 'none', ratioApplies: v.type === 'proportioning' || v.type === 'load_sensing', dynamic };
+  const moves = rearValveFamily(v).tolerances; // which valve settings the tolerances move, from the valve's module
+  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: moves.knee, ratioApplies: moves.ratio, dynamic };
 }
 
 // ---- the per-sample evaluation: no allocation in the loop ----

@@ -17,6 +17,7 @@ export const limitingValve = defineValve({
   law: (v: LimitingValve) => ({ knee: v.knee_bar * PA_PER_BAR, ratio: 0 }),
   failureModes: STUCK_MODES,
   failures: stuckFailures,
+  tolerances: { knee: true, ratio: false },
   start: { knee_bar: 35 },
   inputs: [KNEE_INPUT],
 });

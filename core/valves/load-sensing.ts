@@ -81,6 +81,7 @@ export const loadSensingValve = defineValve({
     }
     return out;
   },
+  tolerances: { knee: true, ratio: true }, // the whole knee table moves together
   start: { ratio: 0.3, 'knee_bar_at_rear_axle_kg[0][0]': 1100, 'knee_bar_at_rear_axle_kg[0][1]': 18, 'knee_bar_at_rear_axle_kg[1][0]': 1900, 'knee_bar_at_rear_axle_kg[1][1]': 42 },
   inputs: [
     RATIO_INPUT,

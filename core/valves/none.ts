@@ -14,6 +14,7 @@ export const noValve = defineValve<NoValve, never>({
   law: () => FULL_PRESSURE,
   failureModes: [],
   failures: () => [],
+  tolerances: { knee: false, ratio: false },
   start: {},
   inputs: [],
 });

@@ -21,6 +21,7 @@ export const proportioningValve = defineValve({
   law: (v: ProportioningValve) => ({ knee: v.knee_bar * PA_PER_BAR, ratio: v.ratio }),
   failureModes: STUCK_MODES,
   failures: stuckFailures,
+  tolerances: { knee: true, ratio: true },
   start: { knee_bar: 28, ratio: 0.3 },
   inputs: [KNEE_INPUT, RATIO_INPUT],
 });

@@ -43,6 +43,8 @@ export interface ValveFamily<V extends { type: string } = { type: string }, M ex
   failures(valve: V): FailedState<M>[];
   /** Rules across its fields (checked with the whole design file, after every field is valid). */
   issues?(valve: V): ValveIssue[];
+  /** Which of its settings the sizing tolerances move (core/sizing/sizing-schema.ts `valve_knee_pct`, `valve_ratio_pct`). */
+  tolerances: { knee: boolean; ratio: boolean };
   /** Starting values of the form when a person picks this type (design-file keys and units). */
   start: Readonly<Record<string, number>>;
   /** The form's inputs for this type. */

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { type AxleLiftResult, axleLift } from './axle-lift.ts';
 import { CAUTION } from './caution.ts';
 import { boundedNumber, boundedNumberAbove } from './bounded-number.ts';
+import { angle, length, mass } from './field-registry.ts';
 import { describeIssue, type FieldIssue } from './validate.ts';
 
 const num = boundedNumber;
@@ -14,10 +15,10 @@ const numAbove = boundedNumberAbove;
 
 export const AxleLiftReadingSchema = z.strictObject({
   raised_axle: z.enum(['front', 'rear']),
-  lift_height_m: numAbove(0, 3).optional(),
-  lift_angle_deg: numAbove(0, 45).optional(),
-  front_axle_kg: numAbove(0, 60000).optional(),
-  rear_axle_kg: numAbove(0, 60000).optional(),
+  lift_height_m: numAbove(0, 3, length('Lift height at the wheel centre')).optional(),
+  lift_angle_deg: numAbove(0, 45, angle('Body pitch angle')).optional(),
+  front_axle_kg: numAbove(0, 60000, mass('Front axle reading')).optional(),
+  rear_axle_kg: numAbove(0, 60000, mass('Rear axle reading')).optional(),
 });
 
 export const AxleLiftFile = z
@@ -25,15 +26,15 @@ export const AxleLiftFile = z
     format: z.literal('lockstep-axle-lift/1'),
     name: z.string().min(1).max(200).optional(),
     notes: z.string().max(20000).optional(),
-    wheelbase_m: num(0.5, 10),
-    wheel_centre_height_m: numAbove(0, 1.5),
-    level: z.strictObject({ front_axle_kg: numAbove(0, 60000), rear_axle_kg: numAbove(0, 60000) }),
+    wheelbase_m: num(0.5, 10, length('Wheelbase')),
+    wheel_centre_height_m: numAbove(0, 1.5, length('Wheel centre height')),
+    level: z.strictObject({ front_axle_kg: numAbove(0, 60000, mass('Front axle reading, level')), rear_axle_kg: numAbove(0, 60000, mass('Rear axle reading, level')) }),
     lifts: z.array(AxleLiftReadingSchema).min(1).max(30),
-    scale_resolution_kg: numAbove(0, 100),
-    lift_height_uncertainty_m: num(0, 0.5),
-    wheelbase_uncertainty_m: num(0, 0.5),
-    wheel_centre_height_uncertainty_m: num(0, 0.5).optional(),
-    lift_angle_uncertainty_deg: num(0, 10).optional(),
+    scale_resolution_kg: numAbove(0, 100, mass('Scale resolution')),
+    lift_height_uncertainty_m: num(0, 0.5, length('Uncertainty of the lift height')),
+    wheelbase_uncertainty_m: num(0, 0.5, length('Uncertainty of the wheelbase')),
+    wheel_centre_height_uncertainty_m: num(0, 0.5, length('Uncertainty of the wheel centre height')).optional(),
+    lift_angle_uncertainty_deg: num(0, 10, angle('Uncertainty of the pitch angle')).optional(),
   })
   .superRefine((d, ctx) => {
     d.lifts.forEach((l, i) => {
@@ -91,7 +92,7 @@ export function readAxleLift(input: unknown): AxleLiftFileReading {
     return {
       ok: false,
       errors: r.error.issues.map((iss) => {
-        const fi = describeIssue(iss, input);
+        const fi = describeIssue(iss, input, AxleLiftFile);
         // describeIssue points at docs/design-file.md for unknown keys; this file has its own page.
         return { path: fi.path, message: fi.message.replace('docs/design-file.md', 'docs/axle-lift.md') };
       }),

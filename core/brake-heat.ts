@@ -20,7 +20,7 @@ import { G_N } from './constants.ts';
 import type { DesignFile, HeatOptions, LoadState, Vehicle } from './design.ts';
 import { type Distribution, forcesAt } from './distribution.ts';
 import { installedDistribution } from './installed-distribution.ts';
-import { valveLaw } from './rear-valve.ts';
+import { valveLaw } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 
 export const HEAT_DEFAULTS = {

@@ -7,6 +7,7 @@
  */
 import { z } from 'zod';
 import { boundedNumber as num, boundedNumberAbove as numAbove } from './bounded-number.ts';
+import { length, mass, ratio } from './field-registry.ts';
 import { OCCUPANT_BASES } from './occupant-masses.ts';
 
 export const CG_HEIGHT_SOURCES = ['measured', 'maker', 'estimated', 'assumed'] as const;
@@ -15,13 +16,13 @@ export const BUILD_UP_STATES = ['unladen', 'laden'] as const;
 export const OVERRIDABLE_FIGURES = ['mass_kg', 'front_axle_kg', 'cg_height_m'] as const;
 
 const name = z.string().min(1).max(200);
-const x = () => num(-10, 20);
-const height = () => num(0, 10);
-const lateral = () => num(-3, 3);
+const x = () => num(-10, 20, length('Distance behind the front axle'));
+const height = () => num(0, 10, length('CG height'));
+const lateral = () => num(-3, 3, length('Lateral offset, right positive'));
 
 export const BuildUpItem = z.strictObject({
   name,
-  mass_kg: numAbove(0, 60000),
+  mass_kg: numAbove(0, 60000, mass('Item mass')),
   x_m: x(),
   cg_height_m: height(),
   y_m: lateral().optional(),
@@ -30,20 +31,20 @@ export const BuildUpItem = z.strictObject({
 
 export const BuildUpBaseline = z.strictObject({
   label: z.string().max(200).optional(),
-  front_axle_kg: numAbove(0, 60000),
-  rear_axle_kg: numAbove(0, 60000),
+  front_axle_kg: numAbove(0, 60000, mass('Weighed front axle load')),
+  rear_axle_kg: numAbove(0, 60000, mass('Weighed rear axle load')),
   /** Optional corner weights; they give the left/right split (needs build_up.track_m). */
   wheels_kg: z
     .strictObject({
-      front_left: numAbove(0, 30000),
-      front_right: numAbove(0, 30000),
-      rear_left: numAbove(0, 30000),
-      rear_right: numAbove(0, 30000),
+      front_left: numAbove(0, 30000, mass('Front left wheel load')),
+      front_right: numAbove(0, 30000, mass('Front right wheel load')),
+      rear_left: numAbove(0, 30000, mass('Rear left wheel load')),
+      rear_right: numAbove(0, 30000, mass('Rear right wheel load')),
     })
     .optional(),
-  cg_height_m: numAbove(0, 10),
+  cg_height_m: numAbove(0, 10, length('CG height as weighed')),
   cg_height_source: z.enum(CG_HEIGHT_SOURCES),
-  cg_height_uncertainty_m: num(0, 1).optional(),
+  cg_height_uncertainty_m: num(0, 1, length('Standard uncertainty of the CG height')).optional(),
   note: z.string().max(2000).optional(),
 });
 
@@ -58,18 +59,18 @@ export const BuildUpSeat = z.strictObject({
 export const BuildUpTank = z.strictObject({
   name,
   /** Mass of the contents when full, kg (water about 1 kg per litre). */
-  full_kg: numAbove(0, 20000),
+  full_kg: numAbove(0, 20000, mass('Contents when full')),
   x_m: x(),
   cg_height_m: height(),
   y_m: lateral().optional(),
   /** Fraction full when the baseline was weighed (0 empty, 1 full). */
-  fill_weighed: num(0, 1),
+  fill_weighed: num(0, 1, ratio('Fill when weighed')),
   /** Fraction full in the unladen state (default: as weighed). The laden state has every tank full. */
-  fill_unladen: num(0, 1).optional(),
+  fill_unladen: num(0, 1, ratio('Fill when unladen')).optional(),
 });
 
 export const BuildUpPayload = z.strictObject({
-  mass_kg: numAbove(0, 60000),
+  mass_kg: numAbove(0, 60000, mass('Payload mass')),
   x_m: x(),
   cg_height_m: height(),
   y_m: lateral().optional(),
@@ -79,10 +80,10 @@ export const BuildUp = z
   .strictObject({
     baseline: BuildUpBaseline,
     /** Track width, m; needed for the left/right split. */
-    track_m: num(0.5, 3).optional(),
+    track_m: num(0.5, 3, length('Track width')).optional(),
     removed: z.array(BuildUpItem).max(200).optional(),
     added: z.array(BuildUpItem).max(200).optional(),
-    occupant: z.strictObject({ basis: z.enum(OCCUPANT_BASES), mass_kg: num(20, 200).optional() }).optional(),
+    occupant: z.strictObject({ basis: z.enum(OCCUPANT_BASES), mass_kg: num(20, 200, mass('Mass per occupant')).optional() }).optional(),
     seats: z.array(BuildUpSeat).max(20).optional(),
     payload: BuildUpPayload.optional(),
     tanks: z.array(BuildUpTank).max(20).optional(),
@@ -129,11 +130,11 @@ export const BuildUp = z
 
 export const Ratings = z
   .strictObject({
-    max_mass_kg: numAbove(0, 60000).optional(),
-    max_front_axle_kg: numAbove(0, 60000).optional(),
-    max_rear_axle_kg: numAbove(0, 60000).optional(),
+    max_mass_kg: numAbove(0, 60000, mass('Maximum permitted mass')).optional(),
+    max_front_axle_kg: numAbove(0, 60000, mass('Maximum permitted front axle load')).optional(),
+    max_rear_axle_kg: numAbove(0, 60000, mass('Maximum permitted rear axle load')).optional(),
     /** Least share of the vehicle mass on the front axle, percent (set by some regimes and chassis makers). */
-    min_front_axle_share_pct: num(0, 100).optional(),
+    min_front_axle_share_pct: num(0, 100, { quantity: 'percentage', unit: '%', label: 'Least front axle share of the mass' }).optional(),
   })
   .refine((r) => Object.values(r).some((v) => v !== undefined), {
     error: 'is empty: give at least one of max_mass_kg, max_front_axle_kg, max_rear_axle_kg, min_front_axle_share_pct',
@@ -150,7 +151,7 @@ export const loadStateBuildUpShape = {
   /** Where the CG height comes from when it differs from derived_from. */
   cg_height_derived_from: z.enum(DERIVED_FROM).optional(),
   /** Standard uncertainty of cg_height_m, m. */
-  cg_height_uncertainty_m: num(0, 1).optional(),
+  cg_height_uncertainty_m: num(0, 1, length('Standard uncertainty of the CG height')).optional(),
 };
 
 export type BuildUp = z.infer<typeof BuildUp>;

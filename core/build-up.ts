@@ -11,7 +11,7 @@
  */
 import { BuildUp, type BuildUpItem, type DerivedFrom } from './build-up-schema.ts';
 import { occupantMass } from './occupant-masses.ts';
-import type { FieldIssue, Warning } from './validate.ts';
+import type { FieldIssue, Warning } from './field-issue.ts';
 
 export interface MassPoint {
   mass_kg: number;

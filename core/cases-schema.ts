@@ -6,25 +6,26 @@
  *                     (towing load state, combination gradient);
  *   `systems`         antilock (ABS), stability control (ESC) and electronic brake-force distribution
  *                     (EBD): fitted, retained from the base vehicle, not working or removed.
- * Units are in the key names. Every block is optional; a design without them keeps its meaning.
+ * Each number carries its quantity, unit and label (core/field-registry.ts). Every block is optional; a design without them keeps its meaning.
  */
 import { z } from 'zod';
 import { boundedNumber as num, boundedNumberAbove as numAbove } from './bounded-number.ts';
+import { length, mass } from './field-registry.ts';
 
 /** Driver plus instruments added to the unloaded vehicle for the lightly loaded vehicle, kg (FMVSS 135, from memory). */
 export const LIGHTLY_LOADED_ADDED_KG = 180;
 
 export const LightlyLoaded = z
   .strictObject({
-    unloaded_mass_kg: num(50, 60000),
-    unloaded_front_axle_kg: numAbove(0, 60000),
-    unloaded_cg_height_m: numAbove(0, 10),
+    unloaded_mass_kg: num(50, 60000, mass('Unloaded vehicle mass')),
+    unloaded_front_axle_kg: numAbove(0, 60000, mass('Unloaded front axle load')),
+    unloaded_cg_height_m: numAbove(0, 10, length('Unloaded CG height')),
     /** Driver and instruments, kg; default 180 (from memory). */
-    added_mass_kg: num(0, 1000).optional(),
+    added_mass_kg: num(0, 1000, mass('Driver and instruments')).optional(),
     /** Where that mass sits: distance behind the front axle (negative: ahead of it), m. */
-    added_behind_front_axle_m: num(-3, 15),
+    added_behind_front_axle_m: num(-3, 15, length('Driver and instruments, distance behind the front axle')),
     /** Height of its centre of gravity above the road, m. */
-    added_height_m: numAbove(0, 5),
+    added_height_m: numAbove(0, 5, length('Driver and instruments, height of the CG')),
   })
   .superRefine((b, ctx) => {
     if (b.unloaded_front_axle_kg >= b.unloaded_mass_kg) {
@@ -38,15 +39,15 @@ export const LightlyLoaded = z
 
 export const Towing = z
   .strictObject({
-    trailer_mass_kg: numAbove(0, 60000),
+    trailer_mass_kg: numAbove(0, 60000, mass('Trailer mass')),
     /** The trailer has its own (overrun or other) service brakes. */
     trailer_braked: z.boolean(),
     /** Static vertical load of the trailer on the hitch, kg. */
-    nose_load_kg: num(0, 2000),
+    nose_load_kg: num(0, 2000, mass('Nose load on the hitch')),
     /** Hitch (coupling point) behind the rear axle, m. */
-    hitch_behind_rear_axle_m: num(0, 5),
+    hitch_behind_rear_axle_m: num(0, 5, length('Hitch behind the rear axle')),
     /** Hitch height above the road, m; default: the towing vehicle's CG height (the stricter choice for the rear axle). */
-    hitch_height_m: numAbove(0, 3).optional(),
+    hitch_height_m: numAbove(0, 3, length('Hitch height')).optional(),
     /** Load state the nose load is added to (its id); default: the heaviest laden load state. */
     load_state: z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, { error: 'must be 1 to 40 letters, digits, "_" or "-"' }).optional(),
   })

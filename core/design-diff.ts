@@ -1,11 +1,12 @@
 /**
  * Field-level difference between two design files (or any two JSON values): one entry per leaf that
- * was changed, added or removed, with the field path as written in the file and the unit its key names,
+ * was changed, added or removed, with the field path as written in the file and its unit (core/field-meta.ts),
  * e.g. `axles.rear.brake.piston_diameters_mm[0]: 38 → 42 mm`. Numbers are compared in canonical form
  * (core/canonical-json.ts), so conversion noise is not a change. Arrays are compared element by element.
  */
 import { canonicalNumber } from './canonical-json.ts';
-import { unitOfKey } from './validate.ts';
+import { fieldMeta } from './field-meta.ts';
+import { unitLabel } from './units.ts';
 
 export type DiffKind = 'changed' | 'added' | 'removed';
 
@@ -16,7 +17,7 @@ export interface DiffEntry {
   /** Value before (undefined when added); objects and lists are given whole. */
   before?: unknown;
   after?: unknown;
-  /** Unit named by the key ("" when none). */
+  /** Unit of the field as written for people ("" when none). */
   unit: string;
   /** One line for a person: `path: before → after unit`. */
   text: string;
@@ -36,16 +37,10 @@ export function diffPath(path: readonly Key[]): string {
   return out;
 }
 
-/**
- * The unit of a field. Lists of pairs whose key names one unit per member are listed here:
- * `knee_bar_at_rear_axle_kg` holds [rear axle load kg, knee pressure bar].
- */
+/** The unit of a design-file field as written for people, from the quantity table; "" for a field without one. */
 export function unitOfDiffPath(path: readonly Key[]): string {
-  const pairIndex = path.length >= 3 && typeof path[path.length - 1] === 'number' ? (path[path.length - 1] as number) : -1;
-  if (pairIndex >= 0 && path[path.length - 3] === 'knee_bar_at_rear_axle_kg') return pairIndex === 0 ? 'kg' : 'bar';
-  // inside provenance the keys are field paths, not units
-  if (path[0] === 'provenance') return '';
-  return unitOfKey(path);
+  const meta = fieldMeta(path);
+  return meta ? unitLabel(meta.unit) : '';
 }
 
 function show(v: unknown): string {

@@ -1,28 +1,32 @@
 /**
  * The design file `lockstep-design/1`: the single source of truth for its shape and limits.
- * Types come from z.infer. Units are those in the key names (see docs/design-file.md).
+ * Types come from z.infer. Each number carries its quantity, file unit and label (core/field-registry.ts; docs/design-file.md).
  */
 import { z } from 'zod';
 import { boundedNumber, boundedNumberAbove, describeValue } from './bounded-number.ts';
+import { force, length, mass, percent, pressure, ratio, shortLength, speed, temperature, time } from './field-registry.ts';
 import { BaseVehicle, Conversion, Hardware } from './hardware-schema.ts';
 import { SHOE_ARRANGEMENTS } from './drum-brake-factor.ts';
 import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
+import { VEHICLE_CATEGORIES } from './rules/rule-types.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 import { casesIssues, LightlyLoaded, Systems, Towing } from './cases-schema.ts';
+import { RearValve, valveIssues } from './valves/index.ts';
 
-export { describeValue };
+export { RearValve };
+
+export { describeValue, VEHICLE_CATEGORIES };
 
 const num = boundedNumber;
 /** As num, but the lower limit itself is not allowed. */
 const numAbove = boundedNumberAbove;
 
-export const VEHICLE_CATEGORIES = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'] as const;
 export const PROVENANCE_SOURCES = ['measured', 'maker', 'donor', 'assumed'] as const;
 
 export const Vehicle = z.strictObject({
   category: z.enum(VEHICLE_CATEGORIES),
-  wheelbase_m: num(0.5, 10),
+  wheelbase_m: num(0.5, 10, length('Wheelbase')),
   abs: z.boolean(),
   drive: z.enum(['front', 'rear', 'all']),
 });
@@ -33,9 +37,9 @@ export const LoadState = z.strictObject({
   }),
   label: z.string().min(1).max(200),
   kind: z.enum(['unladen', 'laden', 'other']),
-  mass_kg: num(50, 60000),
-  front_axle_kg: num(1, 60000), // lower limits keep every result finite (issue 12 point 9)
-  cg_height_m: num(0.05, 10),
+  mass_kg: num(50, 60000, mass('Vehicle mass')),
+  front_axle_kg: num(1, 60000, mass('Front axle load')), // lower limits keep every result finite (issue 12 point 9)
+  cg_height_m: num(0.05, 10, length('CG height')),
   ...loadStateBuildUpShape, // optional: derived_from, from_build_up, overrides, cg_height_derived_from, cg_height_uncertainty_m
 }).superRefine((s, ctx) => {
   // On the load state itself, so it is reported even when other parts of the file have problems too.
@@ -51,18 +55,18 @@ export const LoadState = z.strictObject({
 export const DiscBrake = z.strictObject({
   type: z.literal('disc'),
   caliper: z.enum(['sliding', 'fixed']),
-  piston_diameters_mm: z.array(num(10, 120)).min(1).max(8),
-  effective_radius_m: num(0.03, 0.5),
-  pad_friction: num(0.05, 1.2),
-  threshold_pressure_bar: num(0, 30),
+  piston_diameters_mm: z.array(num(10, 120, shortLength('Piston diameter'))).min(1).max(8),
+  effective_radius_m: num(0.03, 0.5, length('Effective disc radius')),
+  pad_friction: num(0.05, 1.2, ratio('Pad friction coefficient')),
+  threshold_pressure_bar: num(0, 30, pressure('Threshold pressure')),
 });
 
 export const DrumBrake = z.strictObject({
   type: z.literal('drum'),
-  wheel_cylinder_diameter_mm: num(10, 60),
-  drum_radius_m: num(0.05, 0.5),
-  brake_factor: num(0.3, 15),
-  threshold_pressure_bar: num(0, 30),
+  wheel_cylinder_diameter_mm: num(10, 60, shortLength('Wheel cylinder diameter')),
+  drum_radius_m: num(0.05, 0.5, length('Drum radius')),
+  brake_factor: num(0.3, 15, ratio('Brake factor')),
+  threshold_pressure_bar: num(0, 30, pressure('Threshold pressure')),
   /** How the shoes are arranged: decides how the brake factor moves with lining friction (core/drum-brake-factor.ts). */
   shoe_arrangement: z.enum(SHOE_ARRANGEMENTS).optional(),
 });
@@ -70,32 +74,15 @@ export const DrumBrake = z.strictObject({
 export const Brake = z.discriminatedUnion('type', [DiscBrake, DrumBrake]);
 
 export const Axle = z.strictObject({
-  tyre_radius_m: num(0.1, 1.5),
+  tyre_radius_m: num(0.1, 1.5, length('Dynamic tyre radius')),
   brake: Brake,
 });
 
-export const RearValve = z.discriminatedUnion('type', [
-  z.strictObject({ type: z.literal('none') }),
-  z.strictObject({ type: z.literal('limiting'), knee_bar: numAbove(0, 300) }),
-  z.strictObject({ type: z.literal('proportioning'), knee_bar: numAbove(0, 300), ratio: numAbove(0, 1) }),
-  z.strictObject({
-    type: z.literal('load_sensing'),
-    ratio: numAbove(0, 1),
-    /**
-     * What the valve's linkage follows: "dynamic" (default) the suspension travel, so the rear axle load
-     * while braking, N2 = P2 − z·(h/E)·P; "static" the rear axle load at rest (a valve that reads it only
-     * when standing, or a check of the table alone).
-     */
-    senses: z.enum(['static', 'dynamic']).optional(),
-    knee_bar_at_rear_axle_kg: z.array(z.tuple([numAbove(0, 60000), numAbove(0, 300)])).min(1).max(20),
-  }),
-]);
-
 export const Hydraulics = z.strictObject({
-  master_cylinder_bore_mm: num(10, 60),
-  pedal_ratio: num(1, 12),
-  booster_ratio: num(1, 20),
-  booster_runout_bar: numAbove(0, 300).optional(),
+  master_cylinder_bore_mm: num(10, 60, shortLength('Master cylinder bore')),
+  pedal_ratio: num(1, 12, ratio('Pedal ratio')),
+  booster_ratio: num(1, 20, ratio('Booster ratio')),
+  booster_runout_bar: numAbove(0, 300, pressure('Booster run-out pressure')).optional(),
   circuit_split: z.enum(['front_rear', 'diagonal']),
   rear_valve: RearValve,
   balance_bar: BalanceBar.optional(), // two master cylinders on a balance bar (core/sizing/sizing-schema.ts)
@@ -120,25 +107,25 @@ export const Identification = z.strictObject({
  * regenerative braking, stopping distance, brake heat and the roller brake tester. All optional.
  */
 export const TractionOptions = z.strictObject({
-  all_wheel_front_share: num(0, 1).optional(), // share of the drive force on the front axle; omitted: ideal split
-  rolling_resistance: num(0, 0.1).optional(), // rolling-resistance coefficient, force / weight
+  all_wheel_front_share: num(0, 1, ratio('Front share of the drive force')).optional(), // share of the drive force on the front axle; omitted: ideal split
+  rolling_resistance: num(0, 0.1, ratio('Rolling-resistance coefficient')).optional(), // rolling-resistance coefficient, force / weight
 });
 
 export const RegenBlending = z.discriminatedUnion('type', [
   z.strictObject({ type: z.literal('regen_first') }),
-  z.strictObject({ type: z.literal('fixed_proportion'), proportion: numAbove(0, 5) }),
+  z.strictObject({ type: z.literal('fixed_proportion'), proportion: numAbove(0, 5, ratio('Regenerative to friction braking proportion')) }),
 ]);
 
 export const Regen = z
   .strictObject({
-    max_motor_torque_nm: numAbove(0, 20000),
-    gear_ratio: num(1, 50),
-    max_power_kw: numAbove(0, 2000),
-    fade_start_kmh: num(0, 100).optional(),
-    cutoff_kmh: num(0, 100).optional(),
+    max_motor_torque_nm: numAbove(0, 20000, { quantity: 'torque', unit: 'N*m', label: 'Maximum motor torque' }),
+    gear_ratio: num(1, 50, ratio('Gear ratio, motor to wheel')),
+    max_power_kw: numAbove(0, 2000, { quantity: 'power', unit: 'kW', label: 'Maximum regenerative power' }),
+    fade_start_kmh: num(0, 100, speed('Speed where regeneration starts to fade')).optional(),
+    cutoff_kmh: num(0, 100, speed('Regeneration cut-off speed')).optional(),
     blending: RegenBlending,
-    front_share: num(0, 1).optional(),
-    speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
+    front_share: num(0, 1, ratio('Front share of the regenerative braking')).optional(),
+    speeds_kmh: z.array(numAbove(0, 300, speed('Speed of a regeneration check'))).min(1).max(10).optional(),
     // R13-H regeneration category (core/checks/regen-category.ts): A not part of service braking, B part of it
     category: z.enum(['A', 'B']).optional(),
     abs_controls_regen_axle: z.boolean().optional(),
@@ -157,26 +144,26 @@ export const Regen = z
   });
 
 export const StoppingOptions = z.strictObject({
-  speeds_kmh: z.array(numAbove(0, 300)).min(1).max(10).optional(),
-  reaction_time_s: num(0, 5).optional(),
-  build_up_time_s: num(0, 3).optional(),
-  abs_adhesion_factor: num(0.1, 1).optional(),
+  speeds_kmh: z.array(numAbove(0, 300, speed('Initial speed of a stop'))).min(1).max(10).optional(),
+  reaction_time_s: num(0, 5, time('Reaction time')).optional(),
+  build_up_time_s: num(0, 3, time('Brake build-up time')).optional(),
+  abs_adhesion_factor: num(0.1, 1, ratio('Adhesion used with antilock')).optional(),
 });
 
 export const HeatOptions = z.strictObject({
-  front_rotor_kg: num(0.5, 200),
-  rear_rotor_kg: num(0.5, 200),
-  specific_heat_j_per_kg_k: num(100, 2000).optional(),
-  heat_to_rotor_share: numAbove(0, 1).optional(),
-  cooling_coefficient_per_s: num(0, 1).optional(),
-  ambient_c: num(-40, 60).optional(),
-  rotating_energy_share: num(0, 0.5).optional(),
-  max_speed_kmh: numAbove(0, 400).optional(),
-  stop_speed_kmh: numAbove(0, 300).optional(),
-  base_vehicle_mass_kg: num(50, 60000).optional(),
-  base_vehicle_front_axle_kg: numAbove(0, 60000).optional(),
+  front_rotor_kg: num(0.5, 200, mass('Front rotor mass, each')),
+  rear_rotor_kg: num(0.5, 200, mass('Rear rotor mass, each')),
+  specific_heat_j_per_kg_k: num(100, 2000, { quantity: 'specific_heat', unit: 'J/(kg*K)', label: 'Specific heat of the rotor' }).optional(),
+  heat_to_rotor_share: numAbove(0, 1, ratio('Share of the heat into the rotor')).optional(),
+  cooling_coefficient_per_s: num(0, 1, { quantity: 'rate', unit: '1/s', label: 'Cooling coefficient' }).optional(),
+  ambient_c: num(-40, 60, temperature('Ambient temperature')).optional(),
+  rotating_energy_share: num(0, 0.5, ratio('Share of rotating energy')).optional(),
+  max_speed_kmh: numAbove(0, 400, speed('Maximum speed')).optional(),
+  stop_speed_kmh: numAbove(0, 300, speed('Speed at the end of a stop')).optional(),
+  base_vehicle_mass_kg: num(50, 60000, mass('Base vehicle mass')).optional(),
+  base_vehicle_front_axle_kg: numAbove(0, 60000, mass('Base vehicle front axle load')).optional(),
   // pad friction factor against rotor temperature for the hot stop (core/checks/hot-performance.ts)
-  hot_friction_factor_at_c: z.array(z.tuple([num(-40, 1200), num(0.1, 1.5)])).min(1).max(12).optional(),
+  hot_friction_factor_at_c: z.array(z.tuple([num(-40, 1200, temperature('Rotor temperature')), num(0.1, 1.5, ratio('Pad friction factor'))])).min(1).max(12).optional(),
 }).superRefine((h, ctx) => {
   const m = h.base_vehicle_mass_kg;
   const f = h.base_vehicle_front_axle_kg;
@@ -199,10 +186,10 @@ export const HeatOptions = z.strictObject({
 });
 
 export const TesterOptions = z.strictObject({
-  roller_adhesion: numAbove(0, 1.5).optional(),
-  test_mass_kg: num(50, 60000).optional(),
-  required_pct: num(1, 150).optional(),
-  pedal_force_limit_n: numAbove(0, 3000).optional(),
+  roller_adhesion: numAbove(0, 1.5, ratio('Roller adhesion coefficient')).optional(),
+  test_mass_kg: num(50, 60000, mass('Test mass')).optional(),
+  required_pct: num(1, 150, percent('Required braking force, share of the weight')).optional(),
+  pedal_force_limit_n: numAbove(0, 3000, force('Pedal force limit')).optional(),
 });
 
 /**
@@ -215,12 +202,12 @@ export const ParkingBrake = z
   .strictObject({
     axle: z.enum(['front', 'rear']),
     control: z.enum(['hand', 'foot']),
-    holding_force_n: numAbove(0, 500000).optional(),
-    control_force_n: numAbove(0, 2000).optional(),
-    lever_ratio: numAbove(0, 1000).optional(),
-    efficiency: numAbove(0, 1).optional(),
-    brake_factor: num(0.3, 15).optional(),
-    effective_radius_m: num(0.03, 0.5).optional(),
+    holding_force_n: numAbove(0, 500000, force('Holding force at the tyres')).optional(),
+    control_force_n: numAbove(0, 2000, force('Control force')).optional(),
+    lever_ratio: numAbove(0, 1000, ratio('Lever ratio')).optional(),
+    efficiency: numAbove(0, 1, ratio('Mechanism efficiency')).optional(),
+    brake_factor: num(0.3, 15, ratio('Parking brake factor')).optional(),
+    effective_radius_m: num(0.03, 0.5, length('Effective radius of the parking brake')).optional(),
   })
   .superRefine((b, ctx) => {
     const mech = (['lever_ratio', 'efficiency', 'brake_factor', 'effective_radius_m'] as const).filter((k) => b[k] !== undefined);
@@ -242,7 +229,7 @@ export const designShape = {
   load_states: z.array(LoadState).min(1).max(8),
   axles: z.strictObject({ front: Axle, rear: Axle }),
   hydraulics: Hydraulics,
-  adhesion_coefficients: z.array(num(0.05, 1.5)).min(1).max(20).optional(),
+  adhesion_coefficients: z.array(num(0.05, 1.5, ratio('Adhesion coefficient'))).min(1).max(20).optional(),
   provenance: Provenance.optional(),
   traction: TractionOptions.optional(),
   regen: Regen.optional(),
@@ -256,7 +243,7 @@ export const designShape = {
   build_up: BuildUp.optional(),
   ratings: Ratings.optional(),
   rules: z.array(z.enum(RULE_SELECTORS as [string, ...string[]])).min(1).max(20).optional(),
-  test_adhesion: num(0.05, 1.5).optional(),
+  test_adhesion: num(0.05, 1.5, ratio('Test surface adhesion')).optional(),
   parking_brake: ParkingBrake.optional(),
   tolerances: Tolerances.optional(), // robustness analysis of the sizing assistant (core/sizing/sizing-schema.ts)
   lightly_loaded: LightlyLoaded.optional(), // FMVSS 135 lightly loaded vehicle (core/cases-schema.ts)
@@ -286,25 +273,9 @@ export const DesignFile = z.strictObject(designShape).superRefine((d, ctx) => {
       });
     } else seen.set(s.id, i);
   });
-  const v = d.hydraulics.rear_valve;
-  if (v.type === 'load_sensing') {
-    const t = v.knee_bar_at_rear_axle_kg;
-    for (let i = 1; i < t.length; i++) {
-      if (t[i]![0] <= t[i - 1]![0]) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 0],
-          message: `${t[i]![0]} is not above the previous rear axle load ${t[i - 1]![0]} kg (the table must be sorted by rear axle load, ascending, without repeats)`,
-        });
-      }
-      if (t[i]![1] < t[i - 1]![1]) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['hydraulics', 'rear_valve', 'knee_bar_at_rear_axle_kg', i, 1],
-          message: `${t[i]![1]} bar is below the previous knee ${t[i - 1]![1]} bar (a load-sensing valve gives the rear more pressure with more load: the knee must not fall as the rear axle load rises)`,
-        });
-      }
-    }
+  // rules across the fields of the rear valve, from its type's module (core/valves/)
+  for (const iss of valveIssues(d.hydraulics.rear_valve)) {
+    ctx.addIssue({ code: 'custom', path: ['hydraulics', 'rear_valve', ...iss.path], message: iss.message });
   }
   for (const axle of ['front', 'rear'] as const) {
     const b = d.axles[axle].brake;
@@ -343,7 +314,6 @@ export type LoadState = z.infer<typeof LoadState>;
 export type Brake = z.infer<typeof Brake>;
 export type DiscBrake = z.infer<typeof DiscBrake>;
 export type DrumBrake = z.infer<typeof DrumBrake>;
-export type RearValve = z.infer<typeof RearValve>;
 export type Hydraulics = z.infer<typeof Hydraulics>;
 export type Vehicle = z.infer<typeof Vehicle>;
 export type TractionOptions = z.infer<typeof TractionOptions>;

@@ -35,7 +35,8 @@ import type { Brake, DesignFile } from './design.ts';
 import { forcesAt } from './distribution.ts';
 import type { AxleHardware, Hardware } from './hardware-schema.ts';
 import { pedalForce } from './pedal-force.ts';
-import { masterPressureForRear, rearPressure } from './rear-valve.ts';
+import { axleBrakeForce } from './brake-force.ts';
+import { masterPressureForRear, rearPressure } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 import type { Warning } from './validate.ts';
 
@@ -237,8 +238,8 @@ export const PEDAL_TRAVEL_METHOD =
 
 /** Braking rate the working circuits give at master pressure p, and the rear line pressure. */
 function rateWithCircuits(s: StateModel, front: number, rear: number, p: number): number {
-  const t1 = front * s.G1 * Math.max(0, p - s.threshold1);
-  const t2 = rear * s.G2 * Math.max(0, rearPressure(s.valve, p) - s.threshold2);
+  const t1 = front * axleBrakeForce(s.G1, p, s.threshold1);
+  const t2 = rear * axleBrakeForce(s.G2, rearPressure(s.valve, p), s.threshold2);
   return (t1 + t2) / s.loads.P;
 }
 

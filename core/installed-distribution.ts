@@ -5,7 +5,8 @@
  * valve knee, so the distribution in z is exact at those breakpoints and linear between them.
  */
 import type { Distribution, ForcesAt } from './distribution.ts';
-import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from './rear-valve.ts';
+import { axleBrakeForce, totalForceAtPressure } from './brake-force.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from './valves/index.ts';
 
 export interface HydraulicAxles {
   /** Vehicle weight P, N. */
@@ -28,8 +29,8 @@ export function installedDistribution(h: HydraulicAxles): Distribution {
   const d: Distribution = { P: h.P, z: [], t1: [], t2: [], p: [], p2: [] };
   for (const p of ps) {
     const p2 = rearPressure(h.valve, p);
-    const t1 = h.G1 * Math.max(0, p - h.threshold1);
-    const t2 = h.G2 * Math.max(0, p2 - h.threshold2);
+    const t1 = axleBrakeForce(h.G1, p, h.threshold1);
+    const t2 = axleBrakeForce(h.G2, p2, h.threshold2);
     d.z.push((t1 + t2) / h.P);
     d.t1.push(t1);
     d.t2.push(t2);
@@ -127,7 +128,7 @@ type Axles = Omit<HydraulicAxles, 'valve'>;
 
 /** zs(p): the braking rate at line pressure p below the knee, [G1(p − t1)⁺ + G2(p − t2)⁺]/P. */
 function rateBelowKnee(h: Axles, p: number): number {
-  return (h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, p - h.threshold2)) / h.P;
+  return (axleBrakeForce(h.G1, p, h.threshold1) + axleBrakeForce(h.G2, p, h.threshold2)) / h.P;
 }
 
 /** g(z) = z − zs(K(z)): negative below the knee crossing, positive above. */
@@ -179,10 +180,6 @@ function refinePiece(h: Axles, sensing: DynamicSensing, law: ValveLaw, d: Distri
  * pressure at the rear threshold and the knee, so p for F(p) = z·P is interpolated on its piece.
  */
 const KS = new Float64Array(4);
-/** F(p) = G1 (p − t1)⁺ + G2 (p2(p) − t2)⁺, N (a module function, not a closure: it runs in every evaluation). */
-function totalForce(h: Axles, law: ValveLaw, p: number): number {
-  return h.G1 * Math.max(0, p - h.threshold1) + h.G2 * Math.max(0, rearPressure(law, p) - h.threshold2);
-}
 function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: number): ForcesAt {
   const target = z * h.P;
   const k1 = h.threshold1;
@@ -207,7 +204,7 @@ function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: numb
   let p = NaN;
   for (let i = 0; i <= n; i++) {
     const hi = ks[i]!;
-    const fhi = totalForce(h, law, hi);
+    const fhi = totalForceAtPressure(h, law, hi);
     if (fhi >= target || i === n) {
       p = fhi > flo ? lo + ((target - flo) * (hi - lo)) / (fhi - flo) : lo;
       break;
@@ -217,6 +214,6 @@ function staticForcesAt(h: Omit<HydraulicAxles, 'valve'>, law: ValveLaw, z: numb
   }
   if (!(z > 0)) p = 0;
   const p2 = rearPressure(law, p);
-  const front = h.G1 * Math.max(0, p - h.threshold1);
+  const front = axleBrakeForce(h.G1, p, h.threshold1);
   return { front, rear: target - front, p, p2 };
 }

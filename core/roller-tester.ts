@@ -16,7 +16,8 @@
 import { G_N, PA_PER_BAR } from './constants.ts';
 import type { DesignFile } from './design.ts';
 import { pedalForce, pressureForPedalForce } from './pedal-force.ts';
-import { masterPressureForRear, rearPressure } from './rear-valve.ts';
+import { forcesAtPressure } from './brake-force.ts';
+import { masterPressureForRear } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 
 export const TESTER_DEFAULTS = {
@@ -59,10 +60,7 @@ export interface TesterResult {
 
 /** Installed axle brake forces at master pressure p (Pa), N. */
 function axleForces(s: StateModel, p: number): { front: number; rear: number } {
-  return {
-    front: s.G1 * Math.max(0, p - s.threshold1),
-    rear: s.G2 * Math.max(0, rearPressure(s.valve, p) - s.threshold2),
-  };
+  return forcesAtPressure(s, s.valve, p);
 }
 
 /** Master pressure at which the two axles' brake forces together reach F (N), Pa; Infinity when never. */

@@ -9,7 +9,7 @@ import type { DesignFile, LoadState } from './design.ts';
 import type { Distribution } from './distribution.ts';
 import { type DynamicSensing, dynamicSensingDistribution, installedDistribution } from './installed-distribution.ts';
 import { hydraulicPedalModel, type PedalModel } from './pedal-force.ts';
-import { type ValveLaw, valveLaw } from './rear-valve.ts';
+import { type ValveLaw, valveLaw } from './valves/index.ts';
 import { balanceBarPressureRatio } from './sizing/sizing-schema.ts';
 
 export interface StateModel {

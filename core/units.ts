@@ -6,7 +6,8 @@ import { G_N, PA_PER_BAR } from './constants.ts';
 
 export type Quantity =
   | 'mass' | 'length' | 'short_length' | 'force' | 'pressure' | 'acceleration' | 'speed'
-  | 'distance' | 'ratio' | 'angle' | 'energy' | 'temperature_rise' | 'time';
+  | 'distance' | 'ratio' | 'angle' | 'energy' | 'temperature_rise' | 'time'
+  | 'volume' | 'compliance' | 'power' | 'torque' | 'temperature' | 'percentage' | 'specific_heat' | 'rate';
 
 /** Factor from the unit to SI (value_SI = value × factor). NIST SP 811 B.8 / B.9. */
 export const TO_SI = {
@@ -40,6 +41,15 @@ export const TO_SI = {
   K: 1,
   s: 1,
   '1': 1,
+  mm3: 1e-9, // cubic millimetre
+  'mm3/bar': 1e-9 / PA_PER_BAR, // volume taken per pressure (hose and caliper expansion), m³/Pa in SI
+  kW: 1e3,
+  'N*m': 1,
+  /** Degree Celsius: the factor holds for temperature differences only; absolute temperatures stay in °C everywhere. */
+  degC: 1,
+  '%': 0.01,
+  '1/s': 1,
+  'J/(kg*K)': 1,
 } as const;
 
 export type Unit = keyof typeof TO_SI;
@@ -69,7 +79,28 @@ export const DISPLAY_UNITS: Record<Quantity, Record<UnitSystem, Unit>> = {
   energy: { metric: 'kJ', us: 'kJ' },
   temperature_rise: { metric: 'K', us: 'K' },
   time: { metric: 's', us: 's' },
+  volume: { metric: 'mm3', us: 'mm3' },
+  compliance: { metric: 'mm3/bar', us: 'mm3/bar' },
+  power: { metric: 'kW', us: 'kW' },
+  torque: { metric: 'N*m', us: 'N*m' },
+  temperature: { metric: 'degC', us: 'degC' },
+  percentage: { metric: '%', us: '%' },
+  specific_heat: { metric: 'J/(kg*K)', us: 'J/(kg*K)' },
+  rate: { metric: '1/s', us: '1/s' },
 };
+
+/** How a unit is written for a person ("" for a plain number). */
+export const UNIT_LABELS: Record<Unit, string> = {
+  kg: 'kg', t: 't', lb: 'lb', m: 'm', mm: 'mm', cm: 'cm', in: 'in', ft: 'ft', N: 'N', kN: 'kN', daN: 'daN', lbf: 'lbf',
+  Pa: 'Pa', kPa: 'kPa', MPa: 'MPa', bar: 'bar', psi: 'psi', 'm/s2': 'm/s²', g: 'g', 'ft/s2': 'ft/s²', 'm/s': 'm/s',
+  'km/h': 'km/h', mph: 'mph', rad: 'rad', deg: '°', J: 'J', kJ: 'kJ', K: 'K', s: 's', '1': '', mm3: 'mm³',
+  'mm3/bar': 'mm³/bar', kW: 'kW', 'N*m': 'N·m', degC: '°C', '%': '%', '1/s': '1/s', 'J/(kg*K)': 'J/(kg·K)',
+};
+
+/** The label of a unit; "" for a plain number or none. */
+export function unitLabel(u: Unit | null): string {
+  return u === null ? '' : UNIT_LABELS[u];
+}
 
 /** Units a user may type after a number, per quantity, with the spellings accepted. */
 const ACCEPTED: Record<Quantity, Record<string, Unit>> = {
@@ -86,6 +117,14 @@ const ACCEPTED: Record<Quantity, Record<string, Unit>> = {
   energy: { j: 'J', kj: 'kJ' },
   temperature_rise: { k: 'K' },
   time: { s: 's' },
+  volume: { mm3: 'mm3', 'mm³': 'mm3' },
+  compliance: { 'mm3/bar': 'mm3/bar', 'mm³/bar': 'mm3/bar' },
+  power: { kw: 'kW' },
+  torque: { nm: 'N*m', 'n·m': 'N*m', 'n*m': 'N*m' },
+  temperature: { '°c': 'degC', c: 'degC' },
+  percentage: { '%': '%' },
+  specific_heat: {},
+  rate: { '1/s': '1/s' },
 };
 
 export type ParsedQuantity =

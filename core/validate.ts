@@ -5,18 +5,11 @@
 import type { z } from 'zod';
 import { resolveBuildUp } from './build-up.ts';
 import { DesignFile, describeValue } from './design.ts';
+import type { FieldIssue, Warning } from './field-issue.ts';
+import { fieldMetaIn } from './field-registry.ts';
+import { unitLabel } from './units.ts';
 
-export interface FieldIssue {
-  /** Field path as written in the file, e.g. `load_states[1].front_axle_kg`; "" for the whole file. */
-  path: string;
-  message: string;
-}
-
-export interface Warning {
-  code: string;
-  path: string;
-  message: string;
-}
+export type { FieldIssue, Warning } from './field-issue.ts';
 
 export type DesignReading =
   | { ok: true; design: DesignFile; warnings: Warning[] }
@@ -31,18 +24,11 @@ export function formatPath(path: ReadonlyArray<PropertyKey>): string {
   return out;
 }
 
-/**
- * The unit a key carries in its name (design-file convention: `_kg`, `_m`, `_mm`, `_bar`, `_n`); the keys of an
- * object named with a unit carry that unit (`wheels_kg.front_left` is in kg).
- */
-export function unitOfKey(path: ReadonlyArray<PropertyKey>): string {
-  const keys = path.filter((k): k is string => typeof k === 'string');
-  const unit = (k: string | undefined) => {
-    const m = k === undefined ? null : /_(per_bar_mm3|mm3|kg|m|mm|bar|n|deg|s|ms2|kmh|pct)$/.exec(k);
-    return m ? ({ per_bar_mm3: 'mm³/bar', mm3: 'mm³', kg: 'kg', m: 'm', mm: 'mm', bar: 'bar', n: 'N', deg: '°', s: 's', ms2: 'm/s²', kmh: 'km/h', pct: '%' }[m[1]!] ?? '') : '';
-  };
-  const own = unit(keys.at(-1));
-  return own === '' && keys.at(-2) === 'wheels_kg' ? 'kg' : own;
+/** The unit of the numeric field at a path of a schema (the design file unless named), as written for people; "" for none. */
+export function unitOfPath(path: ReadonlyArray<PropertyKey>, schema: z.ZodType = DesignFile): string {
+  const keys = path.filter((k): k is string | number => typeof k === 'string' || typeof k === 'number');
+  const meta = fieldMetaIn(schema, keys);
+  return meta ? unitLabel(meta.unit) : '';
 }
 
 function valueAt(input: unknown, path: ReadonlyArray<PropertyKey>): unknown {
@@ -55,10 +41,10 @@ function valueAt(input: unknown, path: ReadonlyArray<PropertyKey>): unknown {
 }
 
 /** One zod issue as a message that names the field, the value given and what is allowed. */
-export function describeIssue(issue: z.core.$ZodIssue, input: unknown): FieldIssue {
+export function describeIssue(issue: z.core.$ZodIssue, input: unknown, schema: z.ZodType = DesignFile): FieldIssue {
   const path = formatPath(issue.path);
   const value = valueAt(input, issue.path);
-  const unit = unitOfKey(issue.path);
+  const unit = unitOfPath(issue.path, schema);
   let message: string;
   switch (issue.code) {
     case 'too_small':

@@ -17,58 +17,17 @@
 import { VERIFY_NOTE } from './caution.ts';
 import { categoryFigures } from './category-figures.ts';
 import { G_N, PA_PER_BAR } from './constants.ts';
-import type { DesignFile, RearValve } from './design.ts';
+import type { DesignFile } from './design.ts';
+import { axleBrakeForce } from './brake-force.ts';
 import type { Distribution } from './distribution.ts';
 import { installedDistribution } from './installed-distribution.ts';
 import { firstLock, type FirstAxle } from './lock-order.ts';
 import { pressureForPedalForce } from './pedal-force.ts';
-import { rearPressure, type ValveLaw } from './rear-valve.ts';
+import { type FailedValve, failedValves, rearPressure, type ValveFailureMode, type ValveLaw } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 
-export type ValveFailureMode =
-  | 'passes_full_pressure'
-  | 'blocks_rear'
-  | 'linkage_broken_lowest_knee'
-  | 'linkage_broken_highest_knee';
-
-/** A failed valve for one load state: the valve law it follows and whether the rear line is shut. */
-export interface FailedValve {
-  mode: ValveFailureMode;
-  description: string;
-  law: ValveLaw;
-  rearBlocked: boolean;
-}
-
-const DESCRIPTIONS: Record<ValveFailureMode, string> = {
-  passes_full_pressure: 'valve stuck open: the rear brakes get full master-cylinder pressure',
-  blocks_rear: 'valve stuck shut: the rear brakes get no pressure',
-  linkage_broken_lowest_knee: 'load-sensing linkage broken: the valve holds its lowest knee (reads the vehicle as empty)',
-  linkage_broken_highest_knee: 'load-sensing linkage broken: the valve holds its highest knee (reads the vehicle as fully laden)',
-};
-
-/** The failed states of a rear valve (empty for "none"). */
-export function failedValves(valve: RearValve): FailedValve[] {
-  const full: ValveLaw = { knee: Infinity, ratio: 1 };
-  switch (valve.type) {
-    case 'none':
-      return [];
-    case 'limiting':
-    case 'proportioning':
-      return [
-        { mode: 'passes_full_pressure', description: DESCRIPTIONS.passes_full_pressure, law: full, rearBlocked: false },
-        { mode: 'blocks_rear', description: DESCRIPTIONS.blocks_rear, law: full, rearBlocked: true },
-      ];
-    case 'load_sensing': {
-      const knees = valve.knee_bar_at_rear_axle_kg.map(([, k]) => k);
-      const lo = Math.min(...knees) * PA_PER_BAR;
-      const hi = Math.max(...knees) * PA_PER_BAR;
-      return [
-        { mode: 'linkage_broken_lowest_knee', description: DESCRIPTIONS.linkage_broken_lowest_knee, law: { knee: lo, ratio: valve.ratio }, rearBlocked: false },
-        { mode: 'linkage_broken_highest_knee', description: DESCRIPTIONS.linkage_broken_highest_knee, law: { knee: hi, ratio: valve.ratio }, rearBlocked: false },
-      ];
-    }
-  }
-}
+export type { FailedValve, ValveFailureMode } from './valves/index.ts';
+export { failedValves };
 
 /**
  * The failed law referred to the front line pressure of the state model: with a balance bar the valve sits
@@ -95,8 +54,8 @@ export function failedDistribution(s: StateModel, f: FailedValve): Distribution 
 
 /** Braking rate at master pressure p with the valve failed. */
 export function failedRateAtPressure(s: StateModel, f: FailedValve, p: number): number {
-  const t1 = s.G1 * Math.max(0, p - s.threshold1);
-  const t2 = f.rearBlocked ? 0 : s.G2 * Math.max(0, rearPressure(referredLaw(s, f), p) - s.threshold2);
+  const t1 = axleBrakeForce(s.G1, p, s.threshold1);
+  const t2 = f.rearBlocked ? 0 : axleBrakeForce(s.G2, rearPressure(referredLaw(s, f), p), s.threshold2);
   return (t1 + t2) / s.loads.P;
 }
 

@@ -5,10 +5,10 @@
  * controls of the page (units, operations) and never reach the design.
  *
  * Conventions (also in DEVELOPERS.md, "Adding inputs to the workbench"):
- * - numbers: a key with a unit suffix (_kg, _m, _mm, _bar, _n, _kmh, _ms2, _deg, _s) is shown and typed in the
- *   user's unit system; any field also takes a typed unit ("58 in"). Keys whose schema is z.number() without a
- *   suffix are plain numbers. FIELD_QUANTITIES overrides the quantity for paths whose suffix does not tell
- *   (the rows of the load-sensing table, the corner weights). An empty number field leaves the key out.
+ * - numbers: the quantity table of the schema (core/field-meta.ts: quantity, file unit, label of every numeric
+ *   field) says how a field is shown and typed in the user's unit system; any field also takes a typed unit
+ *   ("58 in"). Fields of quantity "ratio" are plain numbers. Names under `lift.` are fields of the axle-lift file.
+ *   An empty number field leaves the key out.
  * - booleans (schema z.boolean()): a hidden input "false" followed by a checkbox "true"; the last value wins.
  *   Optional facts where "not stated" differs from "no" use a three-way select (views/fields.ts triStateField):
  *   "" (not stated) leaves the key out, "true" / "false" set it. Other text is reported on the field.
@@ -18,17 +18,20 @@
  *   the schema's list limits are refused.
  * - objects that end up without keys are left out (an optional block nobody filled in stays absent).
  */
-import { z } from 'zod';
 import {
+  axleLiftFieldMeta,
+  DesignFile,
   DISPLAY_UNITS,
-  type DesignFile,
   type FieldIssue,
+  type FieldMeta,
+  fieldMeta,
   type Quantity,
+  schemaAt,
   TO_SI,
   type Unit,
+  unitLabel,
   type UnitSystem,
   type Warning,
-  designShape,
   formatPath,
   parseQuantity,
   readDesign,
@@ -39,27 +42,24 @@ import { FORBIDDEN_KEYS, fieldNameProblem } from './field-names.ts';
 export type FormValues = Record<string, string>;
 export type PathKey = string | number;
 
-/** Quantity overrides for paths whose key suffix does not say it; first match wins. Add a line for a new block. */
-export const FIELD_QUANTITIES: Array<{ pattern: RegExp; quantity: Quantity }> = [
-  { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[0\]$/, quantity: 'mass' },
-  { pattern: /^hydraulics\.rear_valve\.knee_bar_at_rear_axle_kg\[\d+\]\[1\]$/, quantity: 'pressure' },
-  { pattern: /^build_up\.baseline\.wheels_kg\.(front|rear)_(left|right)$/, quantity: 'mass' },
+export { unitLabel };
+
+/**
+ * Fields of the axle-lift form that are no key of the axle-lift file: the reading of the axle on the scales (the
+ * form asks for one reading per lift and stores it as front_axle_kg or rear_axle_kg).
+ */
+const FORM_ONLY_FIELDS: ReadonlyArray<{ pattern: RegExp; meta: FieldMeta }> = [
+  { pattern: /^lift\.lifts\[\d+\]\.reading_kg$/, meta: { quantity: 'mass', unit: 'kg', label: 'Axle reading' } },
 ];
 
-/** Key suffix -> quantity and the unit the design file stores it in. */
-const SUFFIX: Record<string, { quantity: Quantity; unit: Unit }> = {
-  kg: { quantity: 'mass', unit: 'kg' },
-  m: { quantity: 'length', unit: 'm' },
-  mm: { quantity: 'short_length', unit: 'mm' },
-  bar: { quantity: 'pressure', unit: 'bar' },
-  n: { quantity: 'force', unit: 'N' },
-  kmh: { quantity: 'speed', unit: 'km/h' },
-  ms2: { quantity: 'acceleration', unit: 'm/s2' },
-  deg: { quantity: 'angle', unit: 'deg' },
-  s: { quantity: 'time', unit: 's' },
-};
-/** The design-file unit of each quantity (what FIELD_QUANTITIES overrides are stored in). */
-const FILE_UNIT: Partial<Record<Quantity, Unit>> = Object.fromEntries(Object.values(SUFFIX).map((s) => [s.quantity, s.unit]));
+/** Quantity, file unit and label of a form field: a design-file path, or `lift.` and an axle-lift file path. */
+export function fieldMetaOfName(name: string): FieldMeta | null {
+  if (name.startsWith('lift.')) {
+    for (const f of FORM_ONLY_FIELDS) if (f.pattern.test(name)) return f.meta;
+    return axleLiftFieldMeta(name.slice('lift.'.length));
+  }
+  return fieldMeta(name);
+}
 
 export function parseFieldPath(name: string): PathKey[] {
   const out: PathKey[] = [];
@@ -77,20 +77,10 @@ export interface FieldUnit {
   fileUnit: Unit;
 }
 
-/** Quantity and file unit of a numeric field, or null for a plain number. */
+/** Quantity and file unit of a numeric field, or null for a plain number (quantity "ratio") or no number. */
 export function unitOfField(name: string): FieldUnit | null {
-  for (const o of FIELD_QUANTITIES) {
-    if (o.pattern.test(name)) return { quantity: o.quantity, fileUnit: FILE_UNIT[o.quantity] ?? DISPLAY_UNITS[o.quantity].metric };
-  }
-  const path = parseFieldPath(name);
-  for (let i = path.length - 1; i >= 0; i--) {
-    const k = path[i];
-    if (typeof k !== 'string') continue;
-    const m = /_([a-z0-9]+)$/.exec(k);
-    const s = m && Object.hasOwn(SUFFIX, m[1]!) ? SUFFIX[m[1]!] : undefined;
-    return s ? { quantity: s.quantity, fileUnit: s.unit } : null;
-  }
-  return null;
+  const m = fieldMetaOfName(name);
+  return m && m.unit !== '1' ? { quantity: m.quantity, fileUnit: m.unit } : null;
 }
 
 /** The unit a field is shown in for a unit system (null for plain numbers). */
@@ -99,75 +89,33 @@ export function displayUnitOf(name: string, units: UnitSystem): Unit | null {
   return u ? DISPLAY_UNITS[u.quantity][units] : null;
 }
 
-/** How a unit is written for a person. */
-export function unitLabel(u: Unit | null): string {
-  if (u === null || u === '1') return '';
-  return ({ 'm/s2': 'm/s²', 'ft/s2': 'ft/s²', deg: '°' } as Partial<Record<Unit, string>>)[u] ?? u;
-}
-
 // ---- what the schema says a leaf is --------------------------------------------------------------
-
-type Def = { type: string; [k: string]: unknown };
-const defOf = (s: unknown): Def => (s as { _zod: { def: Def } })._zod.def;
-
-function leafAt(schema: unknown, path: readonly PathKey[]): Def | null {
-  let d = defOf(schema);
-  for (let i = 0; i <= path.length; i++) {
-    // unwrap wrappers first
-    for (;;) {
-      if (['optional', 'nullable', 'default', 'readonly', 'catch', 'nonoptional', 'prefault'].includes(d.type)) d = defOf(d.innerType);
-      else if (d.type === 'pipe') d = defOf(d.in);
-      else if (d.type === 'lazy') d = defOf((d.getter as () => unknown)());
-      else break;
-    }
-    if (i === path.length) return d;
-    const k = path[i]!;
-    if (d.type === 'union') {
-      for (const o of d.options as unknown[]) {
-        const r = leafAt(o, path.slice(i));
-        if (r) return r;
-      }
-      return null;
-    }
-    if (d.type === 'object' && typeof k === 'string') {
-      const next = (d.shape as Record<string, unknown>)[k];
-      if (!next) return null;
-      d = defOf(next);
-    } else if (d.type === 'array' && typeof k === 'number') d = defOf(d.element);
-    else if (d.type === 'tuple' && typeof k === 'number') {
-      const item = (d.items as unknown[])[k] ?? d.rest;
-      if (!item) return null;
-      d = defOf(item);
-    } else if (d.type === 'record' && typeof k === 'string') d = defOf(d.valueType);
-    else return null;
-  }
-  return null;
-}
 
 export type FieldKind = 'number' | 'boolean' | 'text';
 
-/** Kind of a field from its key suffix and the design schema (designShape, including blocks added later). */
+/** Kind of a field from the design schema (including blocks added later). */
 const kindCache = new Map<string, FieldKind>();
-let designSchema: unknown = null;
 
 export function kindOfField(name: string): FieldKind {
-  const key = name.replace(/\[\d+\]/g, '[0]');
-  let k = kindCache.get(key);
+  let k = kindCache.get(name);
   if (k === undefined) {
-    k = findKind(key);
-    if (kindCache.size < 5000) kindCache.set(key, k);
+    k = findKind(name);
+    if (kindCache.size >= 5000) kindCache.clear();
+    kindCache.set(name, k);
   }
   return k;
 }
 
+type Def = { type: string; [k: string]: unknown };
+
 function findKind(name: string): FieldKind {
-  if (unitOfField(name)) return 'number';
-  designSchema ??= z.object(designShape);
-  const leaf = leafAt(designSchema, parseFieldPath(name));
+  if (fieldMetaOfName(name)) return 'number';
+  const leaf = schemaAt(DesignFile, parseFieldPath(name));
   if (!leaf) return 'text';
-  if (leaf.type === 'number' || leaf.type === 'int' || leaf.type === 'float') return 'number';
-  if (leaf.type === 'boolean') return 'boolean';
-  if (leaf.type === 'literal' && (leaf.values as unknown[]).every((v) => typeof v === 'number')) return 'number';
+  const d = (leaf as unknown as { _zod: { def: Def } })._zod.def;
+  if (d.type === 'number' || d.type === 'int' || d.type === 'float') return 'number';
+  if (d.type === 'boolean') return 'boolean';
+  if (d.type === 'literal' && (d.values as unknown[]).every((v) => typeof v === 'number')) return 'number';
   return 'text';
 }
 

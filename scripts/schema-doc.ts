@@ -10,6 +10,8 @@ import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { z } from 'zod';
 import { DesignFile } from '../core/design.ts';
+import { fieldMeta } from '../core/field-meta.ts';
+import { unitLabel } from '../core/units.ts';
 
 export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 export const SCHEMA_PATH = join(ROOT, 'docs', 'design-file.schema.json');
@@ -41,51 +43,18 @@ interface Row {
   key: string;
   type: string;
   unit: string;
+  /** What a numeric field is, in words (its label in the quantity table). */
+  meaning: string;
   allowed: string;
   required: boolean;
 }
 
 const fmtNum = (n: unknown) => String(n);
 
-/** Units by key suffix (the design-file convention: the key carries its unit). */
-const SUFFIX_UNITS: [RegExp, string][] = [
-  [/_j_per_kg_k$/, 'J/(kg·K)'],
-  [/_mm3_per_bar$/, 'mm³/bar'],
-  [/_mm3$/, 'mm³'],
-  [/_kg$/, 'kg'],
-  [/_mm$/, 'mm'],
-  [/_m$/, 'm'],
-  [/_bar$/, 'bar'],
-  [/_nm$/, 'N·m'],
-  [/_n$/, 'N'],
-  [/_kw$/, 'kW'],
-  [/_kmh$/, 'km/h'],
-  [/_ms2$/, 'm/s²'],
-  [/_c$/, '°C'],
-  [/_deg$/, '°'],
-  [/_per_s$/, '1/s'],
-  [/_s$/, 's'],
-  [/_pct$/, '%'],
-];
-/** Lists whose entries are pairs of different units. */
-const PAIR_UNITS: Record<string, [string, string]> = { knee_bar_at_rear_axle_kg: ['kg', 'bar'], hot_friction_factor_at_c: ['°C', ''] };
-
-function suffixUnit(key: string): string {
-  for (const [re, unit] of SUFFIX_UNITS) if (re.test(key)) return unit;
-  return '';
-}
-
-/** Unit of a value at a path: its own key's suffix, else the nearest enclosing key's (e.g. wheels_kg.front_left). */
-function docUnit(path: (string | number)[]): string {
-  for (let i = path.length - 1; i >= 0; i--) {
-    const k = path[i];
-    if (typeof k !== 'string') continue;
-    if (/_(share|ratio)$/.test(k)) return ''; // a dimensionless ratio inside a block whose name ends in a unit suffix (balance_bar)
-    if (PAIR_UNITS[k] && typeof path[path.length - 1] === 'number' && i === path.length - 3) return PAIR_UNITS[k]![path[path.length - 1] as number]!;
-    const u = suffixUnit(k);
-    if (u) return u;
-  }
-  return '';
+/** Unit and label of a numeric value at a path, from the quantity table of the schema (core/field-meta.ts). */
+function docMeta(path: (string | number)[]): { unit: string; meaning: string } {
+  const m = fieldMeta(path);
+  return m ? { unit: unitLabel(m.unit), meaning: m.label } : { unit: '', meaning: '' };
 }
 
 function typeAndRange(s: Json): { type: string; allowed: string } {
@@ -130,7 +99,8 @@ export function keyRows(schema: Json = designJsonSchema()): Row[] {
     if (key !== '') {
       const { type, allowed } = typeAndRange(s);
       const numeric = s.type === 'number' || s.type === 'integer';
-      rows.push({ key, type, unit: numeric ? docUnit(rawPath) : '', allowed, required });
+      const m = numeric ? docMeta(rawPath) : { unit: '', meaning: '' };
+      rows.push({ key, type, unit: m.unit, meaning: m.meaning, allowed, required });
     }
     if (s.type === 'object' && s.properties) {
       const req = new Set((s.required as string[] | undefined) ?? []);
@@ -150,7 +120,7 @@ export function keyRows(schema: Json = designJsonSchema()): Row[] {
           const row = rows[rows.length - 1]!;
           const inner = typeAndRange(it);
           row.type = `list of ${inner.type}`;
-          if (it.type === 'number' || it.type === 'integer') row.unit = docUnit([...rawPath, 0]);
+          if (it.type === 'number' || it.type === 'integer') Object.assign(row, docMeta([...rawPath, 0]));
           row.allowed = [row.allowed, inner.allowed && `each ${inner.allowed}`].filter(Boolean).join('; ');
         }
       }
@@ -174,9 +144,11 @@ export function keyReferenceMarkdown(schema: Json = designJsonSchema()): string 
   const lines = [
     BEGIN,
     '',
-    '| Key | Required | Type | Unit | Allowed |',
-    '| --- | --- | --- | --- | --- |',
-    ...keyRows(schema).map((r) => `| \`${cell(r.key)}\` | ${r.required ? 'yes' : 'no'} | ${cell(r.type)} | ${cell(r.unit || '—')} | ${cell(r.allowed || '—')} |`),
+    '| Key | Required | Type | Unit | Meaning | Allowed |',
+    '| --- | --- | --- | --- | --- | --- |',
+    ...keyRows(schema).map(
+      (r) => `| \`${cell(r.key)}\` | ${r.required ? 'yes' : 'no'} | ${cell(r.type)} | ${cell(r.unit || '—')} | ${cell(r.meaning || '—')} | ${cell(r.allowed || '—')} |`,
+    ),
     '',
     END,
   ];

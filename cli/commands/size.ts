@@ -4,7 +4,7 @@
  * passes every selected rule in every load state, 1 when nothing proposed passes, 2 invalid input.
  */
 import { parseArgs } from 'node:util';
-import { readDesign } from '../../core/index.ts';
+import { readDesign, rearValveFamily, unitLabel, valveSettings } from '../../core/index.ts';
 import { sizeDesign, type SizingResult } from '../../core/sizing/sizing.ts';
 import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
@@ -75,8 +75,8 @@ export function sizingText(r: SizingResult): string {
   }
   if (r.valve) {
     const v = r.valve.valve;
-    const desc =
-      v.type === 'limiting' ? `limiting, knee ${v.knee_bar} bar` : v.type === 'proportioning' ? `proportioning, knee ${v.knee_bar} bar, ratio ${v.ratio}` : v.type === 'load_sensing' ? `load-sensing, ratio ${v.ratio}, knee ${v.knee_bar_at_rear_axle_kg.map(([kg, b]) => `${b} bar at ${kg} kg`).join(', ')}` : 'none';
+    // the valve from its type's module, its numbers with the unit and label of the quantity table (core/valves/)
+    const desc = [rearValveFamily(v).name, ...valveSettings(v).map((st) => `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${st.value}${unitLabel(st.meta.unit) ? ` ${unitLabel(st.meta.unit)}` : ''}`)].join(', ');
     out.push(`Rear valve: ${desc}; smallest margin ${fmt(r.valve.smallest_margin, 4)} (${r.valve.passes ? 'passes' : 'fails'})`);
     if (r.valve_search) out.push(`  proportioning map: ${r.valve_search.map.feasible_cells} of ${r.valve_search.map.knee_bar.length * r.valve_search.map.ratio.length} knee × ratio cells pass`);
     out.push('');

@@ -34,7 +34,8 @@ import { MARGIN_TOLERANCE } from '../checks/curve-check.ts';
 import type { DesignFile, LoadState } from '../design.ts';
 import { type Segment, segments } from '../distribution.ts';
 import { dynamicSensingDistribution } from '../installed-distribution.ts';
-import { loadSensingKneeBar, masterPressureForRear, rearPressure, type ValveLaw } from '../rear-valve.ts';
+import { axleBrakeForce } from '../brake-force.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, rearValveFamily, type ValveLaw } from '../valves/index.ts';
 import { PA_PER_BAR } from '../constants.ts';
 import { dynamicSensing, stateModel } from '../state-model.ts';
 import { mulberry32 } from './prng.ts';
@@ -156,7 +157,8 @@ export function robustnessModel(design: DesignFile, rules: readonly SizingRule[]
   const rulesOf = states.map((_, i) => rules.flatMap((r, j) => (r.states.includes(i) ? [j] : [])));
   const v = h.rear_valve;
   const dynamic = v.type === 'load_sensing' && v.senses !== 'static';
-  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: v.type !== 'none', ratioApplies: v.type === 'proportioning' || v.type === 'load_sensing', dynamic };
+  const moves = rearValveFamily(v).tolerances; // which valve settings the tolerances move, from the valve's module
+  return { design, rules, states, lambda, tol, rulesOf, kneeApplies: moves.knee, ratioApplies: moves.ratio, dynamic };
 }
 
 // ---- the per-sample evaluation: no allocation in the loop ----
@@ -198,8 +200,8 @@ function fillSegments(P: number, G1: number, G2: number, th1: number, th2: numbe
   for (let i = 0; i < n; i++) {
     const p = ps[i]!;
     const p2 = rearPressure(law, p);
-    const a = G1 * Math.max(0, p - th1);
-    const b = G2 * Math.max(0, p2 - th2);
+    const a = axleBrakeForce(G1, p, th1);
+    const b = axleBrakeForce(G2, p2, th2);
     zs[i] = (a + b) / P;
     t1s[i] = a;
     t2s[i] = b;
@@ -211,7 +213,7 @@ function fillSegments(P: number, G1: number, G2: number, th1: number, th2: numbe
 const dyn = { P: 0, G1: 0, G2: 0, th1: 0, th2: 0, m2: 0, perZ: 0, kneeScale: 0, ratio: 0, table: [] as ReadonlyArray<readonly [number, number]> };
 const dynKnee = (z: number) => loadSensingKneeBar(dyn.table, dyn.m2 - z * dyn.perZ) * dyn.kneeScale;
 /** Braking rate at master pressure p with the rear line at p (below the knee). */
-const dynZs = (p: number) => (dyn.G1 * Math.max(0, p - dyn.th1) + dyn.G2 * Math.max(0, p - dyn.th2)) / dyn.P;
+const dynZs = (p: number) => (axleBrakeForce(dyn.G1, p, dyn.th1) + axleBrakeForce(dyn.G2, p, dyn.th2)) / dyn.P;
 
 /**
  * dynamicSensingDistribution + segments (core/installed-distribution.ts) into buffers, for a travel-sensing
@@ -269,7 +271,7 @@ function fillDynamicSegments(): Segment[] | null {
       const K = dynKnee(z);
       p = (F + G1 * th1 + G2 * th2 - G2 * K * (1 - ratio)) / (G1 + G2 * ratio);
     }
-    const front = G1 * Math.max(0, p - th1);
+    const front = axleBrakeForce(G1, p, th1);
     zs[i] = z;
     t1s[i] = front;
     t2s[i] = F - front;

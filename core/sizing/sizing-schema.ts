@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { boundedNumber as num } from '../bounded-number.ts';
+import { length, mass, percent, pressure, ratio, shortLength, withField } from '../field-registry.ts';
 
 /**
  * Tolerances as ± limits. In the Monte Carlo a ± limit is read as two standard deviations (about
@@ -14,24 +15,24 @@ import { boundedNumber as num } from '../bounded-number.ts';
  */
 export const Tolerances = z.strictObject({
   /** Pad (lining) friction, ± per cent of the nominal value, front and rear brakes separately. */
-  pad_friction_front_pct: num(0, 50).optional(),
-  pad_friction_rear_pct: num(0, 50).optional(),
+  pad_friction_front_pct: num(0, 50, percent('Front pad friction tolerance')).optional(),
+  pad_friction_rear_pct: num(0, 50, percent('Rear pad friction tolerance')).optional(),
   /** CG height, ± m (a load state's cg_height_uncertainty_m, a standard uncertainty, takes precedence: ± = 2 u). */
-  cg_height_m: num(0, 1).optional(),
+  cg_height_m: num(0, 1, length('CG height tolerance')).optional(),
   /** Front axle load, ± kg (vehicle mass unchanged: what the front gains the rear loses). */
-  front_axle_kg: num(0, 5000).optional(),
+  front_axle_kg: num(0, 5000, mass('Front axle load tolerance')).optional(),
   /** Dynamic tyre radius, ± per cent (the same tyres front and rear drawn together). */
-  tyre_radius_pct: num(0, 20).optional(),
+  tyre_radius_pct: num(0, 20, percent('Tyre radius tolerance')).optional(),
   /**
    * Rear valve knee, ± per cent of the knee pressure (limiting and proportioning valves; a load-sensing
    * valve's whole knee table moves together, as a change of its spring preload would move it).
    */
-  valve_knee_pct: num(0, 50).optional(),
+  valve_knee_pct: num(0, 50, percent('Valve knee tolerance')).optional(),
   /** Rear valve ratio above the knee, ± per cent (proportioning and load-sensing valves; never above 1). */
-  valve_ratio_pct: num(0, 50).optional(),
+  valve_ratio_pct: num(0, 50, percent('Valve ratio tolerance')).optional(),
   /** Threshold (push-out) pressure of the front and rear brakes, ± bar (never below 0). */
-  threshold_front_bar: num(0, 10).optional(),
-  threshold_rear_bar: num(0, 10).optional(),
+  threshold_front_bar: num(0, 10, pressure('Front threshold pressure tolerance')).optional(),
+  threshold_rear_bar: num(0, 10, pressure('Rear threshold pressure tolerance')).optional(),
   /** Shape of the Monte Carlo draws inside the ± limits. */
   distribution: z.enum(['normal', 'uniform']).optional(),
 });
@@ -69,11 +70,11 @@ export const DEFAULT_TOLERANCES = {
  * pressure = (1 − s)·F / A_r (before the rear valve, if any).
  */
 export const BalanceBar = z.strictObject({
-  rear_bore_mm: num(10, 60),
-  setting_front_share: z
+  rear_bore_mm: num(10, 60, shortLength('Rear master cylinder bore')),
+  setting_front_share: withField(z
     .number({ error: (iss) => (iss.input === undefined ? 'is required: a number above 0 and below 1' : 'is not a number; allowed: above 0 and below 1') })
     .gt(0, { error: (iss) => `${String(iss.input)} is not above 0 and below 1 (the share of the pushrod force sent to the front master cylinder)` })
-    .lt(1, { error: (iss) => `${String(iss.input)} is not above 0 and below 1 (the rear master cylinder gets 1 − setting_front_share of the pushrod force)` }),
+    .lt(1, { error: (iss) => `${String(iss.input)} is not above 0 and below 1 (the rear master cylinder gets 1 − setting_front_share of the pushrod force)` }), ratio('Balance bar setting, front share')),
   /** True when the driver can reach the adjuster (cockpit knob or cable). Some inspection regimes refuse that. */
   driver_adjustable: z.boolean().optional(),
 });

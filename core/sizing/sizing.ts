@@ -7,6 +7,7 @@
 import { CAUTION, VERIFY_NOTE } from '../caution.ts';
 import type { DesignFile } from '../design.ts';
 import { stateModel } from '../state-model.ts';
+import { rearValveFamily } from '../valves/index.ts';
 import { frontShareAtLowPressure } from '../distribution.ts';
 import { applySizingChange } from './apply-change.ts';
 import { designMargins, type DesignMargins } from './design-margins.ts';
@@ -115,8 +116,6 @@ function balanceBarSizing(design: DesignFile, rules: readonly SizingRule[], band
   };
 }
 
-/** A rear valve type in words for people (the text report and the page print `applies_to`). */
-const VALVE_WORDS: Readonly<Record<DesignFile['hydraulics']['rear_valve']['type'], string>> = { none: 'no valve', limiting: 'limiting valve', proportioning: 'proportioning valve', load_sensing: 'load-sensing valve' };
 
 export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): SizingResult {
   const rules = sizingCurveRules(design, opts.rules);
@@ -164,7 +163,7 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
       appliesTo = `the design with the recommended change: ${recOption.change}`;
     } else if (valveRec?.passes) {
       assessed = applySizingChange(design, 'hydraulics.rear_valve', valveRec.valve);
-      appliesTo = `the design with the recommended rear valve (${VALVE_WORDS[valveRec.valve.type]})`;
+      appliesTo = `the design with the recommended rear valve (${rearValveFamily(valveRec.valve).name})`;
     } else if (barRec?.with_recommended.passes) {
       assessed = applySizingChange(design, barRec.path, barRec.recommended_setting_front_share);
       appliesTo = 'the design with the balance bar locked at the recommended setting';

@@ -15,7 +15,7 @@ import { PA_PER_BAR } from '../constants.ts';
 import type { DesignFile, RearValve } from '../design.ts';
 import { segments } from '../distribution.ts';
 import { installedDistribution } from '../installed-distribution.ts';
-import type { ValveLaw } from '../rear-valve.ts';
+import type { ValveLaw } from '../valves/index.ts';
 import { stateModel } from '../state-model.ts';
 import { designMargins, type RuleMargin } from './design-margins.ts';
 import { type Geometry, geometryOf, ruleMargin } from './rule-margin.ts';

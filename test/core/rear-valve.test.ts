@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/demo.ts';
 import type { DesignFile } from '../../core/design.ts';
-import { loadSensingKneeBar, masterPressureForRear, rearPressure, valveLaw } from '../../core/rear-valve.ts';
+import { loadSensingKneeBar, masterPressureForRear, rearPressure, valveLaw } from '../../core/valves/index.ts';
 import { stateModel } from '../../core/state-model.ts';
 
 describe('valve laws', () => {

@@ -1,69 +1,69 @@
 /** Master cylinder, pedal, booster, circuit split and the rear pressure valve (with the load-sensing table). */
-import type { UnitSystem } from '../../core/index.ts';
+import { fieldMeta, type UnitSystem, VALVE_FAMILIES, type ValveFamily, type ValveInput, valveFamily } from '../../core/index.ts';
 import { type FormValues, formatFieldNumber } from '../../form/design-form.ts';
 import { type InputContext, blockMessage, listButton, listIndicesOf, numberField, selectField, triStateField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
 const V = 'hydraulics.rear_valve';
-type ValveType = 'none' | 'limiting' | 'proportioning' | 'load_sensing';
-const VALVE_TYPES: ReadonlyArray<readonly [ValveType, string]> = [
-  ['none', 'none (rear gets master-cylinder pressure)'],
-  ['limiting', 'limiting (rear pressure capped at the knee)'],
-  ['proportioning', 'proportioning (reduced above the knee)'],
-  ['load_sensing', 'load-sensing (knee follows rear axle load)'],
-];
-const KEYS: Record<ValveType, RegExp> = {
-  none: /^type$/,
-  limiting: /^(type|knee_bar)$/,
-  proportioning: /^(type|knee_bar|ratio)$/,
-  load_sensing: /^(type|ratio|senses|knee_bar_at_rear_axle_kg\[\d+\]\[[01]\])$/,
-};
-const START: Record<ValveType, Record<string, number>> = {
-  none: {},
-  limiting: { knee_bar: 35 },
-  proportioning: { knee_bar: 28, ratio: 0.3 },
-  load_sensing: { ratio: 0.3, 'knee_bar_at_rear_axle_kg[0][0]': 1100, 'knee_bar_at_rear_axle_kg[0][1]': 18, 'knee_bar_at_rear_axle_kg[1][0]': 1900, 'knee_bar_at_rear_axle_kg[1][1]': 42 },
-};
+/** The valve types offered, from the registry of valve types (core/valves/). */
+const VALVE_CHOICES: ReadonlyArray<readonly [string, string]> = VALVE_FAMILIES.map((f) => [f.type, f.description]);
 
-function valveType(values: FormValues): ValveType {
+/** The family of the valve type in the form; a type no module declares (typed by hand) is kept and reported by validation. */
+function familyIn(values: FormValues): ValveFamily | undefined {
   const t = values[`${V}.type`];
-  return VALVE_TYPES.some(([v]) => v === t) ? (t as ValveType) : 'none';
+  return t === undefined || t === '' ? valveFamily('none') : valveFamily(t);
+}
+
+/** Form keys of a valve type: `type` and its inputs (a table's keys are its rows' pairs). */
+function belongsTo(f: ValveFamily, key: string): boolean {
+  if (key === 'type') return true;
+  return f.inputs.some((i) => (i.kind === 'table' ? new RegExp(`^${i.key}\\[\\d+\\]\\[[01]\\]$`).test(key) : key === i.key));
 }
 
 function normalise(values: FormValues, units: UnitSystem): FormValues {
-  const type = valveType(values);
+  const family = familyIn(values);
+  if (!family) return values;
   const out: FormValues = {};
   const prefix = `${V}.`;
-  for (const [n, v] of Object.entries(values)) if (!n.startsWith(prefix) || KEYS[type].test(n.slice(prefix.length))) out[n] = v;
-  out[`${V}.type`] = type;
-  const hasTable = Object.keys(out).some((n) => n.startsWith(`${V}.knee_bar_at_rear_axle_kg[`));
-  for (const [k, v] of Object.entries(START[type])) {
+  for (const [n, v] of Object.entries(values)) if (!n.startsWith(prefix) || belongsTo(family, n.slice(prefix.length))) out[n] = v;
+  out[`${V}.type`] = family.type;
+  const tables = family.inputs.filter((i) => i.kind === 'table').map((i) => i.key);
+  const hasTable = (k: string) => tables.some((t) => k.startsWith(`${t}[`) && Object.keys(out).some((n) => n.startsWith(`${prefix}${t}[`)));
+  for (const [k, v] of Object.entries(family.start)) {
     const name = `${prefix}${k}`;
-    if (k.startsWith('knee_bar_at') && hasTable) continue;
+    if (hasTable(k)) continue;
     if (out[name] === undefined) out[name] = formatFieldNumber(name, v, units);
   }
   return out;
 }
 
-function valveInputs(ctx: InputContext): SafeHtml {
-  const type = valveType(ctx.values);
-  const knee = () => numberField(ctx, `${V}.knee_bar`, 'Knee pressure', { hint: 'master-cylinder pressure where the valve starts to act' });
-  const ratio = () => numberField(ctx, `${V}.ratio`, 'Ratio above the knee', { unitText: '–', hint: 'rise of rear pressure per unit rise of master-cylinder pressure' });
-  if (type === 'limiting') return knee();
-  if (type === 'proportioning') return html`${knee()}${ratio()}`;
-  if (type !== 'load_sensing') return html``;
-  const rows = listIndicesOf(ctx.values, `${V}.knee_bar_at_rear_axle_kg`);
-  const t = `${V}.knee_bar_at_rear_axle_kg`;
-  return html`${ratio()}
-${selectField(ctx, `${V}.senses`, 'Valve follows', [['', 'suspension travel while braking (default)'], ['dynamic', 'suspension travel while braking'], ['static', 'the rear axle load at rest']], { optional: true, hint: 'a linkage to the axle follows the load transfer while braking; the knee then falls as the rear unloads' })}
-<fieldset class="table-field"><legend>Knee pressure by rear axle load</legend>
-<p class="hint">Read from the valve's setting chart; linear between rows, held flat outside. Rows ascending by load.</p>
-<table class="inputs-table"><thead><tr><th scope="col">Rear axle load</th><th scope="col">Knee pressure</th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>
-${rows.map((i) => html`<tr><td>${numberField(ctx, `${t}[${i}][0]`, `Row ${i + 1}: rear axle load`, { compact: true, width: 's' })}</td><td>${numberField(ctx, `${t}[${i}][1]`, `Row ${i + 1}: knee pressure`, { compact: true, width: 's' })}</td><td>${listButton(`remove:${t}[${i}]`, '×', 'Remove this row', rows.length <= 1)}</td></tr>`)}
+/** A field's label from the quantity table (core/field-meta.ts), lower case after a row number. */
+const labelOf = (path: string): string => fieldMeta(path)?.label ?? path;
+const lower = (s: string): string => s.charAt(0).toLowerCase() + s.slice(1);
+
+function valveInput(ctx: InputContext, i: ValveInput): SafeHtml {
+  const name = `${V}.${i.key}`;
+  if (i.kind === 'number') {
+    const plain = fieldMeta(name)?.unit === '1';
+    return numberField(ctx, name, labelOf(name), plain ? { unitText: '–', hint: i.hint } : { hint: i.hint });
+  }
+  if (i.kind === 'choice') return selectField(ctx, name, i.label, i.options, { optional: true, hint: i.hint });
+  const rows = listIndicesOf(ctx.values, name);
+  const [first, second] = [labelOf(`${name}[0][0]`), labelOf(`${name}[0][1]`)];
+  return html`<fieldset class="table-field"><legend>${i.legend}</legend>
+<p class="hint">${i.hint}</p>
+<table class="inputs-table"><thead><tr><th scope="col">${first}</th><th scope="col">${second}</th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>
+${rows.map((r) => html`<tr><td>${numberField(ctx, `${name}[${r}][0]`, `Row ${r + 1}: ${lower(first)}`, { compact: true, width: 's' })}</td><td>${numberField(ctx, `${name}[${r}][1]`, `Row ${r + 1}: ${lower(second)}`, { compact: true, width: 's' })}</td><td>${listButton(`remove:${name}[${r}]`, '×', 'Remove this row', rows.length <= 1)}</td></tr>`)}
 </tbody></table>
-${listButton(`add:${t}`, '+ row', 'Add a row (copy of the last)', rows.length >= 20)}
-${blockMessage(ctx, t)}</fieldset>`;
+${listButton(`add:${name}`, '+ row', 'Add a row (copy of the last)', rows.length >= i.maxRows)}
+${blockMessage(ctx, name)}</fieldset>`;
+}
+
+function valveInputs(ctx: InputContext): SafeHtml {
+  const family = familyIn(ctx.values);
+  if (!family) return html``;
+  return html`${family.inputs.map((i, n) => html`${n > 0 ? '\n' : ''}${valveInput(ctx, i)}`)}`;
 }
 
 const BAR = 'hydraulics.balance_bar';
@@ -90,7 +90,7 @@ ${numberField(ctx, 'hydraulics.booster_runout_bar', 'Booster runout pressure', {
 ${selectField(ctx, 'hydraulics.circuit_split', 'Circuit split', [['front_rear', 'front / rear'], ['diagonal', 'diagonal']])}
 </div>
 <fieldset class="valve"><legend>Rear pressure valve</legend>
-${selectField(ctx, `${V}.type`, 'Valve type', VALVE_TYPES, { structural: true })}
+${selectField(ctx, `${V}.type`, 'Valve type', VALVE_CHOICES, { structural: true })}
 ${valveInputs(ctx)}
 ${blockMessage(ctx, V)}
 </fieldset>

@@ -7,7 +7,8 @@
  * Deferred (computed when in view). The page runs the Monte Carlo with PAGE_SAMPLES samples, only when the
  * "Run robustness analysis" button asks for it; `lockstep size` defaults to 100 000.
  */
-import { CAUTION, PA_PER_BAR, type SizingResult, sizeDesign, type UnitSystem, VERIFY_NOTE } from '../../core/index.ts';
+import { CAUTION, PA_PER_BAR, rearValveFamily, type SizingResult, sizeDesign, type UnitSystem, valveSettings, VERIFY_NOTE } from '../../core/index.ts';
+import { displayUnitOf, formatFieldNumber, unitLabel } from '../../form/design-form.ts';
 import { sizingOp, SIZING_UNDO_FIELD } from '../../form/sizing-apply.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText } from '../chart.ts';
 import { numberField, selectField } from '../fields.ts';
@@ -98,14 +99,13 @@ ${ok.length ? html`<div class="scroll"><table class="data"><thead><tr><th scope=
 function valveSection(r: SizingResult, units: UnitSystem): SafeHtml {
   if (!r.valve || !r.valve_search) return html``;
   const v = r.valve.valve;
-  const text =
-    v.type === 'limiting'
-      ? `limiting valve, knee ${v.knee_bar} bar`
-      : v.type === 'proportioning'
-        ? `proportioning valve, knee ${v.knee_bar} bar, ratio ${v.ratio}`
-        : v.type === 'load_sensing'
-          ? `load-sensing valve, ratio ${v.ratio}, knee ${v.knee_bar_at_rear_axle_kg.map(([kg, b]) => `${b} bar at ${kg} kg rear axle load`).join(', ')}`
-          : 'no valve';
+  // the valve in words, from its type's module and the quantity table (core/valves/, core/field-meta.ts)
+  const settings = valveSettings(v).map((st) => {
+    const name = `hydraulics.rear_valve.${st.path}`;
+    const unit = unitLabel(displayUnitOf(name, units));
+    return `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${formatFieldNumber(name, st.value, units)}${unit ? ` ${unit}` : ''}`;
+  });
+  const text = `${rearValveFamily(v).name}${settings.length ? `, ${settings.join(', ')}` : ''}`;
   const map = valveMap(r, units);
   return html`<h3>Rear valve</h3>
 <p><strong>${text}</strong>: smallest margin ${signed(r.valve.smallest_margin)} (${r.valve.passes ? 'passes every rule in every load state' : 'still fails'}). ${applyButton(r.valve_search.path, v, 'Apply')}</p>

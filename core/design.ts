@@ -10,6 +10,8 @@ import { BuildUp, loadStateBuildUpShape, Ratings } from './build-up-schema.ts';
 import { RULE_SELECTORS } from './rules/index.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 import { casesIssues, LightlyLoaded, Systems, Towing } from './cases-schema.ts';
+import { Provenance } from './provenance.ts';
+import { TestResults } from './test-results-schema.ts';
 
 export { describeValue };
 
@@ -18,7 +20,7 @@ const num = boundedNumber;
 const numAbove = boundedNumberAbove;
 
 export const VEHICLE_CATEGORIES = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'] as const;
-export const PROVENANCE_SOURCES = ['measured', 'maker', 'donor', 'assumed'] as const;
+export { Provenance, PROVENANCE_SOURCES } from './provenance.ts'; // each entry records the value it was stated for
 
 export const Vehicle = z.strictObject({
   category: z.enum(VEHICLE_CATEGORIES),
@@ -101,11 +103,6 @@ export const Hydraulics = z.strictObject({
   balance_bar: BalanceBar.optional(), // two master cylinders on a balance bar (core/sizing/sizing-schema.ts)
 });
 
-export const Provenance = z.record(
-  z.string().min(1).max(200),
-  z.strictObject({ source: z.enum(PROVENANCE_SOURCES), note: z.string().max(2000).optional() }),
-);
-
 /** Who and what an evidence packet is for; printed literally on its cover (all free text, optional). */
 export const Identification = z.strictObject({
   vehicle_identification_number: z.string().max(40).optional(),
@@ -113,6 +110,8 @@ export const Identification = z.strictObject({
   modifier: z.string().max(200).optional(),
   approval_regime: z.string().max(200).optional(),
   approval_code: z.string().max(200).optional(),
+  base_vehicle_make_model: z.string().max(200).optional(),
+  conversion_description: z.string().max(2000).optional(),
 });
 
 /**
@@ -262,6 +261,7 @@ export const designShape = {
   lightly_loaded: LightlyLoaded.optional(), // FMVSS 135 lightly loaded vehicle (core/cases-schema.ts)
   towing: Towing.optional(), // trailer for the towing load state and the combination gradient
   systems: Systems.optional(), // ABS, ESC, EBD status
+  test_results: TestResults.optional(), // measured brake-test results (core/test-results-schema.ts)
 };
 
 /** Cross-field rules: each issue lands on the field a person has to change. */

@@ -6,6 +6,7 @@
 export * from './constants.ts';
 export * from './units.ts';
 export * from './design.ts';
+export { inputSource, recordSource, type InputSource, type ProvenanceEntry, type ProvenanceSource, type ProvenanceState } from './provenance.ts';
 export * from './validate.ts';
 export * from './axle-loads.ts';
 export * from './ideal-distribution.ts';

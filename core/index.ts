@@ -56,3 +56,6 @@ export * from './checks/limit-series.ts';
 export * from './checks/polynomial.ts';
 export * from './sizing/index.ts';
 export * from './verdict.ts';
+export * from './valve-gauge.ts';
+export * from './test-results.ts';
+export type { MfddReadings, RoadTest, RollerTest, TestResults } from './test-results-schema.ts';

@@ -3,7 +3,10 @@
  * Gives the curves of both overlaid as a plotly spec, the per-load-state figures and the check verdicts
  * next to each other, and the field-level differences of the inputs.
  */
-import { type DesignFile, type DiffEntry, designDiff, type EvaluationResult } from '../core/index.ts';
+import { type DesignFile, designDiff, type EvaluationResult } from '../core/index.ts';
+import type { CompareCheckRow, CompareRow, Comparison } from '../report/compare.ts';
+
+export type { CompareCheckRow, CompareRow, Comparison };
 import { checkRows, fmtNum } from './packet-content.ts';
 
 export interface CompareSide {
@@ -11,33 +14,6 @@ export interface CompareSide {
   revision: string;
   design: DesignFile;
   result: EvaluationResult;
-}
-
-export interface CompareRow {
-  load_state: string;
-  quantity: string;
-  a: string;
-  b: string;
-  changed: boolean;
-}
-
-export interface CompareCheckRow {
-  rule: string;
-  load_state: string;
-  a_verdict: string;
-  a_margin: string;
-  b_verdict: string;
-  b_margin: string;
-  changed: boolean;
-}
-
-export interface Comparison {
-  a: { label: string; revision: string; design_name: string };
-  b: { label: string; revision: string; design_name: string };
-  states: CompareRow[];
-  checks: CompareCheckRow[];
-  diff: DiffEntry[];
-  chart: { data: unknown[]; layout: Record<string, unknown> };
 }
 
 /** Plotly reads a few HTML-like tags in labels: write < > & as entities. */

@@ -4,8 +4,8 @@
  * html`` tag; chart specs travel as JSON data blocks (views/chart.ts).
  */
 import { CAUTION, type DiffEntry } from '../core/index.ts';
-import type { Comparison } from '../packet/compare.ts';
-import type { Block, PacketContent } from '../packet/packet-content.ts';
+import type { Comparison } from '../report/compare.ts';
+import type { Block, PacketContent } from '../report/packet-document.ts';
 import type { DesignSummary, HistoryEntry, SaveResult } from '../store/design-store.ts';
 import { chartBlock } from './chart.ts';
 import { html, raw, type SafeHtml } from './html.ts';

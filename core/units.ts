@@ -40,6 +40,12 @@ export const TO_SI = {
   K: 1,
   s: 1,
   '1': 1,
+  W: 1,
+  kW: 1e3,
+  'N·m': 1,
+  'lbf·ft': 1.3558179483314004, // pound-force foot = lbf × ft, exact (4.4482216152605 × 0.3048)
+  mm3: 1e-9,
+  in3: 1.6387064e-5, // cubic inch, exact (0.0254³)
 } as const;
 
 export type Unit = keyof typeof TO_SI;

@@ -217,6 +217,7 @@ export const PROVENANCE_LABELS: Words<ProvenanceSource> = {
   measured: 'measured',
   maker: "maker's figure",
   donor: 'from the donor vehicle',
+  calculated: 'calculated',
   assumed: 'assumed',
 };
 

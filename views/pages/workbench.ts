@@ -7,7 +7,7 @@
  * - .msg slots under each field, updated out of band.
  */
 import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
-import type { FormValues } from '../../form/design-form.ts';
+import { formProvenance, type FormValues } from '../../form/design-form.ts';
 import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
@@ -65,8 +65,13 @@ function foldSection(id: string, title: string, body: SafeHtml): SafeHtml {
 /** The id of a panel's input section: a panel with inputs and results has two sections (ids stay unique). */
 const inputSectionId = (p: { id: string; results?: unknown }) => (p.results ? `panel-${p.id}-inputs` : `panel-${p.id}`);
 
-function renderInputs(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): { ctx: InputContext; sections: SafeHtml[] } {
-  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map() };
+function renderInputs(
+  values: FormValues,
+  units: UnitSystem,
+  errors: readonly FieldIssue[],
+  sources?: InputContext['sources'],
+): { ctx: InputContext; sections: SafeHtml[] } {
+  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map(), ...(sources ? { sources } : {}) };
   const inputPanels = panels.filter((p) => p.inputs);
   const rendered = inputPanels.map((p) => ({ group: groupOf(p.id), html: foldSection(inputSectionId(p), p.title, p.inputs!(ctx)) }));
   const sections = GROUPS.flatMap((g) => {
@@ -93,7 +98,8 @@ export function fieldsWithMessages(values: FormValues, units: UnitSystem): { nam
 const slotCache = new Map<string, { names: ReadonlySet<string>; labels: ReadonlyMap<string, string> }>();
 
 export function inputsSection(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[], oob = false): SafeHtml {
-  const { ctx, sections } = renderInputs(values, units, errors);
+  const prov = formProvenance(values, units);
+  const { ctx, sections } = renderInputs(values, units, errors, prov.sources);
   // values no panel shows (format, blocks added by other tools) travel along unchanged
   const carried = Object.entries(values).filter(([n]) => !ctx.rendered.has(n) && !n.startsWith('_'));
   return html`<div id="design-inputs"${oob ? html` hx-swap-oob="true"` : ''}>
@@ -103,7 +109,7 @@ export function inputsSection(values: FormValues, units: UnitSystem, errors: rea
 <small class="hint">Any field also accepts a value with its unit, e.g. “58 in”, “1450 lb”, “90 psi”, “2.2 t”.</small></div>
 ${sections}
 ${carried.map(([n, v]) => html`<input type="hidden" name="${n}" value="${v}">`)}
-${values._provenance !== undefined ? html`<input type="hidden" name="_provenance" value="${values._provenance}">` : ''}
+${prov.json !== undefined ? html`<input type="hidden" name="_provenance" value="${prov.json}">` : ''}
 ${values._exact !== undefined ? html`<input type="hidden" name="_exact" value="${values._exact}">` : ''}
 ${values._stash !== undefined ? html`<input type="hidden" name="_stash" value="${values._stash}">` : ''}
 <input type="hidden" name="_shape" value="${shapeOf(ctx)}">

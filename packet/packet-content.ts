@@ -791,5 +791,5 @@ function testSheet(
     columns: ['Instrument', 'Make / serial', 'Calibration date', 'Calibration due'],
     rows: [['Decelerometer', '', '', ''], ['Pedal force gauge', '', '', ''], ['Speed source (GPS / fifth wheel / other)', '', '', ''], ['Weighbridge / axle scales', '', '', ''], ['Roller brake tester', '', '', '']],
   });
-  b.push({ kind: 'fields', labels: ['Tested by (name, signature, date)', 'Witnessed by (name, signature, date)'] });
+  b.push({ kind: 'fields', labels: ['Tested by and witnessed by (names, signatures, date)'] });
 }

@@ -28,7 +28,7 @@ async function once(): Promise<{ evaluate: number; content: number; pdf: number;
 export async function run(): Promise<void> {
   const runs = Number(process.env.BENCH_PACKET_RUNS ?? 7);
   const first = await once();
-  const rs = [];
+  const rs: Awaited<ReturnType<typeof once>>[] = [];
   for (let i = 0; i < runs; i++) rs.push(await once());
   const mid = (k: 'evaluate' | 'content' | 'pdf' | 'total') => rs.map((r) => r[k]).sort((a, b) => a - b)[rs.length >> 1]!;
   const f = (ms: number) => `${ms.toFixed(0)} ms`;

@@ -544,6 +544,8 @@ export const EMPTYABLE_LISTS: Array<{ list: string; blank: Record<string, string
   { list: 'build_up.seats', blank: { name: '', x_m: '', cg_height_m: '', driver: 'false' } },
   { list: 'build_up.tanks', blank: { name: '', full_kg: '', x_m: '', cg_height_m: '', fill_weighed: '' } },
   { list: 'heat.hot_friction_factor_at_c', blank: { '[0]': '', '[1]': '' } },
+  { list: 'test_results.road', blank: { load_state: '', test: '', speed_kmh: '', pedal_force_n: '', mfdd_ms2: '', stopping_distance_m: '', wheel_lock: '' } },
+  { list: 'test_results.roller', blank: { axle: '', left_n: '', right_n: '', pedal_force_n: '' } },
 ];
 
 /** Reads `_op` values such as "add:load_states", "dup:load_states[1]", "remove:axles.front.brake.piston_diameters_mm[1]". */

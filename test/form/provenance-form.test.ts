@@ -46,3 +46,15 @@ describe('source selects of the workbench', () => {
     expect(fieldNameProblem(`${SOURCE_FIELD}_provenance`)).not.toBeNull();
   });
 });
+
+describe('test results typed on the page', () => {
+  it('a road test row added by the list button and filled in becomes test_results.road', async () => {
+    const { applyListOp, parseListOp } = await import('../../form/design-form.ts');
+    let v = designToValues(demoDesign(), 'metric');
+    v = applyListOp(v, parseListOp('add:test_results.road')!);
+    Object.assign(v, { 'test_results.road[0].load_state': 'laden', 'test_results.road[0].test': 'service', 'test_results.road[0].mfdd_ms2': '5.6' });
+    const r = readForm(v, 'metric');
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(r.design.test_results?.road).toEqual([{ load_state: 'laden', test: 'service', mfdd_ms2: 5.6 }]);
+  });
+});

@@ -28,19 +28,22 @@ const SOURCE_WORDS: readonly [string, string][] = [['', 'not stated'], ...PROVEN
  * The source of an input beside it: a small select (not stated, measured, maker's figure, ...) and a note. An
  * entry recorded for another value shows as "not stated", flagged: the value changed since its source was given.
  */
-function sourceField(ctx: InputContext, name: string, label: string): SafeHtml {
+export function sourceField(ctx: InputContext, name: string, label: string, oob = false): SafeHtml {
   const src = ctx.sources?.get(name);
   const current = src && (src.state === 'recorded' || src.state === 'unconfirmed') ? (src.source ?? '') : '';
-  const flag = src?.state === 'changed' ? 'the value changed since its source was given: source not stated' : src?.state === 'unconfirmed' ? 'recorded without its value: confirm the source' : '';
+  const flag = src?.state === 'changed' ? 'the value changed since its source was given' : src?.state === 'unconfirmed' ? 'recorded without its value: confirm the source' : '';
   const sel = `${SOURCE_FIELD}${name}`;
   const note = `${NOTE_FIELD}${name}`;
-  return html`<details class="src${flag ? ' flagged' : ''}"><summary>source: ${SOURCE_WORDS.find(([k]) => k === current)?.[1] ?? 'not stated'}${flag ? html` <em>(${flag})</em>` : ''}</summary>
+  return html`<details class="src${flag ? ' flagged' : ''}" id="${sourceId(name)}"${oob ? html` hx-swap-oob="true"` : ''}><summary>source: ${SOURCE_WORDS.find(([k]) => k === current)?.[1] ?? 'not stated'}${flag ? html` <em>(${flag})</em>` : ''}</summary>
 <label for="${fieldId(sel)}" class="sr">Source of ${label}</label><select id="${fieldId(sel)}" name="${sel}">${SOURCE_WORDS.map(([k, w]) => html`<option value="${k}"${k === current ? html` selected` : ''}>${w}</option>`)}</select>
 <label for="${fieldId(note)}" class="sr">Note on the source of ${label}</label><input id="${fieldId(note)}" name="${note}" value="${current ? (ctx.values[note] ?? src?.note ?? '') : ''}" maxlength="2000" placeholder="note (weighbridge, data sheet …)" class="w-l"></details>`;
 }
 
 export function fieldId(name: string): string {
   return `f-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
+}
+export function sourceId(name: string): string {
+  return `s-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
 }
 export function messageId(name: string): string {
   return `m-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;

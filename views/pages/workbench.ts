@@ -8,7 +8,7 @@
  */
 import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
 import { formProvenance, type FormValues } from '../../form/design-form.ts';
-import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
+import { fieldId, fieldMessage, type InputContext, sourceField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
 import { panels, type ResultContext } from '../panels/index.ts';
@@ -109,7 +109,7 @@ export function inputsSection(values: FormValues, units: UnitSystem, errors: rea
 <small class="hint">Any field also accepts a value with its unit, e.g. “58 in”, “1450 lb”, “90 psi”, “2.2 t”.</small></div>
 ${sections}
 ${carried.map(([n, v]) => html`<input type="hidden" name="${n}" value="${v}">`)}
-${prov.json !== undefined ? html`<input type="hidden" name="_provenance" value="${prov.json}">` : ''}
+${provenanceInput(prov.json, false)}
 ${values._exact !== undefined ? html`<input type="hidden" name="_exact" value="${values._exact}">` : ''}
 ${values._stash !== undefined ? html`<input type="hidden" name="_stash" value="${values._stash}">` : ''}
 <input type="hidden" name="_shape" value="${shapeOf(ctx)}">
@@ -188,7 +188,17 @@ function problemLabel(path: string, labels: ReadonlyMap<string, string> | undefi
 export function fieldMessagesOob(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): SafeHtml {
   const m = errorMap(errors);
   // control fields (names starting with "_") have no message line
-  return html`${[...fieldsWithMessages(values, units).names].filter((n) => !n.startsWith('_')).map((n) => fieldMessage(n, m.get(n), true))}`;
+  const fields = fieldsWithMessages(values, units);
+  // the source beside each input with a provenance entry, as it stands for the value now (flagged once changed)
+  const { json, sources } = formProvenance(values, units);
+  const ctx: InputContext = { values, units, errors: new Map(), structural: new Set(), rendered: new Set(), sources };
+  const src = [...sources.keys()].filter((n) => fields.names.has(n)).map((n) => sourceField(ctx, n, fields.labels.get(n) ?? n, true));
+  return html`${[...fields.names].filter((n) => !n.startsWith('_')).map((n) => fieldMessage(n, m.get(n), true))}${src}${provenanceInput(json, true)}`;
+}
+
+/** The provenance entries carried by the form (each with the value it was recorded for), kept current after every post. */
+function provenanceInput(json: string | undefined, oob: boolean): SafeHtml {
+  return html`<input type="hidden" id="f-provenance" name="_provenance" value="${json ?? '{}'}"${oob ? html` hx-swap-oob="true"` : ''}>`;
 }
 
 /** The intro is shown while the page holds the demo (its name starts "Demo:"). */

@@ -207,3 +207,14 @@ describe('fonts', () => {
     expect(latin1('38 → 42 ≤ 50')).toBe('38 -> 42 <= 50');
   });
 });
+
+describe('unit system', () => {
+  it('prints the packet in US customary units when asked (the page in US units)', async () => {
+    const d = design();
+    const content = packetContent({ design: d, result: evaluateForPacket(d), date: DATE, units: 'us' });
+    const t = flat(pdfText(save(await renderPacketPdf(content, DATE), 'us.pdf')));
+    // the demo's 2720 kg unladen mass is 2720 / 0.45359237 = 5996.6 lb (NIST SP 811 appendix B), shown to 1 lb
+    expect(t).toContain('5997 lb');
+    expect(t).toMatch(/\d psi/);
+  });
+});

@@ -49,6 +49,7 @@ import {
   SHOE_ARRANGEMENT_LABELS,
   valveTypeLabel,
 } from '../report/labels.ts';
+import { activeBlocksLine } from '../report/design-blocks.ts';
 import { type Block, DRAFT_MARK, type PacketContent } from '../report/packet-document.ts';
 import { type ChartSeries, type ChartSpec, chartSvg } from './chart-svg.ts';
 
@@ -219,30 +220,6 @@ export function inputRows(design: DesignFile, result?: EvaluationResult): InputR
   };
   walk(design, []);
   return rows;
-}
-
-/** The optional blocks of the design that take part in the evaluation, in words. */
-const OPTIONAL_BLOCKS: [keyof DesignFile, string][] = [
-  ['regen', 'regenerative braking'],
-  ['heat', 'brake heat'],
-  ['traction', 'traction limits'],
-  ['stopping', 'stopping distance'],
-  ['tester', 'roller brake tester settings'],
-  ['hardware', 'fluid volume and pedal travel data'],
-  ['base_vehicle', 'base vehicle'],
-  ['conversion', 'conversion facts'],
-  ['build_up', 'mass build-up'],
-  ['ratings', 'rating plate values'],
-  ['parking_brake', 'parking brake'],
-  ['tolerances', 'tolerances (robustness)'],
-  ['lightly_loaded', 'lightly loaded vehicle'],
-  ['towing', 'towing'],
-  ['systems', 'antilock, stability control and brake-force distribution status'],
-  ['test_results', 'measured brake-test results'],
-];
-
-export function activeBlocks(design: DesignFile): string[] {
-  return OPTIONAL_BLOCKS.filter(([k]) => design[k] !== undefined).map(([, w]) => w);
 }
 
 // ---------------------------------------------------------------- diagrams
@@ -552,8 +529,7 @@ export function packetContent(input: PacketInput): PacketContent {
 
   // ---- 3 inputs
   b.push({ kind: 'h1', text: '3. Inputs and where they came from' });
-  const active = activeBlocks(design);
-  b.push({ kind: 'p', text: `Optional parts of the design taking part: ${active.length ? active.join(', ') : 'none'}.` });
+  b.push({ kind: 'p', text: activeBlocksLine(design) });
   if (design.notes) b.push({ kind: 'p', text: `Notes in the design: ${design.notes}`, style: 'small' });
   b.push({
     kind: 'table',

@@ -8,6 +8,7 @@
  */
 import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
 import { formProvenance, type FormValues } from '../../form/design-form.ts';
+import { activeBlocksLine } from '../../report/design-blocks.ts';
 import { fieldId, fieldMessage, type InputContext, sourceField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
@@ -121,7 +122,7 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
   const resultPanels = panels.filter((p) => p.results);
   const groups = GROUPS.map((g) => {
     const inGroup = resultPanels.filter((p) => groupOf(p.id) === g);
-    const head = g === 'main' ? html`${staleNote(null)}${overallVerdict(v.result)}${isDemo(v.design) ? INTRO : ''}<p class="for">Results for <strong>${v.design.name}</strong></p>` : '';
+    const head = g === 'main' ? html`${staleNote(null)}${overallVerdict(v.result)}${isDemo(v.design) ? INTRO : ''}<p class="for">Results for <strong>${v.design.name}</strong></p><p class="hint active-blocks">${activeBlocksLine(v.design)}</p>` : '';
     return inGroup.length || head ? html`<div class="${groupClass(g)} out-group">${head}${inGroup.map((p) => foldSection(`panel-${p.id}`, p.title, p.deferred ? deferredSlot(p.id) : p.results!(ctx)))}</div>` : '';
   });
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>

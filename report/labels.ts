@@ -348,6 +348,7 @@ export const FIELD_LABELS: Words<string> = {
   threshold_rear: 'rear threshold pressure',
   wheelbase_m: 'wheelbase',
   knee_bar: 'knee pressure',
+  knee_bar_at_rear_axle_kg: 'knee pressure per rear axle load (kg, bar)',
   ratio: 'ratio above the knee',
   load_states: 'load states',
   load_state: 'load state',

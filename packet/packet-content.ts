@@ -41,12 +41,16 @@ import {
   CALIPER_LABELS,
   CATEGORY_LABELS,
   CIRCUIT_SPLIT_LABELS,
+  DRIVE_LABELS,
   FIRST_AXLE_LABELS,
   LOAD_KIND_LABELS,
   pathLabel,
+  PARKING_CONTROL_LABELS,
   PROVENANCE_LABELS,
+  REGEN_BLENDING_LABELS,
   RULE_STATUS_LABELS,
   SHOE_ARRANGEMENT_LABELS,
+  VALVE_SENSES_LABELS,
   valveTypeLabel,
 } from '../report/labels.ts';
 import { activeBlocksLine } from '../report/design-blocks.ts';
@@ -169,12 +173,34 @@ export interface InputRow {
 /** Top-level keys printed elsewhere or not inputs. */
 const NOT_INPUTS = new Set(['format', 'name', 'notes', 'provenance', 'identification', 'test_results', 'rules']);
 
-function valueText(v: unknown, unit: string): string {
+type Words = Readonly<Record<string, string>>;
+/** Label tables for the coded text values of inputs, by the key that holds them (the last two parts of the path). */
+const VALUE_LABELS: readonly [RegExp, Words | ((c: string) => string)][] = [
+  [/(^|\.)rear_valve\.type$/, valveTypeLabel],
+  [/(^|\.)brake\.type$|_brake_type$/, BRAKE_TYPE_LABELS],
+  [/(^|\.)caliper$/, CALIPER_LABELS],
+  [/(^|\.)shoe_arrangement$/, SHOE_ARRANGEMENT_LABELS],
+  [/(^|\.)circuit_split$/, CIRCUIT_SPLIT_LABELS],
+  [/(^|\.)blending\.type$/, REGEN_BLENDING_LABELS],
+  [/(^|\.)drive$/, DRIVE_LABELS],
+  [/(^|\.)category$/, CATEGORY_LABELS],
+  [/(^|\.)senses$/, VALVE_SENSES_LABELS],
+  [/(^|\.)control$/, PARKING_CONTROL_LABELS],
+];
+
+function valueText(v: unknown, unit: string, path: string): string {
   const u = unit ? ` ${F.unitText(unit)}` : '';
   if (typeof v === 'number') return `${String(v)}${u}`;
   if (typeof v === 'boolean') return v ? 'yes' : 'no';
   if (Array.isArray(v)) return v.map((x) => (Array.isArray(x) ? `(${x.join(', ')})` : String(x))).join(', ') + (v.every((x) => typeof x === 'number') ? u : '');
-  return String(v).replace(/_/g, ' ');
+  const t = String(v);
+  for (const [re, table] of VALUE_LABELS) {
+    if (!re.test(path)) continue;
+    if (typeof table === 'function') return table(t);
+    if (Object.hasOwn(table, t)) return table[t]!;
+  }
+  // a code no table knows: its words (user text has no underscores to lose)
+  return /^[a-z0-9]+(_[a-z0-9]+)+$/.test(t) ? t.replace(/_/g, ' ') : t;
 }
 
 /** Words for where a value came from, true for the value as it stands (core/provenance.ts). */
@@ -216,7 +242,7 @@ export function inputRows(design: DesignFile, result?: EvaluationResult): InputR
     }
     const p = diffPath(path);
     const src = inputSource(prov, p, v, states);
-    rows.push({ path: p, field: pathLabel(p, labels), value: valueText(v, unitOfDiffPath(path)), source: sourceWords(src), note: src.note });
+    rows.push({ path: p, field: pathLabel(p, labels), value: valueText(v, unitOfDiffPath(path), p), source: sourceWords(src), note: src.note });
   };
   walk(design, []);
   return rows;

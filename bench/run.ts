@@ -13,6 +13,7 @@ const benchmarks: Record<string, Benchmark> = {
   evaluate: { summary: 'full evaluate() of the demo design with curves, and its costliest blocks (issue 3)', load: () => import('./evaluate.ts') },
   sizing: { summary: 'exact split band vs brute-force scan; Monte Carlo samples/s (issue 5)', load: () => import('./sizing.ts') },
   http: { summary: 'recompute, page and static asset under autocannon against a bare node:http server; memory; page weight (issue 17)', load: () => import('./http.ts') },
+  packet: { summary: 'the demo\'s evidence packet, design to PDF bytes, on one core: evaluate, content, PDF (issue 14)', load: () => import('./packet.ts') },
   cli: { summary: 'lockstep start-up, one evaluation and 100 designs in one run against `node -e 0` (issue 17)', load: () => import('./cli.ts') },
 };
 

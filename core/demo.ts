@@ -70,9 +70,9 @@ export function demoDesign(): DesignFile {
     // Rotor masses as weighed; base vehicle = the diesel van laden as it left the factory (invented figures).
     heat: { front_rotor_kg: 9.5, rear_rotor_kg: 7, max_speed_kmh: 130, base_vehicle_mass_kg: 3100, base_vehicle_front_axle_kg: 1560 },
     provenance: {
-      'load_states[0].front_axle_kg': { source: 'measured', note: 'weighbridge, driver on board' },
-      'load_states[1].cg_height_m': { source: 'assumed', note: 'estimated from the fit-out' },
-      'axles.rear.brake.pad_friction': { source: 'maker', note: 'pad data sheet, mean value' },
+      'load_states[0].front_axle_kg': { source: 'measured', value: 1420, note: 'weighbridge, driver on board' },
+      'load_states[1].cg_height_m': { source: 'assumed', value: 0.9, note: 'estimated from the fit-out' },
+      'axles.rear.brake.pad_friction': { source: 'maker', value: 0.4, note: 'pad data sheet, mean value' },
     },
   };
 }

@@ -13,6 +13,8 @@ import { VEHICLE_CATEGORIES } from './rules/rule-types.ts';
 import { BalanceBar, Tolerances } from './sizing/sizing-schema.ts';
 import { casesIssues, LightlyLoaded, Systems, Towing } from './cases-schema.ts';
 import { RearValve, valveIssues } from './valves/index.ts';
+import { Provenance } from './provenance.ts';
+import { TestResults } from './test-results-schema.ts';
 
 export { RearValve };
 
@@ -22,7 +24,7 @@ const num = boundedNumber;
 /** As num, but the lower limit itself is not allowed. */
 const numAbove = boundedNumberAbove;
 
-export const PROVENANCE_SOURCES = ['measured', 'maker', 'donor', 'assumed'] as const;
+export { Provenance, PROVENANCE_SOURCES } from './provenance.ts'; // each entry records the value it was stated for
 
 export const Vehicle = z.strictObject({
   category: z.enum(VEHICLE_CATEGORIES),
@@ -88,11 +90,6 @@ export const Hydraulics = z.strictObject({
   balance_bar: BalanceBar.optional(), // two master cylinders on a balance bar (core/sizing/sizing-schema.ts)
 });
 
-export const Provenance = z.record(
-  z.string().min(1).max(200),
-  z.strictObject({ source: z.enum(PROVENANCE_SOURCES), note: z.string().max(2000).optional() }),
-);
-
 /** Who and what an evidence packet is for; printed literally on its cover (all free text, optional). */
 export const Identification = z.strictObject({
   vehicle_identification_number: z.string().max(40).optional(),
@@ -100,6 +97,8 @@ export const Identification = z.strictObject({
   modifier: z.string().max(200).optional(),
   approval_regime: z.string().max(200).optional(),
   approval_code: z.string().max(200).optional(),
+  base_vehicle_make_model: z.string().max(200).optional(),
+  conversion_description: z.string().max(2000).optional(),
 });
 
 /**
@@ -249,6 +248,7 @@ export const designShape = {
   lightly_loaded: LightlyLoaded.optional(), // FMVSS 135 lightly loaded vehicle (core/cases-schema.ts)
   towing: Towing.optional(), // trailer for the towing load state and the combination gradient
   systems: Systems.optional(), // ABS, ESC, EBD status
+  test_results: TestResults.optional(), // measured brake-test results (core/test-results-schema.ts)
 };
 
 /** Cross-field rules: each issue lands on the field a person has to change. */

@@ -90,4 +90,5 @@ export const coreErrors = declareErrors({
   axleLiftEmpty: { code: 'CORE_ERR_AXLE_LIFT_EMPTY', status: 500, message: () => 'at least one lift is needed' },
   axleLiftReading: { code: 'CORE_ERR_AXLE_LIFT_READING', status: 500, message: () => 'each lift needs exactly one of front_axle_kg and rear_axle_kg' },
   axleLiftMeasure: { code: 'CORE_ERR_AXLE_LIFT_MEASURE', status: 500, message: () => 'each lift needs lift_height_m or lift_angle_deg' },
+  unknownValve: { code: 'CORE_ERR_UNKNOWN_VALVE', status: 500, message: (type: string, known: string) => `rear valve type ${type} is not one of ${known}` },
 });

@@ -6,6 +6,7 @@
 export * from './constants.ts';
 export * from './units.ts';
 export * from './design.ts';
+export { inputSource, recordSource, type InputSource, type ProvenanceEntry, type ProvenanceSource, type ProvenanceState } from './provenance.ts';
 export * from './validate.ts';
 export * from './axle-loads.ts';
 export * from './ideal-distribution.ts';
@@ -58,3 +59,6 @@ export * from './checks/limit-series.ts';
 export * from './checks/polynomial.ts';
 export * from './sizing/index.ts';
 export * from './verdict.ts';
+export * from './valve-gauge.ts';
+export * from './test-results.ts';
+export type { MfddReadings, RoadTest, RollerTest, TestResults } from './test-results-schema.ts';

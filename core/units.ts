@@ -50,6 +50,9 @@ export const TO_SI = {
   '%': 0.01,
   '1/s': 1,
   'J/(kg*K)': 1,
+  W: 1,
+  'lbf*ft': 1.3558179483314004, // pound-force foot = lbf × ft, exact (4.4482216152605 × 0.3048)
+  in3: 1.6387064e-5, // cubic inch, exact (0.0254³)
 } as const;
 
 export type Unit = keyof typeof TO_SI;
@@ -94,7 +97,7 @@ export const UNIT_LABELS: Record<Unit, string> = {
   kg: 'kg', t: 't', lb: 'lb', m: 'm', mm: 'mm', cm: 'cm', in: 'in', ft: 'ft', N: 'N', kN: 'kN', daN: 'daN', lbf: 'lbf',
   Pa: 'Pa', kPa: 'kPa', MPa: 'MPa', bar: 'bar', psi: 'psi', 'm/s2': 'm/s²', g: 'g', 'ft/s2': 'ft/s²', 'm/s': 'm/s',
   'km/h': 'km/h', mph: 'mph', rad: 'rad', deg: '°', J: 'J', kJ: 'kJ', K: 'K', s: 's', '1': '', mm3: 'mm³',
-  'mm3/bar': 'mm³/bar', kW: 'kW', 'N*m': 'N·m', degC: '°C', '%': '%', '1/s': '1/s', 'J/(kg*K)': 'J/(kg·K)',
+  'mm3/bar': 'mm³/bar', kW: 'kW', 'N*m': 'N·m', degC: '°C', '%': '%', '1/s': '1/s', 'J/(kg*K)': 'J/(kg·K)', W: 'W', 'lbf*ft': 'lbf·ft', in3: 'in³',
 };
 
 /** The label of a unit; "" for a plain number or none. */

@@ -33,7 +33,11 @@ import {
   type UnitSystem,
   type Warning,
   formatPath,
+  type InputSource,
+  inputSource,
   parseQuantity,
+  PROVENANCE_SOURCES,
+  type ProvenanceEntry,
   readDesign,
 } from '../core/index.ts';
 import { FORBIDDEN_KEYS, fieldNameProblem } from './field-names.ts';
@@ -225,8 +229,85 @@ export function designToValues(design: unknown, units: UnitSystem): FormValues {
   walk(design, []);
   if (Object.keys(exact).length > 0) out._exact = JSON.stringify(exact);
   const prov = (design as { provenance?: unknown }).provenance;
-  if (prov !== undefined) out._provenance = JSON.stringify(prov);
+  if (prov !== undefined) {
+    out._provenance = JSON.stringify(prov);
+    // the source select of each input shows an entry only while it belongs to the value (core/provenance.ts)
+    if (prov && typeof prov === 'object') {
+      for (const [name, e] of Object.entries(prov as Record<string, ProvenanceEntry>)) {
+        if (!Object.hasOwn(out, name) || fieldNameProblem(name) !== null) continue;
+        const src = inputSource(prov as Record<string, ProvenanceEntry>, name, valueAt(design, pathOf(name)));
+        if (src.state !== 'recorded' && src.state !== 'unconfirmed') continue;
+        out[`${SOURCE_FIELD}${name}`] = e.source;
+        if (e.note) out[`${NOTE_FIELD}${name}`] = e.note;
+      }
+    }
+  }
   return out;
+}
+
+/** Form names of an input's source select and note: `_src:<field name>`, `_srcnote:<field name>`. */
+export const SOURCE_FIELD = '_src:';
+export const NOTE_FIELD = '_srcnote:';
+
+function valueAt(root: unknown, path: readonly PathKey[]): unknown {
+  let cur: unknown = root;
+  for (const k of path) {
+    if (cur === null || typeof cur !== 'object' || !Object.hasOwn(cur, k)) return undefined;
+    cur = (cur as Record<PropertyKey, unknown>)[k];
+  }
+  return cur;
+}
+
+/**
+ * The provenance block from the form: the entries carried in `_provenance` (each with the value it was
+ * recorded for), changed by the source selects. A source chosen or changed now is recorded for the value the
+ * field holds now; an unchanged select keeps its entry as recorded (so a value typed over since reads "source
+ * not stated"); "not stated" drops the entry.
+ */
+function readProvenance(values: FormValues, input: Record<string, unknown>, errors: FieldIssue[]): Record<string, ProvenanceEntry> | undefined {
+  const entries = new Map<string, ProvenanceEntry>();
+  if (values._provenance) {
+    try {
+      const p = parseHiddenJson(values._provenance);
+      if (p && typeof p === 'object' && !Array.isArray(p)) for (const [k, e] of Object.entries(p)) entries.set(k, e as ProvenanceEntry);
+    } catch {
+      /* a damaged hidden field only loses the provenance notes */
+    }
+  }
+  for (const [key, sel] of Object.entries(values)) {
+    if (!key.startsWith(SOURCE_FIELD)) continue;
+    const name = key.slice(SOURCE_FIELD.length);
+    if (fieldNameProblem(name) !== null) continue;
+    const source = sel.trim();
+    const note = (values[`${NOTE_FIELD}${name}`] ?? '').trim().slice(0, 2000);
+    if (source === '') {
+      entries.delete(name);
+      continue;
+    }
+    if (!(PROVENANCE_SOURCES as readonly string[]).includes(source)) {
+      errors.push({ path: name, message: `${JSON.stringify(source.slice(0, 40))} is not a source: choose measured, maker, donor, calculated, assumed or not stated` });
+      continue;
+    }
+    const old = entries.get(name);
+    if (old && old.source === source && (old.note ?? '') === note) continue;
+    const v = valueAt(input, pathOf(name));
+    if (typeof v !== 'number' && typeof v !== 'string' && typeof v !== 'boolean') continue;
+    entries.set(name, { source: source as ProvenanceEntry['source'], value: v, ...(note ? { note } : {}) });
+  }
+  return entries.size ? Object.fromEntries(entries) : undefined;
+}
+
+/**
+ * The provenance as it stands after this form post (carried on in `_provenance`) and the source of each
+ * input that has an entry, as the workbench shows it beside the field (core/provenance.ts).
+ */
+export function formProvenance(values: FormValues, units: UnitSystem): { json: string | undefined; sources: Map<string, InputSource> } {
+  const { input } = valuesToInput(values, units);
+  const prov = input.provenance as Record<string, ProvenanceEntry> | undefined;
+  const sources = new Map<string, InputSource>();
+  if (!prov) return { json: undefined, sources };
+  for (const name of Object.keys(prov)) sources.set(name, inputSource(prov, name, valueAt(input, pathOf(name))));
+  return { json: JSON.stringify(prov), sources };
 }
 
 // ---- form -> design ------------------------------------------------------------------------------
@@ -320,13 +401,8 @@ export function valuesToInput(values: FormValues, units: UnitSystem): { input: R
       }
     } else setAt(input, path, text === '' ? undefined : text); // as typed, like the file: only an empty field is left out
   }
-  if (values._provenance) {
-    try {
-      input.provenance = parseHiddenJson(values._provenance);
-    } catch {
-      /* a damaged hidden field only loses the provenance notes */
-    }
-  }
+  const provenance = readProvenance(values, input, errors);
+  if (provenance) input.provenance = provenance;
   return { input: (prune(input) as Record<string, unknown> | undefined) ?? {}, errors };
 }
 
@@ -416,6 +492,8 @@ export const EMPTYABLE_LISTS: Array<{ list: string; blank: Record<string, string
   { list: 'build_up.seats', blank: { name: '', x_m: '', cg_height_m: '', driver: 'false' } },
   { list: 'build_up.tanks', blank: { name: '', full_kg: '', x_m: '', cg_height_m: '', fill_weighed: '' } },
   { list: 'heat.hot_friction_factor_at_c', blank: { '[0]': '', '[1]': '' } },
+  { list: 'test_results.road', blank: { load_state: '', test: '', speed_kmh: '', pedal_force_n: '', mfdd_ms2: '', stopping_distance_m: '', wheel_lock: '' } },
+  { list: 'test_results.roller', blank: { axle: '', left_n: '', right_n: '', pedal_force_n: '' } },
 ];
 
 /** Reads `_op` values such as "add:load_states", "dup:load_states[1]", "remove:axles.front.brake.piston_diameters_mm[1]". */

@@ -111,6 +111,9 @@ export function fieldNameProblem(name: string): string | null {
 
 function findProblem(name: string): string | null {
   if (name.length > MAX_FIELD_NAME) return `the name is longer than ${MAX_FIELD_NAME} characters`;
+  // the source select and note of an input (form/design-form.ts): the input's own name behind the prefix
+  const src = /^_(src|srcnote):(?!_)/.exec(name);
+  if (src) return findProblem(name.slice(src[0].length));
   if (name.startsWith('_')) return /^_[A-Za-z0-9_]+$/.test(name) && !FORBIDDEN_KEYS.has(name) ? null : 'not a control of the page';
   const path = segments(name);
   if (path === null) return 'not written as a field of the page (parts separated by dots, list positions as [0], [1], ...)';

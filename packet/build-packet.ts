@@ -19,10 +19,11 @@ export function warningsOf(design: DesignFile): Warning[] {
 
 export async function buildPacket(
   design: DesignFile,
-  opts: { date: Date; warnings?: Warning[]; rules?: readonly string[] },
+  opts: { date: Date; warnings?: Warning[]; rules?: readonly string[]; saved?: boolean },
 ): Promise<{ pdf: Buffer; revisionId: string; result: EvaluationResult }> {
   const result = evaluateForPacket(design, opts.warnings, opts.rules);
   const rev = revisionId(design);
-  const pdf = await packetPdf({ design, result, revisionId: rev, date: opts.date });
+  // only a saved revision prints its id; a draft is marked as such on every page
+  const pdf = await packetPdf({ design, result, revisionId: opts.saved ? rev : null, date: opts.date });
   return { pdf, revisionId: rev, result };
 }

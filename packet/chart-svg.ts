@@ -23,6 +23,8 @@ export interface ChartSpec {
   series: ChartSeries[];
   /** Vertical marker lines, e.g. the critical braking rate. */
   markers?: { x: number; label: string; color: string }[];
+  /** Shaded x ranges behind the curves, e.g. the z range a rule requires the front curve above the rear. */
+  bands?: { x0: number; x1: number; label: string; color: string }[];
   width?: number;
   height?: number;
 }
@@ -45,14 +47,26 @@ export function tickLabel(v: number, step: number): string {
   return v.toFixed(decimals);
 }
 
+/**
+ * Width of a text in em of a sans-serif font, estimated from the characters (narrow, wide, average);
+ * generous so a title estimated to fit does fit (common practice, no source).
+ */
+export function textWidthEm(t: string): number {
+  let w = 0;
+  for (const c of t) w += /[il.,:;'|!() ]/.test(c) ? 0.3 : /[mwMW%—]/.test(c) ? 0.88 : /[A-Z]/.test(c) ? 0.68 : 0.56;
+  return w;
+}
+
 export function chartSvg(spec: ChartSpec): string {
   const W = spec.width ?? 480;
   const H = spec.height ?? 300;
   const left = 52;
   const right = 12;
   const top = 26;
-  const legendRows = Math.ceil(spec.series.length / 3);
-  const bottom = 40 + legendRows * 13;
+  const legend = [...(spec.bands ?? []).map((b) => ({ name: b.label, color: b.color, band: true, dash: false })), ...spec.series.map((x) => ({ name: x.name, color: x.color, band: false, dash: x.dash === true }))];
+  const cols = 2;
+  const legendRows = Math.ceil(legend.length / cols);
+  const bottom = 40 + legendRows * 11;
   const pw = W - left - right;
   const ph = H - top - bottom;
   const [x0, x1] = spec.x;
@@ -61,7 +75,14 @@ export function chartSvg(spec: ChartSpec): string {
   const sy = (y: number) => top + ph - ((y - y0) / (y1 - y0)) * ph;
   const out: string[] = [];
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="sans-serif">`);
-  out.push(`<text x="${left}" y="15" font-size="10" font-weight="bold" fill="#000">${xmlEscape(spec.title)}</text>`);
+  // the title fits the chart width: its size shrinks (down to 7) for a long title
+  const titleSize = Math.max(7, Math.min(10, (W - left - right) / (textWidthEm(spec.title) * 1.05)));
+  out.push(`<text x="${left}" y="15" font-size="${r2(titleSize)}" font-weight="bold" fill="#000">${xmlEscape(spec.title)}</text>`);
+  for (const b of spec.bands ?? []) {
+    const a = Math.max(x0, b.x0);
+    const e = Math.min(x1, b.x1);
+    if (e > a) out.push(`<rect x="${r2(sx(a))}" y="${top}" width="${r2(sx(e) - sx(a))}" height="${r2(ph)}" fill="${b.color}" fill-opacity="0.12" stroke="none"/>`);
+  }
   const xs = niceStep(x1 - x0, 10);
   const ys = niceStep(y1 - y0, 8);
   for (let v = Math.ceil(x0 / xs) * xs; v <= x1 + 1e-9; v += xs) {
@@ -101,15 +122,17 @@ export function chartSvg(spec: ChartSpec): string {
     out.push(`<line x1="${r2(sx(m.x))}" y1="${top}" x2="${r2(sx(m.x))}" y2="${r2(top + ph)}" stroke="${m.color}" stroke-width="0.8" stroke-dasharray="2 2"/>`);
     out.push(`<text x="${r2(sx(m.x) + 2)}" y="${top + 8}" font-size="7" fill="${m.color}">${xmlEscape(m.label)}</text>`);
   }
-  spec.series.forEach((s, i) => {
-    const col = i % 3;
-    const row = Math.floor(i / 3);
-    const lx = left + col * (pw / 3);
-    const ly = top + ph + 36 + row * 13;
-    out.push(
-      `<line x1="${r2(lx)}" y1="${ly - 3}" x2="${r2(lx + 16)}" y2="${ly - 3}" stroke="${s.color}" stroke-width="1.5"${s.dash ? ' stroke-dasharray="4 3"' : ''}/>`,
-    );
-    out.push(`<text x="${r2(lx + 20)}" y="${ly}" font-size="7">${xmlEscape(s.name)}</text>`);
+  legend.forEach((s, i) => {
+    const col = i % cols;
+    const row = Math.floor(i / cols);
+    const colW = pw / cols;
+    const lx = left + col * colW;
+    const ly = top + ph + 36 + row * 11;
+    if (s.band) out.push(`<rect x="${r2(lx)}" y="${ly - 7}" width="16" height="7" fill="${s.color}" fill-opacity="0.25"/>`);
+    else out.push(`<line x1="${r2(lx)}" y1="${ly - 3}" x2="${r2(lx + 16)}" y2="${ly - 3}" stroke="${s.color}" stroke-width="1.5"${s.dash ? ' stroke-dasharray="4 3"' : ''}/>`);
+    // a legend entry fits its column: the size shrinks for a long one
+    const size = Math.max(5, Math.min(7, (colW - 24) / textWidthEm(s.name)));
+    out.push(`<text x="${r2(lx + 20)}" y="${ly}" font-size="${r2(size)}">${xmlEscape(s.name)}</text>`);
   });
   out.push('</svg>');
   return out.join('\n');

@@ -3,41 +3,19 @@
  * Gives the curves of both overlaid as a plotly spec, the per-load-state figures and the check verdicts
  * next to each other, and the field-level differences of the inputs.
  */
-import { type DesignFile, type DiffEntry, designDiff, type EvaluationResult } from '../core/index.ts';
-import { checkRows, fmtNum } from './packet-content.ts';
+import { type DesignFile, designDiff, type EvaluationResult } from '../core/index.ts';
+import type { CompareCheckRow, CompareRow, Comparison } from '../report/compare.ts';
+
+export type { CompareCheckRow, CompareRow, Comparison };
+import * as F from '../report/format.ts';
+import { FIRST_AXLE_LABELS } from '../report/labels.ts';
+import { checkRows } from './packet-content.ts';
 
 export interface CompareSide {
   label: string;
   revision: string;
   design: DesignFile;
   result: EvaluationResult;
-}
-
-export interface CompareRow {
-  load_state: string;
-  quantity: string;
-  a: string;
-  b: string;
-  changed: boolean;
-}
-
-export interface CompareCheckRow {
-  rule: string;
-  load_state: string;
-  a_verdict: string;
-  a_margin: string;
-  b_verdict: string;
-  b_margin: string;
-  changed: boolean;
-}
-
-export interface Comparison {
-  a: { label: string; revision: string; design_name: string };
-  b: { label: string; revision: string; design_name: string };
-  states: CompareRow[];
-  checks: CompareCheckRow[];
-  diff: DiffEntry[];
-  chart: { data: unknown[]; layout: Record<string, unknown> };
 }
 
 /** Plotly reads a few HTML-like tags in labels: write < > & as entities. */
@@ -87,13 +65,13 @@ export function compare(a: CompareSide, b: CompareSide): Comparison {
     const sa = a.result.load_states.find((s) => s.id === id);
     const sb = b.result.load_states.find((s) => s.id === id);
     const rows: [string, (s: NonNullable<typeof sa>) => string][] = [
-      ['mass kg', (s) => fmtNum(s.mass_kg, 1)],
-      ['front axle kg', (s) => fmtNum(s.front_axle_kg, 1)],
-      ['CG height m', (s) => fmtNum(s.cg_height_m, 3)],
-      ['critical braking rate', (s) => (s.critical_braking_rate === null ? 'none' : fmtNum(s.critical_braking_rate, 4))],
-      ['lowest braking efficiency', (s) => (s.lowest_efficiency ? `${fmtNum(s.lowest_efficiency.efficiency, 3)} at k = ${fmtNum(s.lowest_efficiency.adhesion, 2)}` : '—')],
-      ['axle locking first (per k)', (s) => s.lock.map((l) => `${fmtNum(l.adhesion, 2)}: ${l.first_axle}`).join(', ')],
-      ['installed front share at low pressure', (s) => (s.front_share_low_pressure === null ? '—' : `${fmtNum(s.front_share_low_pressure * 100, 1)} %`)],
+      ['mass', (s) => F.mass(s.mass_kg, 'metric')],
+      ['front axle load', (s) => F.mass(s.front_axle_kg, 'metric')],
+      ['CG height', (s) => F.length(s.cg_height_m, 'metric')],
+      ['critical braking rate', (s) => (s.critical_braking_rate === null ? 'none' : F.brakingRate(s.critical_braking_rate))],
+      ['lowest braking efficiency', (s) => (s.lowest_efficiency ? `${F.efficiency(s.lowest_efficiency.efficiency)} at k = ${F.adhesion(s.lowest_efficiency.adhesion)}` : F.DASH)],
+      ['axle locking first (per k)', (s) => s.lock.map((l) => `${F.adhesion(l.adhesion)}: ${FIRST_AXLE_LABELS[l.first_axle]}`).join(', ')],
+      ['installed front share at low pressure', (s) => F.percentOfRatio(s.front_share_low_pressure)],
     ];
     for (const [q, f] of rows) {
       const va = sa ? f(sa) : '(no such load state)';
@@ -101,17 +79,17 @@ export function compare(a: CompareSide, b: CompareSide): Comparison {
       states.push({ load_state: id, quantity: q, a: va, b: vb, changed: va !== vb });
     }
   }
-  const ca = checkRows(Array.isArray(a.result.checks) ? a.result.checks : []);
-  const cb = checkRows(Array.isArray(b.result.checks) ? b.result.checks : []);
-  const key = (r: { rule: string; loadState: string }) => `${r.rule}\u0000${r.loadState}`;
+  const ca = checkRows(a.result);
+  const cb = checkRows(b.result);
+  const key = (r: { requirement: string; where: string }) => `${r.requirement}\u0000${r.where}`;
   const keys = [...new Set([...ca.map(key), ...cb.map(key)])];
   const checks = keys.map((k) => {
     const ra = ca.find((r) => key(r) === k);
     const rb = cb.find((r) => key(r) === k);
     const any = (ra ?? rb)!;
     const row: CompareCheckRow = {
-      rule: any.rule,
-      load_state: any.loadState,
+      rule: any.requirement,
+      load_state: any.where,
       a_verdict: ra?.verdict ?? '(not checked)',
       a_margin: ra?.margin ?? '',
       b_verdict: rb?.verdict ?? '(not checked)',

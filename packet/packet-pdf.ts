@@ -8,6 +8,7 @@
 import { existsSync } from 'node:fs';
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
+import { DRAFT_MARK } from '../report/packet-document.ts';
 import { type Block, type PacketContent, type PacketInput, packetContent } from './packet-content.ts';
 
 const FONT_DIRS = ['/usr/share/fonts/truetype/dejavu', '/usr/share/fonts/dejavu', '/usr/share/fonts/TTF', '/usr/local/share/fonts'];
@@ -250,7 +251,11 @@ function block(ctx: Ctx, b: Block, first: boolean): void {
       doc.moveDown(0.2);
       return;
     case 'p':
-      if (b.style === 'caution') {
+      if (b.style === 'draft') {
+        doc.fillColor('#b3261e');
+        para(ctx, b.text, FS.h2, 'B');
+        doc.fillColor('#000');
+      } else if (b.style === 'caution') {
         doc.fillColor('#8a1c1c');
         para(ctx, b.text, FS.body, 'B');
         doc.fillColor('#000');
@@ -301,13 +306,28 @@ export function renderPacketPdf(content: PacketContent, date: Date, opts: PdfOpt
     doc.on('error', reject);
   });
   doc.font('R');
+  if (content.attachment) {
+    // the full result as a file inside the PDF (not printed); fixed dates keep the PDF reproducible
+    doc.file(Buffer.from(content.attachment.json, 'utf8'), {
+      name: content.attachment.name,
+      type: 'application/json',
+      description: 'The design and its full evaluation result (JSON)',
+      creationDate: date,
+      modifiedDate: date,
+    });
+  }
   content.blocks.forEach((b, i) => block(ctx, b, i === 0 || content.blocks[i - 1]?.kind === 'page_break'));
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const y = doc.page.height - PAGE.margin + 4;
-    const footer = `Revision ${content.revisionId.slice(0, 16)} · page ${i + 1} of ${range.count} · Estimate only: verify by physical brake testing; the local regulations and a licensed inspector decide.`;
+    const id = content.revisionId ? `Revision ${content.revisionId.slice(0, 16)}` : DRAFT_MARK;
+    const footer = `${id} · page ${i + 1} of ${range.count} · Estimate only: verify by physical brake testing; the local regulations and a licensed inspector decide.`;
     doc.font('R').fontSize(6.5).fillColor('#555').text(ctx.t(footer), PAGE.margin, y, { width: width(doc), lineBreak: false, height: 10 });
+    if (content.draft) {
+      // the draft mark at the head of every page, above the top margin
+      doc.font('B').fontSize(9).fillColor('#b3261e').text(ctx.t(DRAFT_MARK), PAGE.margin, PAGE.margin - 30, { width: width(doc), align: 'right', lineBreak: false, height: 12 });
+    }
   }
   doc.end();
   return done;

@@ -2,8 +2,9 @@
  * Small input components for the workbench form. Each takes the field's design path as its name and shows
  * the value as typed, the unit of the user's unit system and the field's messages (see form/design-form.ts).
  */
-import type { UnitSystem } from '../core/index.ts';
-import { displayUnitOf, type FormValues, unitLabel } from '../form/design-form.ts';
+import { type InputSource, PROVENANCE_SOURCES, type UnitSystem } from '../core/index.ts';
+import { displayUnitOf, type FormValues, NOTE_FIELD, SOURCE_FIELD, unitLabel } from '../form/design-form.ts';
+import { PROVENANCE_LABELS } from '../report/labels.ts';
 import { html, type SafeHtml } from './html.ts';
 
 export interface InputContext {
@@ -17,10 +18,32 @@ export interface InputContext {
   rendered: Set<string>;
   /** Label of each rendered field, for the problem list in the status block (optional). */
   labels?: Map<string, string>;
+  /** Where each input's value came from, for the inputs with a provenance entry (form/design-form.ts formProvenance). */
+  sources?: ReadonlyMap<string, InputSource>;
+}
+
+const SOURCE_WORDS: readonly [string, string][] = [['', 'not stated'], ...PROVENANCE_SOURCES.map((s): [string, string] => [s, PROVENANCE_LABELS[s]])];
+
+/**
+ * The source of an input beside it: a small select (not stated, measured, maker's figure, ...) and a note. An
+ * entry recorded for another value shows as "not stated", flagged: the value changed since its source was given.
+ */
+export function sourceField(ctx: InputContext, name: string, label: string, oob = false): SafeHtml {
+  const src = ctx.sources?.get(name);
+  const current = src && (src.state === 'recorded' || src.state === 'unconfirmed') ? (src.source ?? '') : '';
+  const flag = src?.state === 'changed' ? 'the value changed since its source was given' : src?.state === 'unconfirmed' ? 'recorded without its value: confirm the source' : '';
+  const sel = `${SOURCE_FIELD}${name}`;
+  const note = `${NOTE_FIELD}${name}`;
+  return html`<details class="src${flag ? ' flagged' : ''}" id="${sourceId(name)}"${oob ? html` hx-swap-oob="true"` : ''}><summary>source: ${SOURCE_WORDS.find(([k]) => k === current)?.[1] ?? 'not stated'}${flag ? html` <em>(${flag})</em>` : ''}</summary>
+<label for="${fieldId(sel)}" class="sr">Source of ${label}</label><select id="${fieldId(sel)}" name="${sel}">${SOURCE_WORDS.map(([k, w]) => html`<option value="${k}"${k === current ? html` selected` : ''}>${w}</option>`)}</select>
+<label for="${fieldId(note)}" class="sr">Note on the source of ${label}</label><input id="${fieldId(note)}" name="${note}" value="${current ? (ctx.values[note] ?? src?.note ?? '') : ''}" maxlength="2000" placeholder="note (weighbridge, data sheet …)" class="w-l"></details>`;
 }
 
 export function fieldId(name: string): string {
   return `f-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
+}
+export function sourceId(name: string): string {
+  return `s-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
 }
 export function messageId(name: string): string {
   return `m-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
@@ -54,7 +77,7 @@ export function numberField(ctx: InputContext, name: string, label: string, o: F
   const errs = ctx.errors.get(name);
   return html`<div class="field${o.compact ? ' compact' : ''}${errs?.length ? ' bad' : ''}">
 ${labelFor(name, label, unit, o)}<span class="in"><input id="${fieldId(name)}" name="${name}" value="${ctx.values[name] ?? ''}" inputmode="decimal" autocomplete="off" class="w-${o.width ?? 'm'}" aria-describedby="${messageId(name)}"${o.compact ? html` aria-label="${label}${unit ? ` (${unit})` : ''}"` : ''}>${unit ? html`<span class="u" aria-hidden="true">${unit}</span>` : ''}</span>
-${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${fieldMessage(name, errs)}</div>`;
+${o.hint ? html`<small class="hint">${o.hint}</small>` : ''}${o.compact ? '' : sourceField(ctx, name, label)}${fieldMessage(name, errs)}</div>`;
 }
 
 export function textField(ctx: InputContext, name: string, label: string, o: FieldOptions & { maxLength?: number; multiline?: boolean } = {}): SafeHtml {

@@ -4,8 +4,8 @@
  * html`` tag; chart specs travel as JSON data blocks (views/chart.ts).
  */
 import { CAUTION, type DiffEntry } from '../core/index.ts';
-import type { Comparison } from '../packet/compare.ts';
-import type { Block, PacketContent } from '../packet/packet-content.ts';
+import type { Comparison } from '../report/compare.ts';
+import { type Block, DRAFT_MARK, type PacketContent } from '../report/packet-document.ts';
 import type { DesignSummary, HistoryEntry, SaveResult } from '../store/design-store.ts';
 import { chartBlock } from './chart.ts';
 import { html, ownSvg, type SafeHtml } from './html.ts';
@@ -148,7 +148,10 @@ dl.kv div{display:flex;gap:1rem}dl.kv dt{font-weight:bold;min-width:18rem}dl.kv 
 .field{border-bottom:1px solid #000;padding-top:1.6rem}
 hr.page-break{border:0;page-break-after:always;break-after:page}
 @media print{body{margin:0}}
+.draft{color:#b3261e;font-weight:bold}
+@media print{.draft-mark{position:fixed;top:0;right:0}}
 </style></head><body>
+${content.draft ? html`<p class="draft draft-mark">${DRAFT_MARK}</p>` : ''}
 ${content.blocks.map(blockHtml)}
 </body></html>`;
 }

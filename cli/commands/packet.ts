@@ -47,12 +47,13 @@ export async function packetCommand(argv: string[], out: CommandOutput): Promise
   }
   const reading = readDesign(input);
   if (!reading.ok) throw cliErrors.invalid(label, reading.errors.map((e) => `${e.path || '(file)'}: ${e.message}`));
-  const { pdf, revisionId, result } = await buildPacket(reading.design, { date, warnings: reading.warnings, ...(rules ? { rules } : {}) });
+  const saved = values.revision !== undefined;
+  const { pdf, revisionId, result } = await buildPacket(reading.design, { date, saved, warnings: reading.warnings, ...(rules ? { rules } : {}) });
   try {
     writeFileSync(values.out, pdf);
   } catch (e) {
     throw cliErrors.fileUnwritable(values.out, (e as Error).message);
   }
-  out.stdout(`wrote ${values.out} (${pdf.length} bytes), revision ${revisionId}\nVERDICT ${result.verdict.summary}`);
+  out.stdout(`wrote ${values.out} (${pdf.length} bytes), ${saved ? `revision ${revisionId}` : 'a draft (not a saved revision; save it with lockstep store save to print its revision)'}\nVERDICT ${result.verdict.summary}`);
   return exitCodeFor(result.verdict);
 }

@@ -11,6 +11,7 @@ import { ProportioningValve, proportioningValve } from './proportioning.ts';
 import { type FieldMeta, fieldMetaIn } from '../field-registry.ts';
 import type { FailedState, ValveFamily, ValveIssue } from './valve-family.ts';
 import type { ValveLaw } from './valve-law.ts';
+import { coreErrors } from '../errors.ts';
 
 export { LimitingValve, limitingValve } from './limiting.ts';
 export { LoadSensingValve, loadSensingKneeBar, loadSensingValve } from './load-sensing.ts';
@@ -45,7 +46,7 @@ export function valveFamily(type: string): ValveFamily | undefined {
 /** The family of a checked valve (a valve of the design file always has one). */
 export function rearValveFamily(valve: Pick<RearValve, 'type'>): ValveFamily<RearValve, ValveFailureMode> {
   const f = valveFamily(valve.type);
-  if (!f) throw new Error(`CORE_ERR_UNKNOWN_VALVE: rear valve type ${JSON.stringify(valve.type)} is not one of ${VALVE_TYPES.join(', ')}`);
+  if (!f) throw coreErrors.unknownValve(JSON.stringify(valve.type), VALVE_TYPES.join(', '));
   return f as unknown as ValveFamily<RearValve, ValveFailureMode>;
 }
 

@@ -4,7 +4,7 @@
  * Register with `app.register(packetRoutes, { store?, dataDir? })`.
  */
 import type { FastifyPluginAsync, FastifyReply } from 'fastify';
-import type { DesignFile, Warning } from '../../core/index.ts';
+import type { DesignFile, UnitSystem, Warning } from '../../core/index.ts';
 import { packetHtml } from '../../views/store-views.ts';
 import { checksCsv, curvesCsv, designJson } from '../../packet/exports.ts';
 import { evaluateForPacket, warningsOf } from '../../packet/build-packet.ts';
@@ -32,7 +32,15 @@ function parseDate(q: unknown, now: () => Date): Date {
   return d;
 }
 
-async function send(reply: FastifyReply, what: ExportName, design: DesignFile, warnings: Warning[], date: Date): Promise<FastifyReply> {
+async function send(
+  reply: FastifyReply,
+  what: ExportName,
+  design: DesignFile,
+  warnings: Warning[],
+  date: Date,
+  saved: boolean,
+  units: UnitSystem = 'metric',
+): Promise<FastifyReply> {
   const rev = revisionId(design);
   const disposition = (ext: string) => `attachment; filename="${downloadName(design, rev, ext)}"`;
   reply.header('x-lockstep-revision', rev);
@@ -44,11 +52,11 @@ async function send(reply: FastifyReply, what: ExportName, design: DesignFile, w
     case 'checks.csv':
       return reply.type('text/csv; charset=utf-8').header('content-disposition', disposition('checks.csv')).send(checksCsv(evaluateForPacket(design, warnings)));
     case 'packet.html': {
-      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });
+      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: saved ? rev : null, date, units });
       return sendHtml(reply, packetHtml(content));
     }
     case 'packet.pdf': {
-      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: rev, date });
+      const content = packetContent({ design, result: evaluateForPacket(design, warnings), revisionId: saved ? rev : null, date, units });
       const pdf = await renderPacketPdf(content, date);
       return reply.type('application/pdf').header('content-disposition', disposition('pdf')).send(pdf);
     }
@@ -65,12 +73,14 @@ export const packetRoutes: FastifyPluginAsync<StoreRouteOptions> = async (app, o
     // A saved revision (full id or unique prefix).
     app.get<{ Params: { rev: string } }>(`/revisions/:rev/${path}`, async (req, reply) => {
       const r = holder.get().revision(req.params.rev);
-      return send(reply, what, r.design, warningsOf(r.design), parseDate(req.query, now));
+      return send(reply, what, r.design, warningsOf(r.design), parseDate(req.query, now), true, field(req.query, 'units') === 'us' ? 'us' : 'metric');
     });
     // The design on the page, unsaved: the workbench form, design_json or {design}.
     app.post(`/${path}`, async (req, reply) => {
       const { design, warnings } = designFromBody(req.body);
-      return send(reply, what, design, warnings, parseDate(req.query, now));
+      // unsaved: a draft, in the unit system of the page (or `?units=us`)
+      const units: UnitSystem = field(req.body, '_units') === 'us' || field(req.query, 'units') === 'us' ? 'us' : 'metric';
+      return send(reply, what, design, warnings, parseDate(req.query, now), false, units);
     });
   }
 };

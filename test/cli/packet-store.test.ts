@@ -45,7 +45,7 @@ describe('lockstep store and packet', () => {
     const show = await run('store', 'show', rev.slice(0, 8));
     expect(JSON.parse(show.stdout)).toEqual(d);
   });
-  it('writes the packet of a saved revision, the same bytes as for the file', async () => {
+  it('writes the packet of a saved revision with its id; the packet of the file is a draft without it (issue 14)', async () => {
     const a = path.join(dir, 'a.pdf');
     const b = path.join(dir, 'b.pdf');
     // the packet is written whatever the verdict; the exit code is the verdict's (README "Exit codes")
@@ -58,7 +58,10 @@ describe('lockstep store and packet', () => {
     expect(r.stdout).toContain(rev);
     const text = execFileSync('/usr/bin/pdftotext', [b, '-'], { encoding: 'utf8' });
     expect(text).toContain(rev);
-    expect(execFileSync('cmp', [a, b]).length).toBe(0); // cmp prints nothing and exits 0 when identical
+    expect(text).not.toContain('DRAFT');
+    const draft = execFileSync('/usr/bin/pdftotext', [a, '-'], { encoding: 'utf8' });
+    expect(draft).toContain('DRAFT — not a saved revision');
+    expect(draft).not.toContain(rev.slice(0, 16));
   });
   it('refuses bad use with exit 2 and a coded message', async () => {
     expect((await run('packet', file)).stderr).toContain('CLI_ERR_USAGE');

@@ -49,7 +49,7 @@ describe('designDiff', () => {
   it('quotes provenance keys, which are field paths themselves, and gives them no unit', () => {
     const a = demoDesign();
     const b = clone(a);
-    b.provenance!['axles.rear.brake.pad_friction'] = { source: 'measured' };
+    b.provenance!['axles.rear.brake.pad_friction'] = { source: 'measured', value: 0.4 }; // the same value as the demo's entry
     const d = designDiff(a, b);
     expect(d.map((e) => e.path)).toEqual([
       'provenance["axles.rear.brake.pad_friction"].note',

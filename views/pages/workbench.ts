@@ -7,8 +7,9 @@
  * - .msg slots under each field, updated out of band.
  */
 import { CAUTION, type DesignFile, type EvaluationResult, type FieldIssue, type UnitSystem, type Verdict, type Warning } from '../../core/index.ts';
-import type { FormValues } from '../../form/design-form.ts';
-import { fieldId, fieldMessage, type InputContext } from '../fields.ts';
+import { formProvenance, type FormValues } from '../../form/design-form.ts';
+import { activeBlocksLine } from '../../report/design-blocks.ts';
+import { fieldId, fieldMessage, type InputContext, sourceField } from '../fields.ts';
 import { html, type SafeHtml } from '../html.ts';
 import { type AssetUrls, layout } from '../layout.ts';
 import { panels, type ResultContext } from '../panels/index.ts';
@@ -65,8 +66,13 @@ function foldSection(id: string, title: string, body: SafeHtml): SafeHtml {
 /** The id of a panel's input section: a panel with inputs and results has two sections (ids stay unique). */
 const inputSectionId = (p: { id: string; results?: unknown }) => (p.results ? `panel-${p.id}-inputs` : `panel-${p.id}`);
 
-function renderInputs(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): { ctx: InputContext; sections: SafeHtml[] } {
-  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map() };
+function renderInputs(
+  values: FormValues,
+  units: UnitSystem,
+  errors: readonly FieldIssue[],
+  sources?: InputContext['sources'],
+): { ctx: InputContext; sections: SafeHtml[] } {
+  const ctx: InputContext = { values, units, errors: errorMap(errors), structural: new Set(), rendered: new Set(), labels: new Map(), ...(sources ? { sources } : {}) };
   const inputPanels = panels.filter((p) => p.inputs);
   const rendered = inputPanels.map((p) => ({ group: groupOf(p.id), html: foldSection(inputSectionId(p), p.title, p.inputs!(ctx)) }));
   const sections = GROUPS.flatMap((g) => {
@@ -93,7 +99,8 @@ export function fieldsWithMessages(values: FormValues, units: UnitSystem): { nam
 const slotCache = new Map<string, { names: ReadonlySet<string>; labels: ReadonlyMap<string, string> }>();
 
 export function inputsSection(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[], oob = false): SafeHtml {
-  const { ctx, sections } = renderInputs(values, units, errors);
+  const prov = formProvenance(values, units);
+  const { ctx, sections } = renderInputs(values, units, errors, prov.sources);
   // values no panel shows (format, blocks added by other tools) travel along unchanged
   const carried = Object.entries(values).filter(([n]) => !ctx.rendered.has(n) && !n.startsWith('_'));
   return html`<div id="design-inputs"${oob ? html` hx-swap-oob="true"` : ''}>
@@ -103,7 +110,7 @@ export function inputsSection(values: FormValues, units: UnitSystem, errors: rea
 <small class="hint">Any field also accepts a value with its unit, e.g. “58 in”, “1450 lb”, “90 psi”, “2.2 t”.</small></div>
 ${sections}
 ${carried.map(([n, v]) => html`<input type="hidden" name="${n}" value="${v}">`)}
-${values._provenance !== undefined ? html`<input type="hidden" name="_provenance" value="${values._provenance}">` : ''}
+${provenanceInput(prov.json, false)}
 ${values._exact !== undefined ? html`<input type="hidden" name="_exact" value="${values._exact}">` : ''}
 ${values._stash !== undefined ? html`<input type="hidden" name="_stash" value="${values._stash}">` : ''}
 <input type="hidden" name="_shape" value="${shapeOf(ctx)}">
@@ -115,7 +122,7 @@ export function resultsSection(v: ValidView, units: UnitSystem, oob = false): Sa
   const resultPanels = panels.filter((p) => p.results);
   const groups = GROUPS.map((g) => {
     const inGroup = resultPanels.filter((p) => groupOf(p.id) === g);
-    const head = g === 'main' ? html`${staleNote(null)}${overallVerdict(v.result)}${isDemo(v.design) ? INTRO : ''}<p class="for">Results for <strong>${v.design.name}</strong></p>` : '';
+    const head = g === 'main' ? html`${staleNote(null)}${overallVerdict(v.result)}${isDemo(v.design) ? INTRO : ''}<p class="for">Results for <strong>${v.design.name}</strong></p><p class="hint active-blocks">${activeBlocksLine(v.design)}</p>` : '';
     return inGroup.length || head ? html`<div class="${groupClass(g)} out-group">${head}${inGroup.map((p) => foldSection(`panel-${p.id}`, p.title, p.deferred ? deferredSlot(p.id) : p.results!(ctx)))}</div>` : '';
   });
   return html`<div id="results"${oob ? html` hx-swap-oob="true"` : ''}>
@@ -182,7 +189,17 @@ function problemLabel(path: string, labels: ReadonlyMap<string, string> | undefi
 export function fieldMessagesOob(values: FormValues, units: UnitSystem, errors: readonly FieldIssue[]): SafeHtml {
   const m = errorMap(errors);
   // control fields (names starting with "_") have no message line
-  return html`${[...fieldsWithMessages(values, units).names].filter((n) => !n.startsWith('_')).map((n) => fieldMessage(n, m.get(n), true))}`;
+  const fields = fieldsWithMessages(values, units);
+  // the source beside each input with a provenance entry, as it stands for the value now (flagged once changed)
+  const { json, sources } = formProvenance(values, units);
+  const ctx: InputContext = { values, units, errors: new Map(), structural: new Set(), rendered: new Set(), sources };
+  const src = [...sources.keys()].filter((n) => fields.names.has(n)).map((n) => sourceField(ctx, n, fields.labels.get(n) ?? n, true));
+  return html`${[...fields.names].filter((n) => !n.startsWith('_')).map((n) => fieldMessage(n, m.get(n), true))}${src}${provenanceInput(json, true)}`;
+}
+
+/** The provenance entries carried by the form (each with the value it was recorded for), kept current after every post. */
+function provenanceInput(json: string | undefined, oob: boolean): SafeHtml {
+  return html`<input type="hidden" id="f-provenance" name="_provenance" value="${json ?? '{}'}"${oob ? html` hx-swap-oob="true"` : ''}>`;
 }
 
 /** The intro is shown while the page holds the demo (its name starts "Demo:"). */

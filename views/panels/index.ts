@@ -19,6 +19,7 @@ import { storeInputsPanel, storePanel } from './store.ts';
 import type { Panel } from './panel.ts';
 import { surfacesPanel } from './surfaces.ts';
 import { tablePanel } from './table.ts';
+import { testResultsPanel } from './test-results.ts';
 import { verdictPanel } from './verdict.ts';
 import { vehiclePanel } from './vehicle.ts';
 
@@ -44,6 +45,7 @@ export const panels: Panel[] = [
   casesInputsPanel,
   sizingInputsPanel,
   sizingPanel,
+  testResultsPanel,
   storeInputsPanel,
   storePanel,
 ];

@@ -20,7 +20,7 @@
 import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
 import { checkCurveRule, type CurveVerdict, curveRulePasses } from './checks/curve-check.ts';
-import { ruleSelection } from './checks/run-checks.ts';
+import { ruleSelection } from './checks/selection.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
 import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';

@@ -19,7 +19,8 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
-import { checkCurveRule, type CurveVerdict, curveRulePasses } from './checks/curve-check.ts';
+import { checkCurveRule, type CurveVerdict, curveRulePasses, MARGIN_TOLERANCE, type MarginForm, pieceClauses } from './checks/curve-check.ts';
+import { polyRootsInto } from './checks/polynomial.ts';
 import { ruleSelection } from './checks/selection.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
@@ -221,14 +222,14 @@ export interface RegenStateResult {
   /** The selected curve rules (lock order, efficiency) with zero regeneration and at each speed. */
   checks: RegenCurveCheck[];
   /**
-   * Largest regenerative force (N) with which every selected curve rule that passes without regeneration
-   * still passes, found by bisection up to the system's constant-torque force; null when the full force
-   * passes or when there is no such rule (see `max_force_basis`).
+   * Largest regenerative force (N) up to which every selected curve rule that passes without regeneration
+   * still passes (at every force from zero to it), solved exactly up to the system's constant-torque force;
+   * null when the full force passes or when there is no such rule (see `max_force_basis`).
    */
   max_force_passing_checks_n: number | null;
   /** Rules left out of that search because they fail without regeneration already. */
   failing_without_regen: string[];
-  max_force_basis: 'full_force_passes' | 'bisection' | 'no_rule_to_keep';
+  max_force_basis: 'full_force_passes' | 'solved' | 'no_rule_to_keep';
 }
 
 export interface RegenFlag {
@@ -319,24 +320,208 @@ function maxForcePassing(
   memo: VerdictMemo,
 ): { force: number | null; basis: RegenStateResult['max_force_basis'] } {
   if (rules.length === 0) return { force: null, basis: 'no_rule_to_keep' };
-  if (rulesPassWith(rules, loads, friction, setup, memo, setup.maxForce)) return { force: null, basis: 'full_force_passes' };
-  let lo = 0;
-  let up = setup.maxForce;
-  for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
-    const mid = (lo + up) / 2;
-    if (rulesPassWith(rules, loads, friction, setup, memo, mid)) lo = mid;
-    else up = mid;
-  }
-  return { force: lo, basis: 'bisection' };
+  const force = firstFailingForce(rules, loads, friction, setup, memo);
+  return force === null ? { force: null, basis: 'full_force_passes' } : { force, basis: 'solved' };
 }
 
 /** Whether every rule passes with regenerative force R (the verdicts already found are reused). */
 function rulesPassWith(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup, memo: VerdictMemo, R: number): boolean {
   const known = memo.get(R);
-  if (known) return rules.every((rule) => known.get(rule)!.passed);
+  if (known) {
+    for (const rule of rules) if (!known.get(rule)!.passed) return false;
+    return true;
+  }
   const d = regenDistribution(friction, R, setup.frontShare, setup.blending);
   const segs = segments(d);
-  return rules.every((rule) => curveRulePasses(rule, loads, d, segs));
+  for (const rule of rules) if (!curveRulePasses(rule, loads, d, segs)) return false;
+  return true;
+}
+
+/**
+ * One linear piece of the distribution with regenerative force R, as a function of z and R together:
+ * T_i = a_i + b_i z + c_i R for z between the largest of the lower bounds and the smallest of the upper bounds,
+ * each bound z = e0 + e1 R (flattened pairs).
+ */
+interface RegenCell {
+  a1: number;
+  b1: number;
+  c1: number;
+  a2: number;
+  b2: number;
+  c2: number;
+  lo: number[];
+  hi: number[];
+}
+
+/**
+ * The cells of regenDistribution(friction, R, s, blending) for every R ≥ 0. Above the join the friction
+ * distribution is shifted by R: at friction rate z_f = z − R/P, T_i = T_i,f(z_f) + s_i R, so on friction segment
+ * T_i,f = a_i + b_i z_f the cell is (a_i, b_i, s_i − b_i/P) between z_from + R/P and z_to + R/P (and, for
+ * fixed_proportion, above the cap z = R(1 + q)/(qP)). Below it the force does not depend on R: pure
+ * regeneration T_i = s_i P z up to R/P (regen_first), or the friction with q·T_friction added, z = (1 + q) z_f,
+ * up to the cap (fixed_proportion).
+ */
+function regenCells(friction: Distribution, s: number, blending: RegenBlendingSpec): RegenCell[] {
+  const P = friction.P;
+  const out: RegenCell[] = [];
+  const segs = segments(friction);
+  if (blending.type === 'regen_first') {
+    out.push({ a1: 0, b1: s * P, c1: 0, a2: 0, b2: (1 - s) * P, c2: 0, lo: [0, 0], hi: [0, 1 / P] });
+  } else {
+    const q = blending.proportion;
+    const cap = (1 + q) / (q * P);
+    for (const sg of segs) {
+      const hi = [0, cap];
+      if (Number.isFinite(sg.zTo)) hi.push((1 + q) * sg.zTo, 0);
+      out.push({ a1: sg.a1, b1: (sg.b1 + s * q * P) / (1 + q), c1: 0, a2: sg.a2, b2: (sg.b2 + (1 - s) * q * P) / (1 + q), c2: 0, lo: [(1 + q) * sg.zFrom, 0], hi });
+    }
+  }
+  for (const sg of segs) {
+    const lo = [sg.zFrom, 1 / P];
+    if (blending.type === 'fixed_proportion') lo.push(0, (1 + blending.proportion) / (blending.proportion * P));
+    const hi = Number.isFinite(sg.zTo) ? [sg.zTo, 1 / P] : [];
+    out.push({ a1: sg.a1, b1: sg.b1, c1: s - sg.b1 / P, a2: sg.a2, b2: sg.b2, c2: 1 - s - sg.b2 / P, lo, hi });
+  }
+  return out;
+}
+
+/** Whether (z, R) lies in the cell (to a relative 1e-9). */
+function inCell(cell: RegenCell, z: number, R: number): boolean {
+  const eps = 1e-9 * Math.max(1, Math.abs(z));
+  for (let i = 0; i < cell.lo.length; i += 2) if (cell.lo[i]! + cell.lo[i + 1]! * R > z + eps) return false;
+  for (let i = 0; i < cell.hi.length; i += 2) if (cell.hi[i]! + cell.hi[i + 1]! * R < z - eps) return false;
+  return true;
+}
+
+// Work space of the event search: polynomial coefficients in z or R (ascending) and their roots.
+const evA = new Float64Array(4);
+const evB = new Float64Array(2);
+const evA2 = new Float64Array(4);
+const evB2 = new Float64Array(2);
+const evPoly = new Float64Array(6);
+const evRoots = new Float64Array(6);
+
+/**
+ * m·N1·N2 of a margin form on a cell as pA(z) + R·pB(z) (pA cubic, pB linear; the tolerance added to α, so that
+ * the zero is where the check's verdict turns): (α + βz) N1 N2 + γ1 (a1 + b1 z) N2 + γ2 (a2 + b2 z) N1 and
+ * γ1 c1 N2 + γ2 c2 N1, with N1 = P1 + χP z, N2 = P2 − χP z.
+ */
+function cellForm(f: MarginForm, loads: AxleLoadModel, cell: RegenCell, pA: Float64Array, pB: Float64Array): void {
+  const n10 = loads.P1;
+  const n11 = loads.chi * loads.P;
+  const n20 = loads.P2;
+  const n21 = -n11;
+  const alpha = f.alpha + MARGIN_TOLERANCE;
+  pA[0] = alpha * n10 * n20 + f.g1 * cell.a1 * n20 + f.g2 * cell.a2 * n10;
+  pA[1] = alpha * (n10 * n21 + n11 * n20) + f.beta * n10 * n20 + f.g1 * (cell.a1 * n21 + cell.b1 * n20) + f.g2 * (cell.a2 * n11 + cell.b2 * n10);
+  pA[2] = alpha * n11 * n21 + f.beta * (n10 * n21 + n11 * n20) + f.g1 * cell.b1 * n21 + f.g2 * cell.b2 * n11;
+  pA[3] = f.beta * n11 * n21;
+  pB[0] = f.g1 * cell.c1 * n20 + f.g2 * cell.c2 * n10;
+  pB[1] = f.g1 * cell.c1 * n21 + f.g2 * cell.c2 * n11;
+}
+
+const cubicAt = (p: Float64Array, z: number) => p[0]! + z * (p[1]! + z * (p[2]! + z * p[3]!));
+
+/**
+ * The forces in (0, rMax) where a curve rule's verdict can turn, for the largest force passing the checks. For
+ * a fixed z each margin form is affine in R on a cell (T_i = a_i + b_i z + c_i R, the axle loads do not depend
+ * on R), so the forces where it fails first are bounded by its zero curve R = −pA(z)/pB(z). The first force at
+ * which the failing set of a clause (every alternative below zero) appears is a lowest point of its boundary:
+ * where a zero curve is level (pA′pB − pA pB′ = 0, cubic in z), where two alternatives' zero curves meet
+ * (pA_f pB_g − pA_g pB_f = 0, quartic), or where a zero curve meets a cell bound or a piece end
+ * (z = e0 + e1 R put in pA + R pB: cubic in R). Each root is kept when it lies in its cell and piece.
+ */
+function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly RegenCell[], rMax: number, out: number[]): void {
+  const zTop = loads.zLift * (1 - 1e-9);
+  const R0 = 0;
+  const add = (cell: RegenCell, z: number, R: number, zA: number, zB: number) => {
+    if (R > R0 && R < rMax && z >= zA - 1e-12 && z <= zB + 1e-12 && inCell(cell, z, R)) out.push(R);
+  };
+  for (const branch of rule.branches) {
+    // a branch with a piece beyond lift-off fails at every force: it never turns the verdict
+    if (branch.pieces.some((pc) => pc.z[1] > zTop)) continue;
+    for (const piece of branch.pieces) {
+      const zA = piece.z[0];
+      const zB = Math.min(piece.z[1], zTop);
+      if (zB < zA) continue;
+      const clauses = pieceClauses(piece);
+      for (const cell of cells) {
+        // the cell's z range over 0 ≤ R ≤ rMax (within: each bound at its own extreme) must meet the piece
+        let lo = -Infinity;
+        for (let i = 0; i < cell.lo.length; i += 2) lo = Math.max(lo, Math.min(cell.lo[i]!, cell.lo[i]! + cell.lo[i + 1]! * rMax));
+        let hi = Infinity;
+        for (let i = 0; i < cell.hi.length; i += 2) hi = Math.min(hi, Math.max(cell.hi[i]!, cell.hi[i]! + cell.hi[i + 1]! * rMax));
+        if (lo > zB || hi < zA) continue;
+        for (const clause of clauses) {
+          for (let fi = 0; fi < clause.length; fi++) {
+            cellForm(clause[fi]!, loads, cell, evA, evB);
+            // level points of the zero curve: pA′ pB − pA pB′
+            evPoly[0] = evA[1]! * evB[0]! - evA[0]! * evB[1]!;
+            evPoly[1] = 2 * evA[2]! * evB[0]! + evA[1]! * evB[1]! - evA[1]! * evB[1]!;
+            evPoly[2] = 3 * evA[3]! * evB[0]! + 2 * evA[2]! * evB[1]! - evA[2]! * evB[1]!;
+            evPoly[3] = 3 * evA[3]! * evB[1]! - evA[3]! * evB[1]!;
+            for (let k = 0, n = polyRootsInto(evPoly, 4, zA, zB, evRoots); k < n; k++) {
+              const z = evRoots[k]!;
+              const b = evB[0]! + evB[1]! * z;
+              if (b !== 0) add(cell, z, -cubicAt(evA, z) / b, zA, zB);
+            }
+            // where the zero curve meets a bound z = e0 + e1 R of the cell or a piece end
+            const bound = (e0: number, e1: number) => {
+              // pA(e0 + e1 R) by Taylor shift, plus R·pB(e0 + e1 R)
+              const d0 = cubicAt(evA, e0);
+              const d1 = evA[1]! + e0 * (2 * evA[2]! + 3 * e0 * evA[3]!);
+              const d2 = evA[2]! + 3 * e0 * evA[3]!;
+              const b0 = evB[0]! + evB[1]! * e0;
+              evPoly[0] = d0;
+              evPoly[1] = d1 * e1 + b0;
+              evPoly[2] = d2 * e1 * e1 + evB[1]! * e1;
+              evPoly[3] = evA[3]! * e1 * e1 * e1;
+              for (let k = 0, n = polyRootsInto(evPoly, 4, 0, rMax, evRoots); k < n; k++) add(cell, e0 + e1 * evRoots[k]!, evRoots[k]!, zA, zB);
+            };
+            for (let i = 0; i < cell.lo.length; i += 2) bound(cell.lo[i]!, cell.lo[i + 1]!);
+            for (let i = 0; i < cell.hi.length; i += 2) bound(cell.hi[i]!, cell.hi[i + 1]!);
+            bound(zA, 0);
+            bound(zB, 0);
+            // where two alternatives of the clause are zero together: pA_f pB_g − pA_g pB_f (quartic in z)
+            for (let gi = fi + 1; gi < clause.length; gi++) {
+              cellForm(clause[gi]!, loads, cell, evA2, evB2);
+              for (let k = 0; k < 5; k++) evPoly[k] = 0;
+              for (let i = 0; i < 4; i++) {
+                for (let j = 0; j < 2; j++) evPoly[i + j]! += evA[i]! * evB2[j]! - evA2[i]! * evB[j]!;
+              }
+              for (let k = 0, n = polyRootsInto(evPoly, 5, zA, zB, evRoots); k < n; k++) {
+                const z = evRoots[k]!;
+                const b = evB[0]! + evB[1]! * z;
+                const b2 = evB2[0]! + evB2[1]! * z;
+                if (b !== 0) add(cell, z, -cubicAt(evA, z) / b, zA, zB);
+                else if (b2 !== 0) add(cell, z, -cubicAt(evA2, z) / b2, zA, zB);
+              }
+            }
+          }
+        }
+      }
+    }
+  }
+}
+
+/**
+ * The largest force R such that every rule passes at every force from 0 to R (the rules pass at 0), null when
+ * they pass at every force up to the full one. The verdicts can turn only at the forces verdictTurns finds, so between two neighbouring ones a
+ * single check decides: the answer is the lower end of the first stretch that fails.
+ */
+function firstFailingForce(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup, memo: VerdictMemo): number | null {
+  const cells = regenCells(friction, setup.frontShare, setup.blending);
+  const turns: number[] = [0];
+  for (const rule of rules) verdictTurns(rule, loads, cells, setup.maxForce, turns);
+  turns.push(setup.maxForce);
+  turns.sort((x, y) => x - y);
+  for (let i = 0; i + 1 < turns.length; i++) {
+    const a = turns[i]!;
+    const b = turns[i + 1]!;
+    if (b - a <= 1e-9 * Math.max(1, b)) continue;
+    if (!rulesPassWith(rules, loads, friction, setup, memo, 0.5 * (a + b))) return a;
+  }
+  return rulesPassWith(rules, loads, friction, setup, memo, setup.maxForce) ? null : setup.maxForce;
 }
 
 function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange, segs: readonly Segment[] = segments(d)): RegenLock {
@@ -500,9 +685,6 @@ function surfaceLockSolver(loads: AxleLoadModel, friction: Distribution, k: numb
   };
   return { rate, breakpoints };
 }
-
-/** The bisection for the largest force passing the curve rules stops within this, N (far below what a controller resolves). */
-export const REGEN_FORCE_TOLERANCE_N = 0.5;
 
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);
 

@@ -21,7 +21,7 @@ import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
 import { checkCurveRule, type CurveVerdict, curveRulePasses, MARGIN_TOLERANCE, type MarginForm, pieceClauses } from './checks/curve-check.ts';
 import { polyRootsInto } from './checks/polynomial.ts';
-import { ruleSelection } from './checks/selection.ts';
+import { designRules } from './checks/selection.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
 import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';
@@ -29,7 +29,6 @@ import { firstLock } from './lock-order.ts';
 import { SIMULTANEOUS_LOCK_DZ } from './constants.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
 import { type CurveRule, type RuleStatus } from './rules/index.ts';
-import { selectDesignRules } from './rules/light-n1.ts';
 import type { StateModel } from './state-model.ts';
 
 /** Defaults for the optional keys (engineering choices, documented in docs/design-file.md). */
@@ -273,7 +272,7 @@ export interface RegenResult {
 /** The curve rules of the design's rule selection that cover its category and this load-state kind. */
 export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
   const out: CurveRule[] = [];
-  for (const { rule, covers_category } of selectDesignRules(ruleSelection(design), design)) {
+  for (const { rule, covers_category } of designRules(design)) {
     if (!covers_category || rule.kind !== 'curve') continue;
     if (rule.load_states !== 'all' && !(rule.load_states as readonly string[]).includes(kind)) continue;
     out.push(rule);

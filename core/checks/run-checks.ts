@@ -4,7 +4,6 @@
  * default for the category and ABS (core/rules/index.ts).
  */
 import type { DesignFile } from '../design.ts';
-import { selectDesignRules } from '../rules/light-n1.ts';
 import type { CurveRule, DecelerationRule, ParkingRule, Rule } from '../rules/rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-result.ts';
@@ -13,7 +12,7 @@ import { checkCurveRule } from './curve-check.ts';
 import { checkDeceleration, checkParking } from './performance-check.ts';
 import { caseResults } from './cases.ts';
 import { base, isCaseRule, notApplicable } from './result-builders.ts';
-import { type RunChecksOptions, ruleSelection } from './selection.ts';
+import { designRules, type RunChecksOptions } from './selection.ts';
 import { derivedForRule, derivedStates } from './lightly-loaded.ts';
 
 export const ABS_EXEMPT_NOTE =
@@ -129,7 +128,7 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
   const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
   const out: CheckResult[] = [];
   const valveNote = valveNoteOf(design);
-  const selected = selectDesignRules(ruleSelection(design, opts), design);
+  const selected = designRules(design, opts);
   const derived = derivedStates(design, selected); // the FMVSS lightly loaded vehicle, when those rules are selected
   for (const { rule, covers_category } of selected) {
     if (!covers_category) {

@@ -419,7 +419,28 @@ function cellForm(f: MarginForm, loads: AxleLoadModel, cell: RegenCell, pA: Floa
   pB[1] = f.g1 * cell.c1 * n21 + f.g2 * cell.c2 * n11;
 }
 
-const cubicAt = (p: Float64Array, z: number) => p[0]! + z * (p[1]! + z * (p[2]! + z * p[3]!));
+function cubicAt(p: Float64Array, z: number): number {
+  return p[0]! + z * (p[1]! + z * (p[2]! + z * p[3]!));
+}
+
+/** Keeps R as a turn when it lies in (0, rMax) and (z, R) in the cell and the piece [zA, zB]. */
+function addTurn(out: number[], rMax: number, cell: RegenCell, z: number, R: number, zA: number, zB: number): void {
+  if (R > 0 && R < rMax && z >= zA - 1e-12 && z <= zB + 1e-12 && inCell(cell, z, R)) out.push(R);
+}
+
+/** The turns where the zero curve of the form in evA/evB meets the bound z = e0 + e1 R: pA(e0 + e1 R) + R·pB(e0 + e1 R) = 0 (cubic in R). */
+function boundTurns(out: number[], rMax: number, cell: RegenCell, e0: number, e1: number, zA: number, zB: number): void {
+  // pA(e0 + e1 R) by Taylor shift, plus R·pB(e0 + e1 R)
+  const d0 = cubicAt(evA, e0);
+  const d1 = evA[1]! + e0 * (2 * evA[2]! + 3 * e0 * evA[3]!);
+  const d2 = evA[2]! + 3 * e0 * evA[3]!;
+  const b0 = evB[0]! + evB[1]! * e0;
+  evPoly[0] = d0;
+  evPoly[1] = d1 * e1 + b0;
+  evPoly[2] = d2 * e1 * e1 + evB[1]! * e1;
+  evPoly[3] = evA[3]! * e1 * e1 * e1;
+  for (let k = 0, n = polyRootsInto(evPoly, 4, 0, rMax, evRoots); k < n; k++) addTurn(out, rMax, cell, e0 + e1 * evRoots[k]!, evRoots[k]!, zA, zB);
+}
 
 /**
  * The forces in (0, rMax) where a curve rule's verdict can turn, for the largest force passing the checks. For
@@ -432,10 +453,6 @@ const cubicAt = (p: Float64Array, z: number) => p[0]! + z * (p[1]! + z * (p[2]! 
  */
 function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly RegenCell[], rMax: number, out: number[]): void {
   const zTop = loads.zLift * (1 - 1e-9);
-  const R0 = 0;
-  const add = (cell: RegenCell, z: number, R: number, zA: number, zB: number) => {
-    if (R > R0 && R < rMax && z >= zA - 1e-12 && z <= zB + 1e-12 && inCell(cell, z, R)) out.push(R);
-  };
   for (const branch of rule.branches) {
     // a branch with a piece beyond lift-off fails at every force: it never turns the verdict
     if (branch.pieces.some((pc) => pc.z[1] > zTop)) continue;
@@ -462,25 +479,13 @@ function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly Reg
             for (let k = 0, n = polyRootsInto(evPoly, 4, zA, zB, evRoots); k < n; k++) {
               const z = evRoots[k]!;
               const b = evB[0]! + evB[1]! * z;
-              if (b !== 0) add(cell, z, -cubicAt(evA, z) / b, zA, zB);
+              if (b !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA, z) / b, zA, zB);
             }
             // where the zero curve meets a bound z = e0 + e1 R of the cell or a piece end
-            const bound = (e0: number, e1: number) => {
-              // pA(e0 + e1 R) by Taylor shift, plus R·pB(e0 + e1 R)
-              const d0 = cubicAt(evA, e0);
-              const d1 = evA[1]! + e0 * (2 * evA[2]! + 3 * e0 * evA[3]!);
-              const d2 = evA[2]! + 3 * e0 * evA[3]!;
-              const b0 = evB[0]! + evB[1]! * e0;
-              evPoly[0] = d0;
-              evPoly[1] = d1 * e1 + b0;
-              evPoly[2] = d2 * e1 * e1 + evB[1]! * e1;
-              evPoly[3] = evA[3]! * e1 * e1 * e1;
-              for (let k = 0, n = polyRootsInto(evPoly, 4, 0, rMax, evRoots); k < n; k++) add(cell, e0 + e1 * evRoots[k]!, evRoots[k]!, zA, zB);
-            };
-            for (let i = 0; i < cell.lo.length; i += 2) bound(cell.lo[i]!, cell.lo[i + 1]!);
-            for (let i = 0; i < cell.hi.length; i += 2) bound(cell.hi[i]!, cell.hi[i + 1]!);
-            bound(zA, 0);
-            bound(zB, 0);
+            for (let i = 0; i < cell.lo.length; i += 2) boundTurns(out, rMax, cell, cell.lo[i]!, cell.lo[i + 1]!, zA, zB);
+            for (let i = 0; i < cell.hi.length; i += 2) boundTurns(out, rMax, cell, cell.hi[i]!, cell.hi[i + 1]!, zA, zB);
+            boundTurns(out, rMax, cell, zA, 0, zA, zB);
+            boundTurns(out, rMax, cell, zB, 0, zA, zB);
             // where two alternatives of the clause are zero together: pA_f pB_g − pA_g pB_f (quartic in z)
             for (let gi = fi + 1; gi < clause.length; gi++) {
               cellForm(clause[gi]!, loads, cell, evA2, evB2);
@@ -492,8 +497,8 @@ function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly Reg
                 const z = evRoots[k]!;
                 const b = evB[0]! + evB[1]! * z;
                 const b2 = evB2[0]! + evB2[1]! * z;
-                if (b !== 0) add(cell, z, -cubicAt(evA, z) / b, zA, zB);
-                else if (b2 !== 0) add(cell, z, -cubicAt(evA2, z) / b2, zA, zB);
+                if (b !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA, z) / b, zA, zB);
+                else if (b2 !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA2, z) / b2, zA, zB);
               }
             }
           }

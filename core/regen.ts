@@ -508,6 +508,11 @@ function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly Reg
   }
 }
 
+/** firstFailingForce for the rules given (each passing without regeneration), with no verdicts known yet. */
+export function largestForcePassingChecks(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup): number | null {
+  return firstFailingForce(rules, loads, friction, setup, new Map());
+}
+
 /**
  * The largest force R such that every rule passes at every force from 0 to R (the rules pass at 0), null when
  * they pass at every force up to the full one. The verdicts can turn only at the forces verdictTurns finds, so between two neighbouring ones a

@@ -28,7 +28,7 @@ import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from
 import { firstLock } from './lock-order.ts';
 import { SIMULTANEOUS_LOCK_DZ } from './constants.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
-import { type CurveRule, type RuleStatus } from './rules/index.ts';
+import { type CurveRule, type RuleStatus, type SelectedRule } from './rules/index.ts';
 import type { StateModel } from './state-model.ts';
 
 /** Defaults for the optional keys (engineering choices, documented in docs/design-file.md). */
@@ -270,9 +270,9 @@ export interface RegenResult {
 }
 
 /** The curve rules of the design's rule selection that cover its category and this load-state kind. */
-export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
+export function regenCurveRules(design: DesignFile, kind: string, selected: readonly SelectedRule[] = designRules(design)): CurveRule[] {
   const out: CurveRule[] = [];
-  for (const { rule, covers_category } of designRules(design)) {
+  for (const { rule, covers_category } of selected) {
     if (!covers_category || rule.kind !== 'curve') continue;
     if (rule.load_states !== 'all' && !(rule.load_states as readonly string[]).includes(kind)) continue;
     out.push(rule);
@@ -712,10 +712,11 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
   const setup = regenSetup(design, r);
   const rule = lockOrderRange(design.vehicle.category);
   const flags: RegenFlag[] = [];
+  const selected = designRules(design);
   const states: RegenStateResult[] = models.map((m) => {
     const zeroSegs = segments(m.dist);
     const zero = adhesions.map((k) => lockRow(m.loads, m.dist, k, rule, zeroSegs));
-    const rules = regenCurveRules(design, m.state.kind);
+    const rules = regenCurveRules(design, m.state.kind, selected);
     const memo: VerdictMemo = new Map();
     const checks = curveChecks(rules, verdictsAt(memo, rules, m.loads, m.dist, 0), null, 0);
     const zeroPassed = new Map(checks.map((c) => [c.rule, c.passed]));

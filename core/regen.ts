@@ -571,13 +571,10 @@ export function maxAllowedRegenForce(
   // A surface outside the rule's range is never judged: every force keeps it allowed.
   if (lockAllowed(rule, k, 'rear', 0)) return null;
   const hi = k * friction.P;
-  const sv = surfaceLockSolver(loads, friction, k, frontShare, blending);
-  const disallowedAt = (R: number) => {
-    const zR = sv.rate(2, R);
-    const zF = sv.rate(1, R);
-    return zR < loads.zLift && zR <= rule.z_to + 1e-12 && (zF >= loads.zLift || zF - zR >= SIMULTANEOUS_LOCK_DZ);
-  };
-  if (disallowedAt(0)) return 0;
+  const sv = new SurfaceLockSolver(loads, friction, k, frontShare, blending);
+  const zR0 = sv.rate(2, 0);
+  const zF0 = sv.rate(1, 0);
+  if (zR0 < loads.zLift && zR0 <= rule.z_to + 1e-12 && (zF0 >= loads.zLift || zF0 - zR0 >= SIMULTANEOUS_LOCK_DZ)) return 0;
   const cuts = sv.breakpoints(hi);
   for (let i = 0; i + 1 < cuts.length; i++) {
     const a = cuts[i]!;
@@ -630,69 +627,87 @@ function intersect(x: [number, number] | null, y: [number, number] | null): [num
   return up >= lo ? [lo, up] : null;
 }
 
-interface SurfaceLockSolver {
-  /** Braking rate at which axle 1 (front) or 2 (rear) first reaches k with regenerative force R (Infinity: never; may lie beyond lift-off). */
-  rate(axle: 1 | 2, R: number): number;
-  /** 0, the forces in (0, hi) where a lock rate changes its linear piece, and hi, ascending. */
-  breakpoints(hi: number): number[];
-}
+/**
+ * The lock rates of one surface as functions of the regenerative force (a class, so that its two functions are
+ * made once, not per surface).
+ */
+class SurfaceLockSolver {
+  private readonly P: number;
+  private readonly k: number;
+  private readonly segs: Segment[];
+  private readonly friction: Distribution;
+  /** z_J(R) = join · R; the friction rate at the join is zfJoin · R. */
+  private readonly join: number;
+  private readonly zfJoin: number;
+  /** Lock rates of the lower branch (index 1 front, 2 rear; Infinity: no lock). */
+  private readonly lowRate: number[];
+  /** G_i(z_f) = T_i,f − k(n0_i + n1_i z_f) on each friction segment; c_i the coefficient of R. */
+  private readonly n0: number[];
+  private readonly n1: number[];
+  private readonly c: number[];
 
-function surfaceLockSolver(loads: AxleLoadModel, friction: Distribution, k: number, s: number, blending: RegenBlendingSpec): SurfaceLockSolver {
-  const P = friction.P;
-  const chiP = loads.chi * P;
-  const segs = segments(friction);
-  const q = blending.type === 'fixed_proportion' ? blending.proportion : 0;
-  // z_J(R) = join · R; the friction rate at the join is zfJoin · R
-  const join = blending.type === 'regen_first' ? 1 / P : (1 + q) / (q * P);
-  const zfJoin = blending.type === 'regen_first' ? 0 : 1 / (q * P);
-  const lower: Distribution =
-    blending.type === 'regen_first'
-      ? { P, z: [0, 1], t1: [0, s * P], t2: [0, (1 - s) * P] }
-      : { P, z: friction.z.map((z) => z * (1 + q)), t1: friction.t1.map((t, j) => t + s * q * P * friction.z[j]!), t2: friction.t2.map((t, j) => t + (1 - s) * q * P * friction.z[j]!) };
-  const low = firstLock(loads, lower, k);
-  const lowRate = [Infinity, low.front_lock_braking_rate ?? Infinity, low.rear_lock_braking_rate ?? Infinity];
-  // G_i(z_f) = g0 + g1 z_f on each friction segment; c_i the coefficient of R
-  const n0 = [0, loads.P1, loads.P2];
-  const n1 = [0, chiP, -chiP];
-  const c = [0, s - k * loads.chi, 1 - s + k * loads.chi];
-  const rate = (axle: 1 | 2, R: number): number => {
-    const zL = lowRate[axle]!;
-    if (zL <= join * R) return zL;
-    const zfMin = zfJoin * R;
-    const level = c[axle]! * R;
+  constructor(loads: AxleLoadModel, friction: Distribution, k: number, s: number, blending: RegenBlendingSpec) {
+    const P = friction.P;
+    const chiP = loads.chi * P;
+    this.P = P;
+    this.k = k;
+    this.friction = friction;
+    this.segs = segments(friction);
+    const q = blending.type === 'fixed_proportion' ? blending.proportion : 0;
+    this.join = blending.type === 'regen_first' ? 1 / P : (1 + q) / (q * P);
+    this.zfJoin = blending.type === 'regen_first' ? 0 : 1 / (q * P);
+    const lower: Distribution =
+      blending.type === 'regen_first'
+        ? { P, z: [0, 1], t1: [0, s * P], t2: [0, (1 - s) * P] }
+        : { P, z: friction.z.map((z) => z * (1 + q)), t1: friction.t1.map((t, j) => t + s * q * P * friction.z[j]!), t2: friction.t2.map((t, j) => t + (1 - s) * q * P * friction.z[j]!) };
+    const low = firstLock(loads, lower, k);
+    this.lowRate = [Infinity, low.front_lock_braking_rate ?? Infinity, low.rear_lock_braking_rate ?? Infinity];
+    this.n0 = [0, loads.P1, loads.P2];
+    this.n1 = [0, chiP, -chiP];
+    this.c = [0, s - k * loads.chi, 1 - s + k * loads.chi];
+  }
+
+  /** Braking rate at which axle 1 (front) or 2 (rear) first reaches k with regenerative force R (Infinity: never; may lie beyond lift-off). */
+  rate(axle: 1 | 2, R: number): number {
+    const zL = this.lowRate[axle]!;
+    if (zL <= this.join * R) return zL;
+    const zfMin = this.zfJoin * R;
+    const level = this.c[axle]! * R;
+    const k = this.k;
     // not cut at lift-off (the caller compares with it), so that the rate stays linear on each piece
-    for (const sg of segs) {
+    for (const sg of this.segs) {
       if (sg.zTo < zfMin) continue;
       const from = Math.max(sg.zFrom, zfMin);
       const a = axle === 1 ? sg.a1 : sg.a2;
       const b = axle === 1 ? sg.b1 : sg.b2;
-      const g0 = a - k * n0[axle]! + level;
-      const g1 = b - k * n1[axle]!;
-      if (g0 + g1 * from >= 0) return from + R / P;
+      const g0 = a - k * this.n0[axle]! + level;
+      const g1 = b - k * this.n1[axle]!;
+      if (g0 + g1 * from >= 0) return from + R / this.P;
       if (g1 > 0) {
         const root = -g0 / g1;
-        if (root <= sg.zTo) return root + R / P;
+        if (root <= sg.zTo) return root + R / this.P;
       }
     }
     return Infinity;
-  };
-  const breakpoints = (hi: number): number[] => {
+  }
+
+  /** 0, the forces in (0, hi) where a lock rate changes its linear piece, and hi, ascending. */
+  breakpoints(hi: number): number[] {
     const out = [0, hi];
-    const add = (R: number) => {
-      if (R > 0 && R < hi) out.push(R);
-    };
+    const { friction, k, c, n0, n1 } = this;
     for (const axle of [1, 2] as const) {
-      if (Number.isFinite(lowRate[axle]!)) add(lowRate[axle]! / join);
+      const cuts: number[] = [];
+      if (Number.isFinite(this.lowRate[axle]!)) cuts.push(this.lowRate[axle]! / this.join);
       for (let j = 0; j < friction.z.length; j++) {
         const zf = friction.z[j]!;
         const G = (axle === 1 ? friction.t1[j]! : friction.t2[j]!) - k * (n0[axle]! + n1[axle]! * zf);
-        if (c[axle] !== 0) add(-G / c[axle]!);
-        if (zfJoin > 0) add(zf / zfJoin);
+        if (c[axle] !== 0) cuts.push(-G / c[axle]!);
+        if (this.zfJoin > 0) cuts.push(zf / this.zfJoin);
       }
+      for (const R of cuts) if (R > 0 && R < hi) out.push(R);
     }
     return out.sort((x, y) => x - y);
-  };
-  return { rate, breakpoints };
+  }
 }
 
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);

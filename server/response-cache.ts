@@ -58,7 +58,7 @@ export function chooseEncoding(accept: string | string[] | undefined, prefer: 'b
 }
 
 /** Default bound of a ResponseCache on the bytes it keeps (form texts, answers and their compressed bodies). */
-export const RESPONSE_CACHE_MAX_BYTES = 24 * 1024 * 1024;
+export const RESPONSE_CACHE_MAX_BYTES = 8 * 1024 * 1024;
 
 /** Bytes an entry holds: its form text (counted at two bytes a character, as the heap may keep it), the answer and its compressed bodies. */
 function entryBytes(e: Entry): number {
@@ -68,7 +68,7 @@ function entryBytes(e: Entry): number {
 }
 
 /**
- * Bounded twice: at most `capacity` entries and at most `maxBytes` bytes kept (entryBytes, the compressed bodies
+ * Bounded twice: at most `capacity` entries and at most `maxBytes` bytes kept (default 8 MB: about 60 recompute answers of the demo's size, the 200 entries of the recompute cache for smaller ones) (entryBytes, the compressed bodies
  * counted as they are added); the least recently used entries go first.
  */
 export class ResponseCache {

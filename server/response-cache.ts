@@ -68,8 +68,9 @@ function entryBytes(e: Entry): number {
 }
 
 /**
- * Bounded twice: at most `capacity` entries and at most `maxBytes` bytes kept (default 8 MB: about 60 recompute answers of the demo's size, the 200 entries of the recompute cache for smaller ones) (entryBytes, the compressed bodies
- * counted as they are added); the least recently used entries go first.
+ * Bounded twice: at most `capacity` entries and at most `maxBytes` bytes kept (entryBytes, the compressed bodies
+ * counted as they are added; by default 8 MB, about 60 recompute answers of the demo's size); the least recently
+ * used entries go first.
  */
 export class ResponseCache {
   private readonly entries = new Map<string, Entry>();

@@ -17,9 +17,10 @@ import { heatAnalysis } from '../core/brake-heat.ts';
 import { valveFailureModes } from '../core/valve-failure.ts';
 import { readDesign } from '../core/validate.ts';
 import { lockOrderRange } from '../core/lock-order-range.ts';
-import { maxAllowedRegenForce, regenSetup } from '../core/regen.ts';
-// the bisection the per-surface limits used before they were solved piecewise (kept as the reference)
-import { bisectAllowedRegenForce } from '../test/core/regen-limits-reference.ts';
+import { largestForcePassingChecks, maxAllowedRegenForce, regenCurveRules, regenSetup } from '../core/regen.ts';
+import { checkCurveRule } from '../core/checks/curve-check.ts';
+// the searches the regeneration limits used before they were solved piecewise (kept as the references)
+import { bisectAllowedRegenForce, scanFirstFailingForce } from '../test/core/regen-limits-reference.ts';
 
 /** Target for one full evaluation of the demo design, ms CPU. */
 const TARGET_MS = 0.5;
@@ -77,6 +78,12 @@ export function run(): void {
     const all = (solve: typeof maxAllowedRegenForce) => models.map((m) => adhesion.map((k) => solve(m.loads, m.dist, k, setup.frontShare, setup.blending, range)));
     console.log(`  regen limits, solved    ${f(measure(() => all(maxAllowedRegenForce), 15))}  (every surface and load state)`);
     console.log(`  the same by bisection   ${f(measure(() => all((...a) => bisectAllowedRegenForce(...a, 0.5)), 15))}  (the former search, to 0.5 N)`);
+    const keep = models.map((m) => regenCurveRules(design, m.state.kind).filter((rule) => checkCurveRule(rule, m.loads, m.dist).passed));
+    const solved = measure(() => models.map((m, i) => largestForcePassingChecks(keep[i]!, m.loads, m.dist, setup)), 15);
+    // one scan step: the plain bisection on [0, full force] the analysis used before (a boundary, not always the first)
+    const bisected = measure(() => models.map((m, i) => scanFirstFailingForce(keep[i]!, m.loads, m.dist, setup.frontShare, setup.blending, setup.maxForce, 1, 0.5)), 15);
+    console.log(`  force passing checks    ${f(solved)}  (solved: every load state)`);
+    console.log(`  the same by bisection   ${f(bisected)}  (the former search, to 0.5 N)`);
   }
   // Judged on the median; the lowest sample shows what the code costs when the machine is quiet.
   const median = full.medianUs / 1000;

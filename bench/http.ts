@@ -106,6 +106,11 @@ interface ChildReport {
   /** Resident memory now and the largest seen since the last report (sampled every 100 ms), bytes. */
   rss: number;
   maxRss: number;
+  /** V8 heap in use and memory outside it (Buffers), bytes; the recompute cache's entries and bytes. */
+  heapUsed: number;
+  external: number;
+  cacheEntries: number;
+  cacheBytes: number;
 }
 
 /** The server in a child process: prints nothing, answers the parent's questions over IPC. */
@@ -118,7 +123,18 @@ async function serveChild(): Promise<void> {
   process.on('message', (m: string) => {
     if (m === 'report') {
       const rss = process.memoryUsage.rss();
-      send({ cpu: process.cpuUsage(), hits: answers.hits, misses: answers.misses, rss, maxRss: Math.max(maxRss, rss) } satisfies ChildReport);
+      const mem = process.memoryUsage();
+      send({
+        cpu: process.cpuUsage(),
+        hits: answers.hits,
+        misses: answers.misses,
+        rss,
+        maxRss: Math.max(maxRss, rss),
+        heapUsed: mem.heapUsed,
+        external: mem.external,
+        cacheEntries: answers.size,
+        cacheBytes: answers.bytes,
+      } satisfies ChildReport);
       maxRss = rss;
     }
     if (m === 'close') void app.close().then(() => process.exit(0));
@@ -224,7 +240,10 @@ export async function run(): Promise<void> {
       console.log(
         `  responses   ${result.requests.total} total, ${bad} not 2xx or failed (non-2xx ${result.non2xx}, errors ${result.errors}, timeouts ${result.timeouts}), ${kb(result.throughput.average)}/s`,
       );
-      console.log(`  server RSS  ${mb(after.rss)} after, largest ${mb(after.maxRss)} during`);
+      console.log(
+        `  server RSS  ${mb(after.rss)} after, largest ${mb(after.maxRss)} during; heap in use ${mb(after.heapUsed)}, outside the heap ${mb(after.external)}; ` +
+          `recompute cache ${after.cacheEntries} of ${answers.capacity} entries, ${mb(after.cacheBytes)} of ${mb(answers.maxBytes)}`,
+      );
     };
     const post = { url: `${base}/workbench/update`, method: 'POST' as const, headers, body: form };
     // (a) the same form again and again (a re-sent unchanged form)

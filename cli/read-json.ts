@@ -9,23 +9,28 @@ import { cliErrors, MAX_INPUT_BYTES } from './errors.ts';
 
 const CHUNK = 64 * 1024;
 
-/** Reads up to `cap + 1` bytes of an open file; waits (briefly, repeatedly) while a non-blocking pipe is empty. */
+/**
+ * Reads up to `cap + 1` bytes of an open file; waits (briefly, repeatedly) while a non-blocking pipe is empty. Reads
+ * chunk by chunk, so that a small file costs a small buffer (not one of the cap's size, zeroed, per file).
+ */
 function readCapped(fd: number, cap: number): Buffer {
-  const buf = Buffer.alloc(cap + 1);
+  const chunks: Buffer[] = [];
   let n = 0;
-  while (n < buf.length) {
+  while (n < cap + 1) {
+    const chunk = Buffer.allocUnsafe(Math.min(CHUNK, cap + 1 - n));
     let got: number;
     try {
-      got = readSync(fd, buf, n, Math.min(CHUNK, buf.length - n), null);
+      got = readSync(fd, chunk, 0, chunk.length, null);
     } catch (e) {
       if ((e as NodeJS.ErrnoException).code !== 'EAGAIN') throw e;
       Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, 10);
       continue;
     }
     if (got === 0) break;
+    chunks.push(got === chunk.length ? chunk : chunk.subarray(0, got));
     n += got;
   }
-  return buf.subarray(0, n);
+  return Buffer.concat(chunks, n);
 }
 
 export function readJsonFile(file: string): unknown {

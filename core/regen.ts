@@ -19,16 +19,16 @@
  */
 import type { AxleLoadModel } from './axle-loads.ts';
 import { VERIFY_NOTE } from './caution.ts';
-import { checkCurveRule, type CurveVerdict, curveRulePasses } from './checks/curve-check.ts';
-import { ruleSelection } from './checks/run-checks.ts';
+import { checkCurveRule, type CurveVerdict, curveRulePasses, MARGIN_TOLERANCE, type MarginForm, pieceClauses } from './checks/curve-check.ts';
+import { polyRootsInto } from './checks/polynomial.ts';
+import { designRules } from './checks/selection.ts';
 import { crossings } from './crossings.ts';
 import type { DesignFile, Regen } from './design.ts';
 import { type Distribution, forcesAlong, forcesAt, type Segment, segments } from './distribution.ts';
 import { firstLock } from './lock-order.ts';
 import { SIMULTANEOUS_LOCK_DZ } from './constants.ts';
 import { lockAllowed, type LockOrderRange, lockOrderRange } from './lock-order-range.ts';
-import { type CurveRule, type RuleStatus } from './rules/index.ts';
-import { selectDesignRules } from './rules/light-n1.ts';
+import { type CurveRule, type RuleStatus, type SelectedRule } from './rules/index.ts';
 import type { StateModel } from './state-model.ts';
 
 /** Defaults for the optional keys (engineering choices, documented in docs/design-file.md). */
@@ -221,14 +221,14 @@ export interface RegenStateResult {
   /** The selected curve rules (lock order, efficiency) with zero regeneration and at each speed. */
   checks: RegenCurveCheck[];
   /**
-   * Largest regenerative force (N) with which every selected curve rule that passes without regeneration
-   * still passes, found by bisection up to the system's constant-torque force; null when the full force
-   * passes or when there is no such rule (see `max_force_basis`).
+   * Largest regenerative force (N) up to which every selected curve rule that passes without regeneration
+   * still passes (at every force from zero to it), solved exactly up to the system's constant-torque force;
+   * null when the full force passes or when there is no such rule (see `max_force_basis`).
    */
   max_force_passing_checks_n: number | null;
   /** Rules left out of that search because they fail without regeneration already. */
   failing_without_regen: string[];
-  max_force_basis: 'full_force_passes' | 'bisection' | 'no_rule_to_keep';
+  max_force_basis: 'full_force_passes' | 'solved' | 'no_rule_to_keep';
 }
 
 export interface RegenFlag {
@@ -270,9 +270,9 @@ export interface RegenResult {
 }
 
 /** The curve rules of the design's rule selection that cover its category and this load-state kind. */
-export function regenCurveRules(design: DesignFile, kind: string): CurveRule[] {
+export function regenCurveRules(design: DesignFile, kind: string, selected: readonly SelectedRule[] = designRules(design)): CurveRule[] {
   const out: CurveRule[] = [];
-  for (const { rule, covers_category } of selectDesignRules(ruleSelection(design), design)) {
+  for (const { rule, covers_category } of selected) {
     if (!covers_category || rule.kind !== 'curve') continue;
     if (rule.load_states !== 'all' && !(rule.load_states as readonly string[]).includes(kind)) continue;
     out.push(rule);
@@ -319,24 +319,218 @@ function maxForcePassing(
   memo: VerdictMemo,
 ): { force: number | null; basis: RegenStateResult['max_force_basis'] } {
   if (rules.length === 0) return { force: null, basis: 'no_rule_to_keep' };
-  if (rulesPassWith(rules, loads, friction, setup, memo, setup.maxForce)) return { force: null, basis: 'full_force_passes' };
-  let lo = 0;
-  let up = setup.maxForce;
-  for (let i = 0; i < 60 && up - lo > REGEN_FORCE_TOLERANCE_N; i++) {
-    const mid = (lo + up) / 2;
-    if (rulesPassWith(rules, loads, friction, setup, memo, mid)) lo = mid;
-    else up = mid;
-  }
-  return { force: lo, basis: 'bisection' };
+  const force = firstFailingForce(rules, loads, friction, setup, memo);
+  return force === null ? { force: null, basis: 'full_force_passes' } : { force, basis: 'solved' };
 }
 
 /** Whether every rule passes with regenerative force R (the verdicts already found are reused). */
 function rulesPassWith(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup, memo: VerdictMemo, R: number): boolean {
   const known = memo.get(R);
-  if (known) return rules.every((rule) => known.get(rule)!.passed);
+  if (known) {
+    for (const rule of rules) if (!known.get(rule)!.passed) return false;
+    return true;
+  }
   const d = regenDistribution(friction, R, setup.frontShare, setup.blending);
   const segs = segments(d);
-  return rules.every((rule) => curveRulePasses(rule, loads, d, segs));
+  for (const rule of rules) if (!curveRulePasses(rule, loads, d, segs)) return false;
+  return true;
+}
+
+/**
+ * One linear piece of the distribution with regenerative force R, as a function of z and R together:
+ * T_i = a_i + b_i z + c_i R for z between the largest of the lower bounds and the smallest of the upper bounds,
+ * each bound z = e0 + e1 R (flattened pairs).
+ */
+interface RegenCell {
+  a1: number;
+  b1: number;
+  c1: number;
+  a2: number;
+  b2: number;
+  c2: number;
+  lo: number[];
+  hi: number[];
+}
+
+/**
+ * The cells of regenDistribution(friction, R, s, blending) for every R ≥ 0. Above the join the friction
+ * distribution is shifted by R: at friction rate z_f = z − R/P, T_i = T_i,f(z_f) + s_i R, so on friction segment
+ * T_i,f = a_i + b_i z_f the cell is (a_i, b_i, s_i − b_i/P) between z_from + R/P and z_to + R/P (and, for
+ * fixed_proportion, above the cap z = R(1 + q)/(qP)). Below it the force does not depend on R: pure
+ * regeneration T_i = s_i P z up to R/P (regen_first), or the friction with q·T_friction added, z = (1 + q) z_f,
+ * up to the cap (fixed_proportion).
+ */
+function regenCells(friction: Distribution, s: number, blending: RegenBlendingSpec): RegenCell[] {
+  const P = friction.P;
+  const out: RegenCell[] = [];
+  const segs = segments(friction);
+  if (blending.type === 'regen_first') {
+    out.push({ a1: 0, b1: s * P, c1: 0, a2: 0, b2: (1 - s) * P, c2: 0, lo: [0, 0], hi: [0, 1 / P] });
+  } else {
+    const q = blending.proportion;
+    const cap = (1 + q) / (q * P);
+    for (const sg of segs) {
+      const hi = [0, cap];
+      if (Number.isFinite(sg.zTo)) hi.push((1 + q) * sg.zTo, 0);
+      out.push({ a1: sg.a1, b1: (sg.b1 + s * q * P) / (1 + q), c1: 0, a2: sg.a2, b2: (sg.b2 + (1 - s) * q * P) / (1 + q), c2: 0, lo: [(1 + q) * sg.zFrom, 0], hi });
+    }
+  }
+  for (const sg of segs) {
+    const lo = [sg.zFrom, 1 / P];
+    if (blending.type === 'fixed_proportion') lo.push(0, (1 + blending.proportion) / (blending.proportion * P));
+    const hi = Number.isFinite(sg.zTo) ? [sg.zTo, 1 / P] : [];
+    out.push({ a1: sg.a1, b1: sg.b1, c1: s - sg.b1 / P, a2: sg.a2, b2: sg.b2, c2: 1 - s - sg.b2 / P, lo, hi });
+  }
+  return out;
+}
+
+/** Whether (z, R) lies in the cell (to a relative 1e-9). */
+function inCell(cell: RegenCell, z: number, R: number): boolean {
+  const eps = 1e-9 * Math.max(1, Math.abs(z));
+  for (let i = 0; i < cell.lo.length; i += 2) if (cell.lo[i]! + cell.lo[i + 1]! * R > z + eps) return false;
+  for (let i = 0; i < cell.hi.length; i += 2) if (cell.hi[i]! + cell.hi[i + 1]! * R < z - eps) return false;
+  return true;
+}
+
+// Work space of the event search: polynomial coefficients in z or R (ascending) and their roots.
+const evA = new Float64Array(4);
+const evB = new Float64Array(2);
+const evA2 = new Float64Array(4);
+const evB2 = new Float64Array(2);
+const evPoly = new Float64Array(6);
+const evRoots = new Float64Array(6);
+
+/**
+ * m·N1·N2 of a margin form on a cell as pA(z) + R·pB(z) (pA cubic, pB linear; the tolerance added to α, so that
+ * the zero is where the check's verdict turns): (α + βz) N1 N2 + γ1 (a1 + b1 z) N2 + γ2 (a2 + b2 z) N1 and
+ * γ1 c1 N2 + γ2 c2 N1, with N1 = P1 + χP z, N2 = P2 − χP z.
+ */
+function cellForm(f: MarginForm, loads: AxleLoadModel, cell: RegenCell, pA: Float64Array, pB: Float64Array): void {
+  const n10 = loads.P1;
+  const n11 = loads.chi * loads.P;
+  const n20 = loads.P2;
+  const n21 = -n11;
+  const alpha = f.alpha + MARGIN_TOLERANCE;
+  pA[0] = alpha * n10 * n20 + f.g1 * cell.a1 * n20 + f.g2 * cell.a2 * n10;
+  pA[1] = alpha * (n10 * n21 + n11 * n20) + f.beta * n10 * n20 + f.g1 * (cell.a1 * n21 + cell.b1 * n20) + f.g2 * (cell.a2 * n11 + cell.b2 * n10);
+  pA[2] = alpha * n11 * n21 + f.beta * (n10 * n21 + n11 * n20) + f.g1 * cell.b1 * n21 + f.g2 * cell.b2 * n11;
+  pA[3] = f.beta * n11 * n21;
+  pB[0] = f.g1 * cell.c1 * n20 + f.g2 * cell.c2 * n10;
+  pB[1] = f.g1 * cell.c1 * n21 + f.g2 * cell.c2 * n11;
+}
+
+function cubicAt(p: Float64Array, z: number): number {
+  return p[0]! + z * (p[1]! + z * (p[2]! + z * p[3]!));
+}
+
+/** Keeps R as a turn when it lies in (0, rMax) and (z, R) in the cell and the piece [zA, zB]. */
+function addTurn(out: number[], rMax: number, cell: RegenCell, z: number, R: number, zA: number, zB: number): void {
+  if (R > 0 && R < rMax && z >= zA - 1e-12 && z <= zB + 1e-12 && inCell(cell, z, R)) out.push(R);
+}
+
+/** The turns where the zero curve of the form in evA/evB meets the bound z = e0 + e1 R: pA(e0 + e1 R) + R·pB(e0 + e1 R) = 0 (cubic in R). */
+function boundTurns(out: number[], rMax: number, cell: RegenCell, e0: number, e1: number, zA: number, zB: number): void {
+  // pA(e0 + e1 R) by Taylor shift, plus R·pB(e0 + e1 R)
+  const d0 = cubicAt(evA, e0);
+  const d1 = evA[1]! + e0 * (2 * evA[2]! + 3 * e0 * evA[3]!);
+  const d2 = evA[2]! + 3 * e0 * evA[3]!;
+  const b0 = evB[0]! + evB[1]! * e0;
+  evPoly[0] = d0;
+  evPoly[1] = d1 * e1 + b0;
+  evPoly[2] = d2 * e1 * e1 + evB[1]! * e1;
+  evPoly[3] = evA[3]! * e1 * e1 * e1;
+  for (let k = 0, n = polyRootsInto(evPoly, 4, 0, rMax, evRoots); k < n; k++) addTurn(out, rMax, cell, e0 + e1 * evRoots[k]!, evRoots[k]!, zA, zB);
+}
+
+/**
+ * The forces in (0, rMax) where a curve rule's verdict can turn, for the largest force passing the checks. For
+ * a fixed z each margin form is affine in R on a cell (T_i = a_i + b_i z + c_i R, the axle loads do not depend
+ * on R), so the forces where it fails first are bounded by its zero curve R = −pA(z)/pB(z). The first force at
+ * which the failing set of a clause (every alternative below zero) appears is a lowest point of its boundary:
+ * where a zero curve is level (pA′pB − pA pB′ = 0, cubic in z), where two alternatives' zero curves meet
+ * (pA_f pB_g − pA_g pB_f = 0, quartic), or where a zero curve meets a cell bound or a piece end
+ * (z = e0 + e1 R put in pA + R pB: cubic in R). Each root is kept when it lies in its cell and piece.
+ */
+function verdictTurns(rule: CurveRule, loads: AxleLoadModel, cells: readonly RegenCell[], rMax: number, out: number[]): void {
+  const zTop = loads.zLift * (1 - 1e-9);
+  for (const branch of rule.branches) {
+    // a branch with a piece beyond lift-off fails at every force: it never turns the verdict
+    if (branch.pieces.some((pc) => pc.z[1] > zTop)) continue;
+    for (const piece of branch.pieces) {
+      const zA = piece.z[0];
+      const zB = Math.min(piece.z[1], zTop);
+      if (zB < zA) continue;
+      const clauses = pieceClauses(piece);
+      for (const cell of cells) {
+        // the cell's z range over 0 ≤ R ≤ rMax (within: each bound at its own extreme) must meet the piece
+        let lo = -Infinity;
+        for (let i = 0; i < cell.lo.length; i += 2) lo = Math.max(lo, Math.min(cell.lo[i]!, cell.lo[i]! + cell.lo[i + 1]! * rMax));
+        let hi = Infinity;
+        for (let i = 0; i < cell.hi.length; i += 2) hi = Math.min(hi, Math.max(cell.hi[i]!, cell.hi[i]! + cell.hi[i + 1]! * rMax));
+        if (lo > zB || hi < zA) continue;
+        for (const clause of clauses) {
+          for (let fi = 0; fi < clause.length; fi++) {
+            cellForm(clause[fi]!, loads, cell, evA, evB);
+            // level points of the zero curve: pA′ pB − pA pB′
+            evPoly[0] = evA[1]! * evB[0]! - evA[0]! * evB[1]!;
+            evPoly[1] = 2 * evA[2]! * evB[0]! + evA[1]! * evB[1]! - evA[1]! * evB[1]!;
+            evPoly[2] = 3 * evA[3]! * evB[0]! + 2 * evA[2]! * evB[1]! - evA[2]! * evB[1]!;
+            evPoly[3] = 3 * evA[3]! * evB[1]! - evA[3]! * evB[1]!;
+            for (let k = 0, n = polyRootsInto(evPoly, 4, zA, zB, evRoots); k < n; k++) {
+              const z = evRoots[k]!;
+              const b = evB[0]! + evB[1]! * z;
+              if (b !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA, z) / b, zA, zB);
+            }
+            // where the zero curve meets a bound z = e0 + e1 R of the cell or a piece end
+            for (let i = 0; i < cell.lo.length; i += 2) boundTurns(out, rMax, cell, cell.lo[i]!, cell.lo[i + 1]!, zA, zB);
+            for (let i = 0; i < cell.hi.length; i += 2) boundTurns(out, rMax, cell, cell.hi[i]!, cell.hi[i + 1]!, zA, zB);
+            boundTurns(out, rMax, cell, zA, 0, zA, zB);
+            boundTurns(out, rMax, cell, zB, 0, zA, zB);
+            // where two alternatives of the clause are zero together: pA_f pB_g − pA_g pB_f (quartic in z)
+            for (let gi = fi + 1; gi < clause.length; gi++) {
+              cellForm(clause[gi]!, loads, cell, evA2, evB2);
+              for (let k = 0; k < 5; k++) evPoly[k] = 0;
+              for (let i = 0; i < 4; i++) {
+                for (let j = 0; j < 2; j++) evPoly[i + j]! += evA[i]! * evB2[j]! - evA2[i]! * evB[j]!;
+              }
+              for (let k = 0, n = polyRootsInto(evPoly, 5, zA, zB, evRoots); k < n; k++) {
+                const z = evRoots[k]!;
+                const b = evB[0]! + evB[1]! * z;
+                const b2 = evB2[0]! + evB2[1]! * z;
+                if (b !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA, z) / b, zA, zB);
+                else if (b2 !== 0) addTurn(out, rMax, cell, z, -cubicAt(evA2, z) / b2, zA, zB);
+              }
+            }
+          }
+        }
+      }
+    }
+  }
+}
+
+/** firstFailingForce for the rules given (each passing without regeneration), with no verdicts known yet. */
+export function largestForcePassingChecks(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup): number | null {
+  return firstFailingForce(rules, loads, friction, setup, new Map());
+}
+
+/**
+ * The largest force R such that every rule passes at every force from 0 to R (the rules pass at 0), null when
+ * they pass at every force up to the full one. The verdicts can turn only at the forces verdictTurns finds, so between two neighbouring ones a
+ * single check decides: the answer is the lower end of the first stretch that fails.
+ */
+function firstFailingForce(rules: readonly CurveRule[], loads: AxleLoadModel, friction: Distribution, setup: RegenSetup, memo: VerdictMemo): number | null {
+  const cells = regenCells(friction, setup.frontShare, setup.blending);
+  const turns: number[] = [0];
+  for (const rule of rules) verdictTurns(rule, loads, cells, setup.maxForce, turns);
+  turns.push(setup.maxForce);
+  turns.sort((x, y) => x - y);
+  for (let i = 0; i + 1 < turns.length; i++) {
+    const a = turns[i]!;
+    const b = turns[i + 1]!;
+    if (b - a <= 1e-9 * Math.max(1, b)) continue;
+    if (!rulesPassWith(rules, loads, friction, setup, memo, 0.5 * (a + b))) return a;
+  }
+  return rulesPassWith(rules, loads, friction, setup, memo, setup.maxForce) ? null : setup.maxForce;
 }
 
 function lockRow(loads: AxleLoadModel, d: Distribution, k: number, rule: LockOrderRange, segs: readonly Segment[] = segments(d)): RegenLock {
@@ -377,13 +571,10 @@ export function maxAllowedRegenForce(
   // A surface outside the rule's range is never judged: every force keeps it allowed.
   if (lockAllowed(rule, k, 'rear', 0)) return null;
   const hi = k * friction.P;
-  const sv = surfaceLockSolver(loads, friction, k, frontShare, blending);
-  const disallowedAt = (R: number) => {
-    const zR = sv.rate(2, R);
-    const zF = sv.rate(1, R);
-    return zR < loads.zLift && zR <= rule.z_to + 1e-12 && (zF >= loads.zLift || zF - zR >= SIMULTANEOUS_LOCK_DZ);
-  };
-  if (disallowedAt(0)) return 0;
+  const sv = new SurfaceLockSolver(loads, friction, k, frontShare, blending);
+  const zR0 = sv.rate(2, 0);
+  const zF0 = sv.rate(1, 0);
+  if (zR0 < loads.zLift && zR0 <= rule.z_to + 1e-12 && (zF0 >= loads.zLift || zF0 - zR0 >= SIMULTANEOUS_LOCK_DZ)) return 0;
   const cuts = sv.breakpoints(hi);
   for (let i = 0; i + 1 < cuts.length; i++) {
     const a = cuts[i]!;
@@ -436,73 +627,88 @@ function intersect(x: [number, number] | null, y: [number, number] | null): [num
   return up >= lo ? [lo, up] : null;
 }
 
-interface SurfaceLockSolver {
-  /** Braking rate at which axle 1 (front) or 2 (rear) first reaches k with regenerative force R (Infinity: never; may lie beyond lift-off). */
-  rate(axle: 1 | 2, R: number): number;
-  /** 0, the forces in (0, hi) where a lock rate changes its linear piece, and hi, ascending. */
-  breakpoints(hi: number): number[];
-}
+/**
+ * The lock rates of one surface as functions of the regenerative force (a class, so that its two functions are
+ * made once, not per surface).
+ */
+class SurfaceLockSolver {
+  private readonly P: number;
+  private readonly k: number;
+  private readonly segs: Segment[];
+  private readonly friction: Distribution;
+  /** z_J(R) = join · R; the friction rate at the join is zfJoin · R. */
+  private readonly join: number;
+  private readonly zfJoin: number;
+  /** Lock rates of the lower branch (index 1 front, 2 rear; Infinity: no lock). */
+  private readonly lowRate: number[];
+  /** G_i(z_f) = T_i,f − k(n0_i + n1_i z_f) on each friction segment; c_i the coefficient of R. */
+  private readonly n0: number[];
+  private readonly n1: number[];
+  private readonly c: number[];
 
-function surfaceLockSolver(loads: AxleLoadModel, friction: Distribution, k: number, s: number, blending: RegenBlendingSpec): SurfaceLockSolver {
-  const P = friction.P;
-  const chiP = loads.chi * P;
-  const segs = segments(friction);
-  const q = blending.type === 'fixed_proportion' ? blending.proportion : 0;
-  // z_J(R) = join · R; the friction rate at the join is zfJoin · R
-  const join = blending.type === 'regen_first' ? 1 / P : (1 + q) / (q * P);
-  const zfJoin = blending.type === 'regen_first' ? 0 : 1 / (q * P);
-  const lower: Distribution =
-    blending.type === 'regen_first'
-      ? { P, z: [0, 1], t1: [0, s * P], t2: [0, (1 - s) * P] }
-      : { P, z: friction.z.map((z) => z * (1 + q)), t1: friction.t1.map((t, j) => t + s * q * P * friction.z[j]!), t2: friction.t2.map((t, j) => t + (1 - s) * q * P * friction.z[j]!) };
-  const low = firstLock(loads, lower, k);
-  const lowRate = [Infinity, low.front_lock_braking_rate ?? Infinity, low.rear_lock_braking_rate ?? Infinity];
-  // G_i(z_f) = g0 + g1 z_f on each friction segment; c_i the coefficient of R
-  const n0 = [0, loads.P1, loads.P2];
-  const n1 = [0, chiP, -chiP];
-  const c = [0, s - k * loads.chi, 1 - s + k * loads.chi];
-  const rate = (axle: 1 | 2, R: number): number => {
-    const zL = lowRate[axle]!;
-    if (zL <= join * R) return zL;
-    const zfMin = zfJoin * R;
-    const level = c[axle]! * R;
+  constructor(loads: AxleLoadModel, friction: Distribution, k: number, s: number, blending: RegenBlendingSpec) {
+    const P = friction.P;
+    const chiP = loads.chi * P;
+    this.P = P;
+    this.k = k;
+    this.friction = friction;
+    this.segs = segments(friction);
+    const q = blending.type === 'fixed_proportion' ? blending.proportion : 0;
+    this.join = blending.type === 'regen_first' ? 1 / P : (1 + q) / (q * P);
+    this.zfJoin = blending.type === 'regen_first' ? 0 : 1 / (q * P);
+    const lower: Distribution =
+      blending.type === 'regen_first'
+        ? { P, z: [0, 1], t1: [0, s * P], t2: [0, (1 - s) * P] }
+        : { P, z: friction.z.map((z) => z * (1 + q)), t1: friction.t1.map((t, j) => t + s * q * P * friction.z[j]!), t2: friction.t2.map((t, j) => t + (1 - s) * q * P * friction.z[j]!) };
+    const low = firstLock(loads, lower, k);
+    this.lowRate = [Infinity, low.front_lock_braking_rate ?? Infinity, low.rear_lock_braking_rate ?? Infinity];
+    this.n0 = [0, loads.P1, loads.P2];
+    this.n1 = [0, chiP, -chiP];
+    this.c = [0, s - k * loads.chi, 1 - s + k * loads.chi];
+  }
+
+  /** Braking rate at which axle 1 (front) or 2 (rear) first reaches k with regenerative force R (Infinity: never; may lie beyond lift-off). */
+  rate(axle: 1 | 2, R: number): number {
+    const zL = this.lowRate[axle]!;
+    if (zL <= this.join * R) return zL;
+    const zfMin = this.zfJoin * R;
+    const level = this.c[axle]! * R;
+    const k = this.k;
     // not cut at lift-off (the caller compares with it), so that the rate stays linear on each piece
-    for (const sg of segs) {
+    for (const sg of this.segs) {
       if (sg.zTo < zfMin) continue;
       const from = Math.max(sg.zFrom, zfMin);
       const a = axle === 1 ? sg.a1 : sg.a2;
       const b = axle === 1 ? sg.b1 : sg.b2;
-      const g0 = a - k * n0[axle]! + level;
-      const g1 = b - k * n1[axle]!;
-      if (g0 + g1 * from >= 0) return from + R / P;
+      const g0 = a - k * this.n0[axle]! + level;
+      const g1 = b - k * this.n1[axle]!;
+      if (g0 + g1 * from >= 0) return from + R / this.P;
       if (g1 > 0) {
         const root = -g0 / g1;
-        if (root <= sg.zTo) return root + R / P;
+        if (root <= sg.zTo) return root + R / this.P;
       }
     }
     return Infinity;
-  };
-  const breakpoints = (hi: number): number[] => {
+  }
+
+  /** 0, the forces in (0, hi) where a lock rate changes its linear piece, and hi, ascending. */
+  breakpoints(hi: number): number[] {
     const out = [0, hi];
-    const add = (R: number) => {
-      if (R > 0 && R < hi) out.push(R);
-    };
+    const { friction, k, c, n0, n1 } = this;
     for (const axle of [1, 2] as const) {
-      if (Number.isFinite(lowRate[axle]!)) add(lowRate[axle]! / join);
+      const cuts: number[] = [];
+      if (Number.isFinite(this.lowRate[axle]!)) cuts.push(this.lowRate[axle]! / this.join);
       for (let j = 0; j < friction.z.length; j++) {
         const zf = friction.z[j]!;
         const G = (axle === 1 ? friction.t1[j]! : friction.t2[j]!) - k * (n0[axle]! + n1[axle]! * zf);
-        if (c[axle] !== 0) add(-G / c[axle]!);
-        if (zfJoin > 0) add(zf / zfJoin);
+        if (c[axle] !== 0) cuts.push(-G / c[axle]!);
+        if (this.zfJoin > 0) cuts.push(zf / this.zfJoin);
       }
+      for (const R of cuts) if (R > 0 && R < hi) out.push(R);
     }
     return out.sort((x, y) => x - y);
-  };
-  return { rate, breakpoints };
+  }
 }
-
-/** The bisection for the largest force passing the curve rules stops within this, N (far below what a controller resolves). */
-export const REGEN_FORCE_TOLERANCE_N = 0.5;
 
 const UTIL_AT = Array.from({ length: 50 }, (_, i) => Math.round((i + 1) * 0.02 * 1e9) / 1e9);
 
@@ -521,10 +727,11 @@ export function regenAnalysis(design: DesignFile, models: readonly StateModel[],
   const setup = regenSetup(design, r);
   const rule = lockOrderRange(design.vehicle.category);
   const flags: RegenFlag[] = [];
+  const selected = designRules(design);
   const states: RegenStateResult[] = models.map((m) => {
     const zeroSegs = segments(m.dist);
     const zero = adhesions.map((k) => lockRow(m.loads, m.dist, k, rule, zeroSegs));
-    const rules = regenCurveRules(design, m.state.kind);
+    const rules = regenCurveRules(design, m.state.kind, selected);
     const memo: VerdictMemo = new Map();
     const checks = curveChecks(rules, verdictsAt(memo, rules, m.loads, m.dist, 0), null, 0);
     const zeroPassed = new Map(checks.map((c) => [c.rule, c.passed]));

@@ -28,6 +28,9 @@ interface Entry {
   source: string;
   utf8: Buffer;
   encoded: Map<'br' | 'gzip', Buffer>;
+  /** The cache that keeps it and the key it is kept under (its byte count grows when a compressed body is added). */
+  cache: ResponseCache;
+  key: string;
 }
 
 export type Answer = { status: number; body: SafeHtml; entry?: undefined } | { status: number; body?: undefined; entry: Entry };
@@ -54,12 +57,36 @@ export function chooseEncoding(accept: string | string[] | undefined, prefer: 'b
   return null;
 }
 
+/** Default bound of a ResponseCache on the bytes it keeps (form texts, answers and their compressed bodies). */
+export const RESPONSE_CACHE_MAX_BYTES = 8 * 1024 * 1024;
+
+/** Bytes an entry holds: its form text (counted at two bytes a character, as the heap may keep it), the answer and its compressed bodies. */
+function entryBytes(e: Entry): number {
+  let n = 2 * e.source.length + e.utf8.length;
+  for (const b of e.encoded.values()) n += b.length;
+  return n;
+}
+
+/**
+ * Bounded twice: at most `capacity` entries and at most `maxBytes` bytes kept (entryBytes, the compressed bodies
+ * counted as they are added; by default 8 MB, about 60 recompute answers of the demo's size); the least recently
+ * used entries go first.
+ */
 export class ResponseCache {
   private readonly entries = new Map<string, Entry>();
+  private kept = 0;
   hits = 0;
   misses = 0;
 
-  constructor(readonly capacity = 200) {}
+  constructor(
+    readonly capacity = 200,
+    readonly maxBytes = RESPONSE_CACHE_MAX_BYTES,
+  ) {}
+
+  /** Bytes kept now (entryBytes summed). */
+  get bytes(): number {
+    return this.kept;
+  }
 
   get size(): number {
     return this.entries.size;
@@ -79,15 +106,40 @@ export class ResponseCache {
     this.misses++;
     const made = make();
     if (!keep(made)) return made;
-    const entry: Entry = { status: made.status, source, utf8: Buffer.from(made.body.html, 'utf8'), encoded: new Map() };
-    this.entries.delete(key);
-    if (this.entries.size >= this.capacity) this.entries.delete(this.entries.keys().next().value!);
+    const entry: Entry = { status: made.status, source, utf8: Buffer.from(made.body.html, 'utf8'), encoded: new Map(), cache: this, key };
+    if (hit) this.remove(key, hit);
     this.entries.set(key, entry);
+    this.grow(entryBytes(entry));
+    while (this.entries.size > this.capacity) this.evictOldest();
     return { status: made.status, entry };
+  }
+
+  /** Counts bytes added to an entry (a compressed body) while it is kept, and evicts the oldest entries while over the bound. */
+  added(entry: Entry, bytes: number): void {
+    if (this.entries.get(entry.key) !== entry) return; // evicted meanwhile: nothing of it is kept
+    this.grow(bytes);
+  }
+
+  private grow(bytes: number): void {
+    this.kept += bytes;
+    // the newest entry stays even when it alone is over the bound (it is being answered)
+    while (this.kept > this.maxBytes && this.entries.size > 1) this.evictOldest();
+  }
+
+  private evictOldest(): void {
+    const key = this.entries.keys().next().value!;
+    this.remove(key, this.entries.get(key)!);
+  }
+
+  private remove(key: string, e: Entry): void {
+    if (this.entries.get(key) !== e) return;
+    this.entries.delete(key);
+    this.kept -= entryBytes(e);
   }
 
   clear(): void {
     this.entries.clear();
+    this.kept = 0;
   }
 }
 
@@ -105,6 +157,7 @@ export function sendCached(req: FastifyRequest, reply: FastifyReply, a: Answer):
   if (!buf) {
     buf = encoding === 'br' ? brotliCompressSync(a.entry.utf8, { params: { [constants.BROTLI_PARAM_QUALITY]: 1 } }) : gzipSync(a.entry.utf8, { level: 1 });
     a.entry.encoded.set(encoding, buf);
+    a.entry.cache.added(a.entry, buf.length);
   }
   return sendKeptHtml(reply.header('content-encoding', encoding).header('content-length', buf.length), buf, a.status);
 }

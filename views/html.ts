@@ -19,9 +19,23 @@ export type HtmlValue = SafeHtml | string | number | boolean | null | undefined 
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
+const NEEDS_ESCAPE = /[&<>"']/;
+
 /** Escapes text for element content and quoted attribute values. */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
+  // most texts (numbers, labels, units) need nothing: tested once, returned as they are
+  if (!NEEDS_ESCAPE.test(text)) return text;
+  let out = '';
+  let from = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    // & 38, < 60, > 62, " 34, ' 39
+    if (c === 38 || c === 60 || c === 62 || c === 34 || c === 39) {
+      out += text.slice(from, i) + ESCAPES[text[i]!]!;
+      from = i + 1;
+    }
+  }
+  return out + text.slice(from);
 }
 
 class Safe {
@@ -68,34 +82,37 @@ export function ownSvg(markup: string): SafeHtml {
   return raw(m);
 }
 
-function render(v: HtmlValue, out: string[]): void {
-  if (v === null || v === undefined || v === false || v === true) return;
-  if (isSafeHtml(v)) out.push(v.html);
-  else if (Array.isArray(v)) for (const x of v as readonly HtmlValue[]) render(x, out);
-  else if (typeof v === 'number') out.push(Number.isFinite(v) ? String(v) : '');
-  else out.push(escapeHtml(String(v)));
+/** The markup of one value (strings built by concatenation: cheaper than collecting parts and joining them). */
+function render(v: HtmlValue): string {
+  if (v === null || v === undefined || v === false || v === true) return '';
+  if (v instanceof Safe) return v.html;
+  if (typeof v === 'string') return escapeHtml(v);
+  if (typeof v === 'number') return Number.isFinite(v) ? String(v) : '';
+  if (Array.isArray(v)) {
+    let out = '';
+    for (const x of v as readonly HtmlValue[]) out += render(x);
+    return out;
+  }
+  return escapeHtml(String(v));
 }
 
 /** Tagged template: `html\`<p>${userText}</p>\`` escapes userText. */
 export function html(strings: TemplateStringsArray, ...values: HtmlValue[]): SafeHtml {
-  const out: string[] = [strings[0]!];
-  for (let i = 0; i < values.length; i++) {
-    render(values[i], out);
-    out.push(strings[i + 1]!);
-  }
-  return make(out.join(''));
+  let out = strings[0]!;
+  for (let i = 0; i < values.length; i++) out += render(values[i]) + strings[i + 1]!;
+  return make(out);
 }
 
 /** Joins fragments with an optional separator (itself escaped unless SafeHtml). */
 export function join(parts: readonly HtmlValue[], sep: HtmlValue = ''): SafeHtml {
-  const out: string[] = [];
-  parts.forEach((p, i) => {
-    if (i > 0) render(sep, out);
-    render(p, out);
-  });
-  return make(out.join(''));
+  const between = render(sep);
+  let out = '';
+  for (let i = 0; i < parts.length; i++) out += (i > 0 ? between : '') + render(parts[i]);
+  return make(out);
 }
 
+const JSON_NEEDS_ESCAPE = /[<>&\u2028\u2029]/;
+const jsonEscape = (c: string): string => JSON_ESCAPES[c]!;
 const JSON_ESCAPES: Record<string, string> = { '<': '\\u003c', '>': '\\u003e', '&': '\\u0026', '\u2028': '\\u2028', '\u2029': '\\u2029' };
 
 /**
@@ -103,6 +120,7 @@ const JSON_ESCAPES: Record<string, string> = { '<': '\\u003c', '>': '\\u003e', '
  * are written as \u escapes so that no value can close the element or open a comment.
  */
 export function jsonScript(id: string, value: unknown): SafeHtml {
-  const json = JSON.stringify(value).replace(/[<>&\u2028\u2029]/g, (c) => JSON_ESCAPES[c]!);
+  const text = JSON.stringify(value);
+  const json = JSON_NEEDS_ESCAPE.test(text) ? text.replace(/[<>&\u2028\u2029]/g, jsonEscape) : text;
   return make(`<script type="application/json" id="${escapeHtml(id)}">${json}</script>`);
 }

@@ -7,69 +7,15 @@
 import { systemWorks } from '../cases-schema.ts';
 import type { DesignFile } from '../design.ts';
 import type { CaseRule, FailureStopRule, ResidualRule, SystemFittedRule } from '../rules/case-rule-types.ts';
-import { CASE_RULE_KINDS } from '../rules/case-rule-types.ts';
-import type { DecelerationFigures, DecelerationRule, Rule, RuleStatus } from '../rules/rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { failedDistribution, failedValves, type ValveFailureMode } from '../valve-failure.ts';
-import { type CheckResult, type CheckScenario, type MarginUnit, verifyNoteFor } from './check-result.ts';
+import type { CheckResult, CheckScenario } from './check-result.ts';
 import { circuitCases } from './circuit-failure.ts';
 import { hotPerformanceResults } from './hot-performance.ts';
-import { checkDeceleration, type DecelerationOutcome } from './performance-check.ts';
+import { checkDeceleration } from './performance-check.ts';
 import { regenDistributionResults, regenWarningResult } from './regen-category.ts';
-import { base, notApplicable } from './run-checks.ts';
+import { asDecelerationRule, decelerationCheck, factResult, notApplicable, notChecked } from './result-builders.ts';
 import { combinationParkingResults, towingServiceResults } from './towing.ts';
-
-export function isCaseRule(rule: Rule): rule is CaseRule {
-  return (CASE_RULE_KINDS as readonly string[]).includes(rule.kind);
-}
-
-export function caseMarginUnit(rule: CaseRule): MarginUnit {
-  if (rule.kind === 'combination_parking') return 'adhesion';
-  return rule.kind === 'regen_distribution' ? 'adhesion' : rule.kind === 'regen_failure_warning' || rule.kind === 'system_fitted' ? 'none' : 'm/s²';
-}
-
-/** Applies, but an input is missing: never a pass. */
-export function notChecked(rule: Rule, loadState: string | null, missing: string[], note: string, scenario: CheckScenario = 'as_designed'): CheckResult {
-  return Object.assign(base(rule, loadState, scenario), verifyNoteFor(rule.status), {
-    applies: true,
-    passed: null,
-    worst_margin: null,
-    margin_unit: isCaseRule(rule) ? caseMarginUnit(rule) : ('m/s²' as const),
-    missing_inputs: missing,
-    note,
-  });
-}
-
-/** A verdict on a stated fact (no margin). */
-export function factResult(rule: Rule, passed: boolean, note: string, details?: CheckResult['details']): CheckResult {
-  return Object.assign(base(rule, null, 'as_designed'), verifyNoteFor(rule.status), {
-    applies: true,
-    passed,
-    worst_margin: null,
-    margin_unit: 'none' as const,
-    note,
-  }, details ? { details } : {});
-}
-
-/** A deceleration outcome as a CheckResult of a case rule. */
-export function decelerationCheck(rule: Rule, loadState: string, scenario: CheckScenario, o: DecelerationOutcome, status: RuleStatus = rule.status, extraNote = ''): CheckResult {
-  return Object.assign(base(rule, loadState, scenario), { status }, verifyNoteFor(status), {
-    applies: true,
-    passed: o.passed,
-    worst_margin: o.margin_ms2,
-    margin_unit: 'm/s²' as const,
-    note: extraNote ? `${o.note}; ${extraNote}` : o.note,
-    details: o.details,
-  });
-}
-
-/**
- * The record a case rule's deceleration figures are checked as, through checkDeceleration. Kind
- * "secondary" with no failed circuit means: the distribution given, service pedal model, no ABS credit.
- */
-export function asDecelerationRule(rule: CaseRule, figures: DecelerationFigures, kind: DecelerationRule['kind']): DecelerationRule {
-  return { id: rule.id, rule_set: rule.rule_set, title: rule.title, source: rule.source, status: rule.status, categories: rule.categories, load_states: rule.load_states, kind, figures };
-}
 
 /** Residual braking: one circuit failed (as secondary braking), laden or unladen figures by load kind. */
 function residualResults(design: DesignFile, rule: ResidualRule, s: StateModel): CheckResult[] {

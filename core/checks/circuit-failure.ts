@@ -20,7 +20,30 @@ export function circuitCases(split: 'front_rear' | 'diagonal'): CircuitCase[] {
   return split === 'diagonal' ? ['one_diagonal'] : ['front_circuit_only', 'rear_circuit_only'];
 }
 
+/**
+ * The failed-circuit distributions already built per load-state model and case: the service, secondary, residual,
+ * hot and failure-mode checks of one evaluation ask for the same ones. Kept with the figures they were built from
+ * and rebuilt should any of them have changed; at most three per model (one per case).
+ */
+const failedMemo = new WeakMap<StateModel, Map<CircuitCase, { inputs: readonly unknown[]; d: Distribution }>>();
+
+function failedInputs(s: StateModel): readonly unknown[] {
+  return [s.G1, s.G2, s.loads.P, s.threshold1, s.threshold2, s.sensing, s.valve];
+}
+
+/** The distribution with one circuit failed. Shared between callers (kept per model): do not change it. */
 export function failedCircuitDistribution(s: StateModel, which: CircuitCase): Distribution {
+  let perCase = failedMemo.get(s);
+  const inputs = failedInputs(s);
+  const kept = perCase?.get(which);
+  if (kept && kept.inputs.every((x, i) => x === inputs[i])) return kept.d;
+  const d = buildFailedCircuit(s, which);
+  if (!perCase) failedMemo.set(s, (perCase = new Map()));
+  perCase.set(which, { inputs, d });
+  return d;
+}
+
+function buildFailedCircuit(s: StateModel, which: CircuitCase): Distribution {
   const G1 = which === 'rear_circuit_only' ? 0 : which === 'one_diagonal' ? s.G1 / 2 : s.G1;
   const G2 = which === 'front_circuit_only' ? 0 : which === 'one_diagonal' ? s.G2 / 2 : s.G2;
   const axles = { P: s.loads.P, G1, G2, threshold1: s.threshold1, threshold2: s.threshold2 };

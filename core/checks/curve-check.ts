@@ -194,6 +194,11 @@ function pieceForms(piece: Piece): PieceForms {
   return pf;
 }
 
+/** The margin forms of a rule piece, per clause its alternatives (a clause holds when any alternative is ≥ 0). */
+export function pieceClauses(piece: Piece): readonly (readonly MarginForm[])[] {
+  return pieceForms(piece).clauses;
+}
+
 // Work space reused by every check (the checks are not re-entrant): polynomial coefficients, roots,
 // and the cut points and candidate points of one piece in insertion order without repeats.
 const coeffs = new Float64Array(5);

@@ -23,7 +23,7 @@ import type { HotRule } from '../rules/case-rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult } from './check-result.ts';
 // Object.assign rather than object spread below: on Node 20 a spread of a result-sized object costs far more (bench/evaluate.ts).
-import { asDecelerationRule, decelerationCheck, notChecked } from './cases.ts';
+import { asDecelerationRule, decelerationCheck, notChecked } from './result-builders.ts';
 import { checkDeceleration, DECELERATION_TOLERANCE, requiredDeceleration } from './performance-check.ts';
 
 /**

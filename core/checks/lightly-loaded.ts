@@ -13,7 +13,7 @@ import type { Rule } from '../rules/rule-types.ts';
 import type { SelectedRule } from '../rules/index.ts';
 import { type StateModel, stateModel } from '../state-model.ts';
 import type { CheckResult } from './check-result.ts';
-import { notChecked } from './cases.ts';
+import { notChecked } from './result-builders.ts';
 
 export const LIGHTLY_LOADED_ID = 'lightly-loaded';
 

@@ -15,9 +15,8 @@ import type { RegenCategoryRule } from '../rules/case-rule-types.ts';
 import { type CurveRule, selectRules } from '../rules/index.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult, verifyNoteFor } from './check-result.ts';
-import { factResult, notChecked } from './cases.ts';
+import { base, factResult, notApplicable, notChecked } from './result-builders.ts';
 import { checkCurveRule } from './curve-check.ts';
-import { base, notApplicable } from './run-checks.ts';
 
 export const REGEN_NOT_CHECKED =
   'not checked here (a test must show them): the Type-0 test with the battery at its highest recommended charge, ' +

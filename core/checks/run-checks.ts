@@ -4,15 +4,15 @@
  * default for the category and ABS (core/rules/index.ts).
  */
 import type { DesignFile } from '../design.ts';
-import { defaultRuleSelection } from '../rules/index.ts';
-import { selectDesignRules } from '../rules/light-n1.ts';
 import type { CurveRule, DecelerationRule, ParkingRule, Rule } from '../rules/rule-types.ts';
 import type { StateModel } from '../state-model.ts';
 import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-result.ts';
 import { circuitCases } from './circuit-failure.ts';
 import { checkCurveRule } from './curve-check.ts';
 import { checkDeceleration, checkParking } from './performance-check.ts';
-import { caseMarginUnit, caseResults, isCaseRule } from './cases.ts';
+import { caseResults } from './cases.ts';
+import { base, isCaseRule, notApplicable } from './result-builders.ts';
+import { designRules, type RunChecksOptions } from './selection.ts';
 import { derivedForRule, derivedStates } from './lightly-loaded.ts';
 
 export const ABS_EXEMPT_NOTE =
@@ -20,39 +20,6 @@ export const ABS_EXEMPT_NOTE =
   'R13-H likewise, from memory); the curves are still shown, and the ABS-failed case is checked below as a vehicle without ABS';
 
 export const ABS_FAILED_NOTE = 'ABS failed: evaluated as a vehicle without ABS (the hydraulic valve as designed); shown for information';
-
-// Results are built with Object.assign rather than object spread: on Node 20 spreading a result-sized
-// object costs microseconds each, a large share of a whole evaluation (bench/evaluate.ts).
-export function base(rule: Rule, loadState: string | null, scenario: CheckScenario): Omit<CheckResult, 'applies' | 'passed' | 'worst_margin' | 'margin_unit'> {
-  return {
-    rule: rule.id,
-    rule_set: rule.rule_set,
-    title: rule.title,
-    source: rule.source,
-    status: rule.status,
-    load_state: loadState,
-    scenario,
-    advisory: false,
-    worst_at_braking_rate: null,
-    failing_ranges: [],
-    branch: null,
-  };
-}
-
-function marginUnit(rule: Rule): CheckResult['margin_unit'] {
-  if (isCaseRule(rule)) return caseMarginUnit(rule);
-  return rule.kind === 'curve' || rule.kind === 'parking' ? 'adhesion' : 'm/s²';
-}
-
-export function notApplicable(rule: Rule, loadState: string | null, note: string, scenario: CheckScenario = 'as_designed'): CheckResult {
-  return Object.assign(base(rule, loadState, scenario), verifyNoteFor(rule.status), {
-    applies: false,
-    passed: null,
-    worst_margin: null,
-    margin_unit: marginUnit(rule),
-    note,
-  });
-}
 
 /** What a load-sensing valve was modelled as reading, for the curve checks' notes (issue 12 point 7). */
 function valveNoteOf(design: DesignFile): string | null {
@@ -150,15 +117,8 @@ function parkingResults(design: DesignFile, rule: ParkingRule, s: StateModel): C
   );
 }
 
-export interface RunChecksOptions {
-  /** Rule-set or rule ids; overrides the design's `rules` key. */
-  rules?: readonly string[];
-}
-
-/** The selection in force for a design: option, design key, or the default. */
-export function ruleSelection(design: DesignFile, opts: RunChecksOptions = {}): string[] {
-  return [...(opts.rules ?? design.rules ?? defaultRuleSelection(design.vehicle.category, design.vehicle.abs))];
-}
+export { base, notApplicable } from './result-builders.ts';
+export { type RunChecksOptions, ruleSelection } from './selection.ts';
 
 export function runChecks(design: DesignFile, models: readonly StateModel[], opts: RunChecksOptions = {}): CheckResult[] {
   const category = design.vehicle.category;
@@ -168,7 +128,7 @@ export function runChecks(design: DesignFile, models: readonly StateModel[], opt
   const massWords = rated !== undefined ? 'the maximum permitted mass (ratings.max_mass_kg) is' : 'the heaviest load state is';
   const out: CheckResult[] = [];
   const valveNote = valveNoteOf(design);
-  const selected = selectDesignRules(ruleSelection(design, opts), design);
+  const selected = designRules(design, opts);
   const derived = derivedStates(design, selected); // the FMVSS lightly loaded vehicle, when those rules are selected
   for (const { rule, covers_category } of selected) {
     if (!covers_category) {

@@ -29,9 +29,8 @@ import type { ParkingRule } from '../rules/rule-types.ts';
 import { type StateModel, stateModel } from '../state-model.ts';
 import { type CheckResult, type CheckScenario, verifyNoteFor } from './check-result.ts';
 import { brakingRateAtPressure } from './circuit-failure.ts';
-import { notChecked } from './cases.ts';
+import { base, notApplicable, notChecked } from './result-builders.ts';
 import { DECELERATION_TOLERANCE, DEFAULT_TEST_ADHESION, KMH2_PER_M_TO_MS2, parkingBrakeCapacity, requiredDeceleration, slopeAxleLoads } from './performance-check.ts';
-import { base, notApplicable } from './run-checks.ts';
 
 export const TOWING_ID = 'towing';
 

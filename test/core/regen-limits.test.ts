@@ -12,9 +12,10 @@ import { DEFAULT_ADHESION } from '../../core/constants.ts';
 import type { DesignFile } from '../../core/design.ts';
 import { stateModels } from '../../core/evaluate.ts';
 import { lockOrderRange } from '../../core/lock-order-range.ts';
-import { maxAllowedRegenForce, regenSetup } from '../../core/regen.ts';
+import { maxAllowedRegenForce, regenAnalysis, regenCurveRules, regenSetup } from '../../core/regen.ts';
+import { checkCurveRule } from '../../core/checks/curve-check.ts';
 import { arbitraryDesign } from './arbitrary-design.ts';
-import { bisectAllowedRegenForce } from './regen-limits-reference.ts';
+import { bisectAllowedRegenForce, scanFirstFailingForce } from './regen-limits-reference.ts';
 
 const regenBlock = fc.record({
   max_motor_torque_nm: fc.double({ min: 40, max: 400, noNaN: true }),
@@ -49,3 +50,31 @@ describe('largest regenerative force per surface: piecewise solution = bisection
   });
 });
 
+
+describe('largest regenerative force passing the curve checks: solved = scan and bisection to 1e-6', () => {
+  it('for random designs, blendings and drive layouts, on every load state', () => {
+    let compared = 0;
+    fc.assert(
+      fc.property(withRegen, (design) => {
+        const setup = regenSetup(design, design.regen!);
+        const models = stateModels(design);
+        const result = regenAnalysis(design, models, DEFAULT_ADHESION)!;
+        models.forEach((m, i) => {
+          const st = result.load_states[i]!;
+          const keep = regenCurveRules(design, m.state.kind).filter((rule) => checkCurveRule(rule, m.loads, m.dist).passed);
+          const scan = (steps: number) => (keep.length === 0 ? null : scanFirstFailingForce(keep, m.loads, m.dist, setup.frontShare, setup.blending, setup.maxForce, steps));
+          const got = st.max_force_passing_checks_n;
+          // the scan misses a failing stretch shorter than its step: where the two differ, scan again in steps of
+          // about 0.1 N (the reference's own tolerance then), and the two must agree
+          let ref = scan(400);
+          if (!close(got, ref, ref ?? 1)) ref = scan(Math.ceil(setup.maxForce / 0.1));
+          if (ref !== null) compared++;
+          if (!close(got, ref, ref ?? 1)) throw new Error(`state ${i}: solved ${got}, scan and bisection ${ref}`);
+        });
+      }),
+      { numRuns: 150, seed: 17 },
+    );
+    // the property must have had failing forces to compare (else it proves nothing)
+    expect(compared).toBeGreaterThan(20);
+  });
+});

@@ -112,7 +112,7 @@ describe('regeneration cases count like the checks (issue 12 point 4)', () => {
       {
         id: 'unladen',
         max_force_passing_checks_n: 2203,
-        max_force_basis: 'bisection',
+        max_force_basis: 'solved',
         checks: [
           { rule: 'a/lock', title: 'Front axle locks first', status: 'verified', speed_kmh: null, regen_force_n: 0, passed: true, worst_margin: 0.084 },
           { rule: 'a/lock', title: 'Front axle locks first', status: 'verified', speed_kmh: 20, regen_force_n: 2478, passed: false, worst_margin: -0.173 },

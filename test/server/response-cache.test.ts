@@ -46,6 +46,23 @@ describe('ResponseCache', () => {
     expect(text(ask('a'))).toBe('<p>a1</p>');
   });
 
+  it('keeps at most its byte bound, dropping the least recently used, and counts what it keeps', () => {
+    // each entry: a one-character form text (2 bytes as counted) and a 100-byte answer
+    const c = new ResponseCache(100, 350);
+    const ask = (s: string) => c.answer(s, () => ({ status: 200, body: raw(s.repeat(100)) }));
+    for (const s of ['a', 'b', 'c']) ask(s);
+    expect(c.size).toBe(3);
+    expect(c.bytes).toBe(306);
+    ask('d'); // 408 bytes would be over 350: a, the least recently used, goes
+    expect(c.size).toBe(3);
+    expect(c.bytes).toBe(306);
+    let made = 0;
+    c.answer('a', () => ((made++), { status: 200, body: raw('a'.repeat(100)) }));
+    expect(made).toBe(1); // a was evicted: made again
+    c.clear();
+    expect(c.bytes).toBe(0);
+  });
+
   it('never caches the empty source (uploads and oversized forms)', () => {
     const c = new ResponseCache(3);
     let made = 0;

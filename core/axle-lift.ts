@@ -6,9 +6,9 @@
  * raised until the wheel centres differ in height by H, so the body tilts by θ = asin(H / L). The CG lies
  * (h − r) above the line through the wheel centres; tilting moves it horizontally towards the lower axle
  * by (h − r) sin θ, so the axle that stays down gains ΔW = W (h − r) tan θ / L and the raised axle loses
- * the same. Hence, per lift, h = r + L ΔW / (W tan θ) (worked-examples.md, "Known wrong published
- * answers", gives the same formula). Assumptions: rigid tyres of equal loaded radius r front and rear,
- * suspension locked, no fluid shift, no horizontal force at the wheels (brakes off, wheels free to roll).
+ * the same. Hence, per lift, h = r + L ΔW / (W tan θ) (derived here; R. N. Jazar, Vehicle Dynamics:
+ * Theory and Application (2008), Example 43, prints a wrong answer for this method, so it is no check).
+ * Assumptions: rigid tyres of equal loaded radius r front and rear, suspension locked, no fluid shift, no horizontal force at the wheels (brakes off, wheels free to roll).
  *
  * Several lifts: the reading of each axle is a straight line in x = σ tan θ (σ = +1 when the reading is
  * of the axle that stays down, −1 when it is of the raised axle), y = c_axle + s x, with the level reading
@@ -136,9 +136,9 @@ export interface AxleLiftResult {
 /**
  * Below this largest lift angle the result is flagged. Why 10°: the load change is W (h − r) tan θ / L,
  * which for a van (h − r ≈ 0.5 m, L ≈ 3.5 m) at 10° is about 2.5 % of the vehicle mass, so scale
- * resolution, tyre deflection and friction at the wheels already weigh heavily; the field practice in
- * field-practice.md (section 3, "CG height measurement") asks for a lift of at least 600 mm, which is
- * about 10° on a 3.5 m wheelbase.
+ * resolution, tyre deflection and friction at the wheels already weigh heavily; the axle-lift method
+ * (ISO 10392) as practitioners describe it asks for a lift of at least 600 mm (practitioner reports, no
+ * published source), which is about 10° on a 3.5 m wheelbase.
  */
 export const MIN_USEFUL_LIFT_ANGLE_DEG = 10;
 

@@ -2,15 +2,15 @@
  * Brake heat, estimates only (design-file block `heat`, docs/design-file.md).
  *
  * - Energy of a stop from v1 to v2: E = ½ m (v1² − v2²)(1 + rotating_energy_share); the share for the
- *   rotating parts is 0 unless set (U. C. Jindal, Machine Design, Ex. 23-5 uses 0.10 — worked-examples E5).
+ *   rotating parts is 0 unless set (U. C. Jindal, Machine Design, Example 23-5, p. 621, uses 0.10).
  * - Split per axle by the installed distribution at the stop's braking rate: E_i = E · T_i / (T1 + T2);
  *   each axle has two brakes sharing equally. Regeneration is not credited (a full battery or a fault).
  * - Temperature rise of one disc or drum, no cooling during the stop: ΔT = share · E_brake / (m_rotor c),
- *   c = 460 J/(kg K) for grey cast iron by default (Jindal, Ex. 23-5, worked-examples E5), share of the
+ *   c = 460 J/(kg K) for grey cast iron by default (Jindal, Example 23-5), share of the
  *   heat going into the rotor 0.9 by default (an assumption, from memory: pads, calipers and hubs take
  *   the rest).
- * - Repeated stops like the Type-I (fade) test, 71/320/EEC Annex II 1.3 (braking-requirements.md 5.2
- *   [V]): laden; v1 = 80 % of the maximum speed capped at 120 km/h (M1, N1), 100 (M2), 60 (M3, N2, N3);
+ * - Repeated stops like the Type-I (fade) test, 71/320/EEC Annex II 1.3 (version of
+ *   1 January 2007 on legislation.gov.uk): laden; v1 = 80 % of the maximum speed capped at 120 km/h (M1, N1), 100 (M2), 60 (M3, N2, N3);
  *   v2 = v1/2; cycle Δt = 45 s (M1), 55 s (M2, N1), 60 s (others); 15 cycles (M1, M2, N1) or 20; each
  *   braking at 3 m/s². Lumped cooling: dT/dt = q(t)/(m c) − b (T − T_ambient), with b the user's
  *   cooling coefficient (default 0.004 1/s, a rough value from memory; measure one from a cool-down:
@@ -24,7 +24,7 @@ import { valveLaw } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 
 export const HEAT_DEFAULTS = {
-  /** Grey cast iron, J/(kg K): U. C. Jindal, Machine Design, Ex. 23-5 (worked-examples E5). */
+  /** Grey cast iron, J/(kg K): U. C. Jindal, Machine Design, Example 23-5. */
   specific_heat_j_per_kg_k: 460,
   /** Assumption, from memory. */
   heat_to_rotor_share: 0.9,
@@ -34,7 +34,7 @@ export const HEAT_DEFAULTS = {
   rotating_energy_share: 0,
 } as const;
 
-/** Type-I (fade) test parameters per category, 71/320/EEC Annex II 1.3 (braking-requirements.md 5.2 [V]). */
+/** Type-I (fade) test parameters per category, 71/320/EEC Annex II 1.3 (version of 1 January 2007). */
 export function typeIParameters(category: Vehicle['category']): { vCapKmh: number; intervalS: number; cycles: number } {
   const vCapKmh = category === 'M1' || category === 'N1' ? 120 : category === 'M2' ? 100 : 60;
   const intervalS = category === 'M1' ? 45 : category === 'M2' || category === 'N1' ? 55 : 60;
@@ -53,7 +53,8 @@ export const TYPE_I_DECELERATION = 3;
 
 /**
  * Single-stop defaults: the Type-0 (engine disconnected) test speed and mean fully developed
- * deceleration per category, braking-requirements.md 5.2 [P]: M1 80 km/h, 5.8 m/s²; N1 80 km/h,
+ * deceleration per category, 71/320/EEC Annex II 2.1.1 (the same values are tabulated in Directive
+ * 70/311/EEC Annex II; verify against the current official text): M1 80 km/h, 5.8 m/s²; N1 80 km/h,
  * 5.0 m/s²; M2, M3, N2, N3 60 km/h, 5.0 m/s².
  */
 export function singleStopDefaults(category: Vehicle['category']): { speedKmh: number; decelerationMs2: number } {

@@ -18,25 +18,25 @@ export const OCCUPANT_MASSES = [
     id: 'eu-75',
     mass_kg: 75,
     use: 'EU type approval: the mass in running order includes a 75 kg driver',
-    source: 'field-practice.md section 3, "Occupant and fluid masses"; Regulation (EU) No 1230/2012, Art. 2 (from memory)',
+    source: 'Regulation (EU) No 1230/2012, Art. 2, mass in running order (from memory)',
   },
   {
     id: 'au-nsw-68',
     mass_kg: 68,
     use: 'NSW (Australia) brake assessment: 68 kg in every unoccupied seat for the maximum loaded test mass',
-    source: 'field-practice.md section 1.1 (RMS "Brake assessment manual" v1.0, 2013)',
+    source: 'NSW (Australia) RMS "Brake assessment manual" v1.0 (2013), definition of the maximum loaded test mass (MLTM)',
   },
   {
     id: 'uk-mot-63.5',
     mass_kg: 63.5,
     use: 'UK MOT class 5 test weight: 63.5 kg (140 lb) per passenger seat',
-    source: 'field-practice.md section 1.3, http://www.motinfo.gov.uk/htdocs/m4s03000802.htm',
+    source: 'UK MOT testing guide, class 5 brake test weight, http://www.motinfo.gov.uk/htdocs/m4s03000802.htm',
   },
   {
     id: 'us-154-lb',
     mass_kg: 154 * TO_SI.lb,
     use: 'United States: 154 lb (69.85 kg) per designated seating or sleeping position',
-    source: 'field-practice.md section 3, "Occupant and fluid masses"; 49 CFR 571.110 (from memory)',
+    source: '49 CFR 571.110 (FMVSS 110), from memory; 154 lb per sleeping position as practitioners report it, no published source read',
   },
 ] as const satisfies readonly OccupantMass[];
 

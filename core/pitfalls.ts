@@ -20,15 +20,15 @@ export interface Pitfall {
 export const TYRE_RADIUS_CHANGE_LIMIT = 0.07;
 
 const SRC = {
-  tyre: 'NSW Brake assessment manual (RMS 2013) Table 1: a wheel/tyre diameter change above ±7 % triggers a brake assessment (field-practice 1.1, practitioner source)',
-  bias: 'UK IVA practice: a bias adjuster the driver can reach fails; a balance bar set front-first and pinned was accepted (field-practice 1.3, practitioner sources)',
-  abs: 'NSW: no certificate when the modification disables ESC (field-practice 1.1); NZ entry certification needs an ABS declaration (1.2); examiners expect ABS and ESP to keep working (section 2, EV conversions)',
-  lsv: 'Practitioner reports: helper springs, air assistance, lift or lowering stop a load-sensing valve reading the load; its linkage must be reset (field-practice section 2)',
-  split: 'NSW Brake assessment manual Table 1: converting a diagonal split to a front/rear split triggers a brake assessment (field-practice 1.1, practitioner source)',
-  drumMc: 'Practitioner reports: calipers need more fluid than drums, so a drum-system master cylinder may lack displacement; drum residual valves (about 0.7 bar) do not suit discs (field-practice sections 2 and 3)',
-  booster: 'NSW Brake assessment manual Table 1: removing the booster triggers a brake assessment; plate test at 500 N with the booster disconnected (field-practice 1.1)',
-  vacuum: 'EV-conversion practice: without engine vacuum an electric vacuum pump and reservoir are needed (field-practice section 2, EV conversions)',
-  retained: 'Practitioner reports: an antilock, stability or distribution controller is calibrated for the base vehicle\'s brakes, tyres, masses and suspension (field-practice section 2; common practice, no source)',
+  tyre: 'NSW (Australia) RMS "Brake assessment manual" v1.0 (2013), Table 1: a wheel or tyre diameter change of more than 7 % either way calls for a brake assessment',
+  bias: 'UK IVA practice: a brake-bias adjuster within the driver\'s reach fails; one inspector accepted a balance bar set so the front locks first and then pinned (practitioner reports, no published source)',
+  abs: 'NSW (Australia) RMS "Brake assessment manual" v1.0 (2013): no certificate when the modification disables ESC; NZTA entry certification, brakes (https://vehicleinspection.nzta.govt.nz/virms/entry-certification/i-and-c/brakes): a fitted ABS needs a technician\'s declaration; examiners expect ABS and ESP to keep working (practitioner reports, no published source)',
+  lsv: 'Practitioner reports, no published source: helper springs, air assistance, lifting or lowering stop a load-sensing valve from reading the load, and its linkage must be reset',
+  split: 'NSW (Australia) RMS "Brake assessment manual" v1.0 (2013), Table 1: changing a diagonal split to a front/rear split calls for a brake assessment',
+  drumMc: 'Practitioner reports, no published source: calipers take more fluid than drums, so a master cylinder from a drum system may lack displacement; drum residual valves (about 0.7 bar) do not suit discs',
+  booster: 'NSW (Australia) RMS "Brake assessment manual" v1.0 (2013), Table 1: removing the booster calls for a brake assessment; the plate test at 500 N with the booster disconnected is a practitioner report, no published source',
+  vacuum: 'EV-conversion practice: without engine vacuum an electric vacuum pump and a reservoir are needed (practitioner reports, no published source)',
+  retained: 'An antilock, stability or distribution controller is calibrated for the base vehicle\'s brakes, tyres, masses and suspension (practitioner reports and common practice, no published source)',
 } as const;
 
 const SYSTEM_NAMES = { abs: 'antilock (ABS)', esc: 'stability control (ESC)', ebd: 'electronic brake-force distribution (EBD)' } as const;

@@ -1,7 +1,8 @@
 /**
  * Ratings: the maximum permitted mass and axle masses, and a minimum front-axle share, checked per
- * load state. An axle can be over its rating while the total is within (field-practice.md section 2,
- * "Camper/motorhome conversions": mass at the rear adds more than its own weight to the rear axle).
+ * load state. An axle can be over its rating while the total is within (camper and motorhome
+ * converters report that mass behind the rear axle adds more than its own weight to it; practitioner
+ * reports, no published source).
  */
 import type { DesignFile, LoadState } from './design.ts';
 import type { Warning } from './validate.ts';

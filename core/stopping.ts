@@ -3,12 +3,12 @@
  * deceleration the surface allows. Estimates only.
  *
  * - Reaction: constant speed for reaction_time_s. Conventions differ (0.67 s, 1.5 s and 2.5 s are all
- *   in use — worked-examples.md, "Conventions"); default 1.5 s, so set your own.
+ *   in use; common practice, no source); default 1.5 s, so set your own.
  * - Build-up: the deceleration rises linearly from 0 to its full value over build_up_time_s. A linear
  *   ramp costs about half its duration at constant speed, so the default (0.72 s for M1, 1.08 s for other
  *   categories) is twice the 0.36 s / 0.54 s that the 0.1·v / 0.15·v terms of the Type-0 stopping-distance
- *   formulas allow (braking-requirements.md 5.2: s = 0.1v + v²/150 for M1, 0.15v + v²/130 for N1; with v in
- *   km/h, 0.1·v m is 0.36 s of travel).
+ *   formulas allow (71/320/EEC Annex II 2.1.1, verify against the current official text: s = 0.1v + v²/150
+ *   for M1, 0.15v + v²/130 for N1; with v in km/h, 0.1·v m is 0.36 s of travel).
  * - Without ABS: the deceleration at the first lock on that surface (installed distribution, no
  *   regeneration): z_lock·g. A locked axle is taken as the end of controlled braking.
  * - With ABS: utilisation close to the ideal, z = factor·k (default factor 0.9, an assumption: ABS

@@ -2,7 +2,7 @@
  * Standard sizes of hydraulic brake parts, metric and inch series, kept as data. Every list carries
  * its source; these series are what parts suppliers commonly stock ("common practice, no source"):
  * no public table was found. The inch master-cylinder bores 7/8 … 1-1/8 in are the ones practitioners
- * name (reference sheet field-practice.md, section 4 item 11).
+ * name (practitioner reports, no published source).
  */
 
 export type PartKind = 'caliper_piston' | 'wheel_cylinder' | 'master_cylinder';
@@ -48,7 +48,7 @@ export const SIZE_CATALOGUE: readonly SizeSeries[] = [
   metricSeries('wheel_cylinder', [14, 15, 16, 17, 18, 19, 20, 22, 23, 24, 25, 27, 28]),
   inchSeries('wheel_cylinder', [9, 10, 11, 12, 13, 14, 15, 16, 17, 18]),
   metricSeries('master_cylinder', [19, 20, 22, 23, 24, 25, 26, 28, 30, 32]),
-  inchSeries('master_cylinder', [10, 11, 12, 13, 14, 15, 16, 17, 18, 20], `${CATALOGUE_SOURCE} (7/8 to 1-1/8 in named by practitioners, field-practice.md section 4)`),
+  inchSeries('master_cylinder', [10, 11, 12, 13, 14, 15, 16, 17, 18, 20], `${CATALOGUE_SOURCE} (7/8 to 1-1/8 in as practitioners name them, practitioner reports, no published source)`),
 ];
 
 export interface CatalogueSize {

@@ -41,8 +41,9 @@ export type Tolerances = z.infer<typeof Tolerances>;
 /**
  * Defaults when a design gives no `tolerances`:
  *  - pad friction ± 15 %: replacement friction material must stay within ± 15 % of the original
- *    (New Zealand gazette notice, field-practice.md section 1.2); one market's pad sheet states
- *    ± 0.05 on about 0.4 (field-practice.md section 3), about ± 12 %;
+ *    by the UN R90 Annex 8 method (New Zealand Gazette notice 2004-au85,
+ *    https://gazette.govt.nz/notice/id/2004-au85); one market's pad sheet states ± 0.05 on about 0.4
+ *    (practitioner reports, no published source), about ± 12 %;
  *  - CG height ± 0.05 m, front axle load ± 20 kg (weighbridge reading and load placement), tyre
  *    radius ± 2 % (wear and pressure): common practice, no source;
  *  - rear valve knee ± 10 % and ratio ± 5 %: from memory (valve makers' data sheets state knee

@@ -91,7 +91,7 @@ export interface SizingOptions {
 }
 
 const BAR_WARNING =
-  'Some inspection regimes refuse a brake-bias adjuster the driver can reach (one UK IVA inspector accepted a bar set so the front locks first and then pinned; field-practice.md section 1.3): lock the bar at the fixed setting and make the adjuster unreachable from the seat.';
+  'Some inspection regimes refuse a brake-bias adjuster the driver can reach (UK IVA practice: one inspector accepted a bar set so the front locks first and then pinned; practitioner reports, no published source): lock the bar at the fixed setting and make the adjuster unreachable from the seat.';
 
 function balanceBarSizing(design: DesignFile, rules: readonly SizingRule[], band: IntervalSet, phi: number | null): BalanceBarSizing | null {
   const bar = design.hydraulics.balance_bar;
@@ -198,7 +198,7 @@ export function sizeDesign(design: DesignFile, opts: SizingOptions = {}): Sizing
       seed: mc.seed,
       distribution: mc.distribution,
       tolerances: rm.tol,
-      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults (core/sizing/sizing-schema.ts: pad friction ± 15 % per field-practice.md 1.2; valve knee and ratio and threshold pressures from memory; the rest common practice, no source)',
+      tolerances_source: design.tolerances ? 'design file (defaults for the keys it leaves out)' : 'defaults: pad friction ± 15 % (replacement friction material, New Zealand Gazette notice 2004-au85); valve knee, valve ratio and threshold pressures from memory; CG height, front axle load and tyre radius common practice, no source',
       probability_of_failure: mc.probability_of_failure,
       probability_standard_error: mc.probability_standard_error,
       p05_margin: mc.p05_margin,

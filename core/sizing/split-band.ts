@@ -1,7 +1,8 @@
 /**
  * The feasible band of a fixed front/rear split, computed exactly from the rule definitions.
  *
- * With a constant front share φ = T1/(T1 + T2), ψ = P1/P and χ = h/E (reference sheet section 1):
+ * With a constant front share φ = T1/(T1 + T2), ψ = P1/P and χ = h/E (symbols and axle-load formulas of
+ * 71/320/EEC Annex II Appendix, points 2 and 3.1.3; the form in φ below is derived from them):
  *   f1 = φ z / n1,  f2 = (1 − φ) z / n2,  n1 = ψ + χ z,  n2 = 1 − ψ − χ z.
  * A margin form m = α + βz + γ1 f1 + γ2 f2 (core/checks/curve-check.ts) is then linear in φ:
  *   m = A(z) + φ B(z),  A = α + βz + γ2 z/n2,  B = z (γ1/n1 − γ2/n2),

@@ -1,0 +1,72 @@
+/**
+ * The document model (report/document.ts) as plain text: a section title, then its blocks; tables as aligned
+ * columns with the unit in the head, item lists one per line. Numbers and words come formatted from report/.
+ */
+import { type Block, type Cell, type CellLike, cellText, type Items, type ReportDocument, type Section, type Table } from '../report/document.ts';
+import { textTable } from './table.ts';
+
+const IND = '  ';
+
+const head = (c: { head: string; unit: string }) => (c.unit ? `${c.head} (${c.unit})` : c.head);
+const asCell = (c: CellLike): Cell => (typeof c === 'string' ? { text: c } : c);
+
+function tableText(t: Table, indent: string): string[] {
+  const out = [`${indent}${t.title}:`];
+  out.push(textTable(t.columns.map(head), t.rows.map((r) => r.cells.map(cellText)), `${indent}${IND}`));
+  // the smaller lines of a cell (scenario, note, "verify ...") below the table, named by the row's first cell
+  for (const r of t.rows) {
+    const extra = r.cells.flatMap((c) => {
+      const x = asCell(c);
+      return [...(x.sub ?? []), ...(x.verify ? [x.verify] : [])];
+    });
+    if (extra.length) out.push(`${indent}${IND}${cellText(r.cells[0]!)}: ${extra.join('; ')}`);
+  }
+  return out;
+}
+
+/** The checks tables read better as one entry per row: verdict, check, figures, then source and notes. */
+function listText(t: Table, indent: string): string[] {
+  const out = [`${indent}${t.title}:`];
+  for (const r of t.rows) {
+    const [name, word, ...rest] = r.cells.map(asCell);
+    const parts = [`${(word?.text ?? '').padEnd(12)} ${name?.text ?? ''}${name?.sub?.length ? ` (${name.sub.join('; ')})` : ''}`];
+    const tail: string[] = [];
+    rest.forEach((c, i) => {
+      const colHead = t.columns[i + 2]!.head.toLowerCase();
+      if (c.text === '–' || c.text === '') return;
+      if (c.sub?.length || c.verify || i >= rest.length - 2) tail.push([c.text, ...(c.sub ?? []), ...(c.verify ? [c.verify] : [])].join('; '));
+      else parts.push(`${colHead} ${c.text}`);
+    });
+    out.push(`${indent}${IND}${parts.join('; ')}`);
+    for (const x of tail) out.push(`${indent}${IND}${' '.repeat(13)}${x}`);
+  }
+  return out;
+}
+
+function itemsText(b: Items, indent: string): string[] {
+  const out = b.title ? [`${indent}${b.title}`] : [];
+  for (const it of b.items) {
+    const word = it.word ? `${it.word}: ` : '';
+    out.push(`${indent}${IND}${word}${it.text}${it.detail ? ` (${it.detail})` : ''}`);
+  }
+  return out;
+}
+
+function blockText(b: Block, indent: string): string[] {
+  if (b.kind === 'text') return [`${indent}${b.text}`];
+  if (b.kind === 'items') return itemsText(b, indent);
+  return b.id.startsWith('checks-') ? listText(b, indent) : tableText(b, indent);
+}
+
+export function sectionText(s: Section): string[] {
+  return [`${s.title}:`, ...s.blocks.flatMap((b) => blockText(b, IND))];
+}
+
+/** The whole document: title, verdict, sections, caution. */
+export function documentText(doc: ReportDocument): string {
+  const v = doc.verdict;
+  const out = [doc.title, '', v.title, ...v.blocks.flatMap((b) => blockText(b, IND)), ''];
+  for (const s of doc.sections) out.push(...sectionText(s), '');
+  out.push(`CAUTION: ${doc.caution}`);
+  return out.join('\n');
+}

@@ -24,21 +24,25 @@ function tableText(t: Table, indent: string): string[] {
   return out;
 }
 
-/** The checks tables read better as one entry per row: verdict, check, figures, then source and notes. */
+/**
+ * The checks tables read better as one entry per row: verdict and check, the figures, then the source with how sure
+ * its text is, then the notes.
+ */
 function listText(t: Table, indent: string): string[] {
   const out = [`${indent}${t.title}:`];
   for (const r of t.rows) {
-    const [name, word, ...rest] = r.cells.map(asCell);
+    const cells = r.cells.map(asCell);
+    const [name, word] = cells;
+    const source = cells[cells.length - 2];
+    const status = cells[cells.length - 1];
     const parts = [`${(word?.text ?? '').padEnd(12)} ${name?.text ?? ''}${name?.sub?.length ? ` (${name.sub.join('; ')})` : ''}`];
-    const tail: string[] = [];
-    rest.forEach((c, i) => {
-      const colHead = t.columns[i + 2]!.head.toLowerCase();
-      if (c.text === '–' || c.text === '') return;
-      if (c.sub?.length || c.verify || i >= rest.length - 2) tail.push([c.text, ...(c.sub ?? []), ...(c.verify ? [c.verify] : [])].join('; '));
-      else parts.push(`${colHead} ${c.text}`);
+    cells.slice(2, -2).forEach((c, i) => {
+      if (c.text !== '–' && c.text !== '') parts.push(`${t.columns[i + 2]!.head.toLowerCase()} ${c.text}`);
     });
     out.push(`${indent}${IND}${parts.join('; ')}`);
-    for (const x of tail) out.push(`${indent}${IND}${' '.repeat(13)}${x}`);
+    const pad = `${indent}${IND}${' '.repeat(13)}`;
+    if (source) out.push(`${pad}${source.text} [${status?.text ?? ''}${status?.verify ? `: ${status.verify}` : ''}]`);
+    for (const x of source?.sub ?? []) out.push(`${pad}${x}`);
   }
   return out;
 }
@@ -46,8 +50,9 @@ function listText(t: Table, indent: string): string[] {
 function itemsText(b: Items, indent: string): string[] {
   const out = b.title ? [`${indent}${b.title}`] : [];
   for (const it of b.items) {
-    const word = it.word ? `${it.word}: ` : '';
-    out.push(`${indent}${IND}${word}${it.text}${it.detail ? ` (${it.detail})` : ''}`);
+    // the verdict's words stand in a column ("FAIL         ...", "NOT CHECKED  ..."), others lead with "word: "
+    const word = !it.word ? '' : b.id === 'verdict-items' ? `${it.word.padEnd(12)} ` : `${it.word}: `;
+    out.push(`${indent}${word}${it.text}${it.detail ? ` (${it.detail})` : ''}`);
   }
   return out;
 }
@@ -59,13 +64,13 @@ function blockText(b: Block, indent: string): string[] {
 }
 
 export function sectionText(s: Section): string[] {
-  return [`${s.title}:`, ...s.blocks.flatMap((b) => blockText(b, IND))];
+  return [`${s.title}:`, ...s.blocks.flatMap((b) => blockText(b, b.kind === 'items' ? IND + IND : IND))];
 }
 
 /** The whole document: title, verdict, sections, caution. */
 export function documentText(doc: ReportDocument): string {
-  const v = doc.verdict;
-  const out = [doc.title, '', v.title, ...v.blocks.flatMap((b) => blockText(b, IND)), ''];
+  const [summary, ...rest] = doc.verdict.blocks;
+  const out = [doc.title, '', `VERDICT ${summary?.kind === 'text' ? summary.text : doc.verdict.title}`, ...rest.flatMap((b) => blockText(b, IND)), ''];
   for (const s of doc.sections) out.push(...sectionText(s), '');
   out.push(`CAUTION: ${doc.caution}`);
   return out.join('\n');

@@ -383,7 +383,9 @@ export function defaultLabel(path: string): string {
 export function pathLabel(path: string, stateLabels: readonly string[] = []): string {
   if (path === '') return 'the design';
   const out: string[] = [];
-  for (const seg of path.split('.')) {
+  const segs = path.split('.');
+  if (segs.length > 1 && segs[0] === 'hardware') segs.shift();
+  for (const seg of segs) {
     const m = /^([A-Za-z_]+)\[(\d+)\]$/.exec(seg);
     if (m) {
       const i = Number(m[2]);

@@ -41,10 +41,10 @@ export function warningsSection(ws: readonly Warning[], stateLabels: readonly st
   return { id, title, blocks: [warningItems(ws, stateLabels, `${id}-items`)] };
 }
 
-/** The words of a load state: "Laden (laden)". */
+/** The words of a load state: '"Laden to 3500 kg" (laden)'. */
 export function stateName(s: Pick<LoadStateResult, 'label' | 'kind'>): string {
   const kind = Object.hasOwn(LOAD_KIND_LABELS, s.kind) ? LOAD_KIND_LABELS[s.kind as keyof typeof LOAD_KIND_LABELS] : s.kind;
-  return s.label.toLowerCase() === kind.toLowerCase() ? s.label : `${s.label} (${kind})`;
+  return s.label.toLowerCase() === kind.toLowerCase() ? `"${s.label}"` : `"${s.label}" (${kind})`;
 }
 
 /** The lock order per surface: adhesion, first axle, z at first lock, efficiency. */

@@ -27,7 +27,7 @@ describe('evaluate text report, hardware sections', () => {
     expect(text).toContain("bias adjuster within the driver's reach");
     expect(text).toContain('load-sensing valve and changed suspension');
     expect(text).toMatch(/source: UK IVA/);
-    expect(text.indexOf('Pitfalls (2):')).toBeLessThan(text.indexOf('Load state "unladen"'));
+    expect(text.indexOf('Pitfalls (2):')).toBeLessThan(text.indexOf('Load state "Unladen, driver only"'));
   });
   it('a design without a rear valve says there is no failed-valve case', () => {
     const d = structuredClone(demoDesign());

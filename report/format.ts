@@ -37,10 +37,11 @@ export type Kind =
   | 'power'
   | 'torque'
   | 'volume' // fluid volume
+  | 'angle'
   | 'mass_margin'; // a signed mass difference (ratings)
 
 interface Spec {
-  unit: Record<UnitSystem, Unit | '%' | '°C' | ''>;
+  unit: Record<UnitSystem, Unit | '%' | '°C' | '°F' | ''>;
   digits: Record<UnitSystem, number>;
 }
 
@@ -60,17 +61,18 @@ export const KINDS: Readonly<Record<Kind, Spec>> = {
   pedal_force: { unit: { metric: 'N', us: 'lbf' }, digits: { metric: 0, us: 0 } },
   mass: { unit: { metric: 'kg', us: 'lb' }, digits: { metric: 0, us: 0 } },
   mass_margin: { unit: { metric: 'kg', us: 'lb' }, digits: { metric: 0, us: 0 } },
-  length: { unit: { metric: 'm', us: 'in' }, digits: { metric: 3, us: 1 } },
+  length: { unit: { metric: 'm', us: 'in' }, digits: { metric: 3, us: 2 } },
   short_length: { unit: { metric: 'mm', us: 'in' }, digits: { metric: 1, us: 2 } },
   speed: { unit: { metric: 'km/h', us: 'mph' }, digits: { metric: 0, us: 0 } },
   deceleration: { unit: { metric: 'm/s2', us: 'ft/s2' }, digits: { metric: 2, us: 1 } },
-  distance: { unit: { metric: 'm', us: 'ft' }, digits: { metric: 1, us: 0 } },
+  distance: { unit: { metric: 'm', us: 'ft' }, digits: { metric: 1, us: 1 } },
   energy: { unit: { metric: 'kJ', us: 'kJ' }, digits: { metric: 1, us: 1 } },
-  temperature: { unit: { metric: '°C', us: '°C' }, digits: { metric: 0, us: 0 } },
-  temperature_rise: { unit: { metric: 'K', us: 'K' }, digits: { metric: 1, us: 1 } },
+  temperature: { unit: { metric: '°C', us: '°F' }, digits: { metric: 0, us: 0 } },
+  temperature_rise: { unit: { metric: 'K', us: '°F' }, digits: { metric: 1, us: 1 } },
   time: { unit: { metric: 's', us: 's' }, digits: { metric: 2, us: 2 } },
   power: { unit: { metric: 'kW', us: 'kW' }, digits: { metric: 0, us: 0 } },
   torque: { unit: { metric: 'N·m', us: 'lbf·ft' }, digits: { metric: 0, us: 0 } },
+  angle: { unit: { metric: 'deg', us: 'deg' }, digits: { metric: 2, us: 2 } },
   volume: { unit: { metric: 'mm3', us: 'in3' }, digits: { metric: 0, us: 3 } },
 };
 
@@ -113,14 +115,22 @@ export function convertRaw(kind: Kind, v: number, units: UnitSystem, from?: From
   const shown = KINDS[kind].unit[units];
   if (shown === '%') return from === 'pct' ? v : v * 100;
   if (shown === '' || shown === '°C') return v;
+  // degrees Fahrenheit: t/°F = 1.8 t/°C + 32, a difference of 1 K is 1.8 °F (NIST SP 811 B.8)
+  if (shown === '°F') return kind === 'temperature' ? v * 1.8 + 32 : v * 1.8;
   const si = from === undefined || from === 'ratio' || from === 'pct' || from === 'C' ? v : v * TO_SI[from];
   return si / TO_SI[shown];
 }
 
-/** The value in the shown unit, rounded to the quantity's decimals; null for no value (charts, CSV). */
-export function convert(kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit): number | null {
+/**
+ * The value in the shown unit, rounded to the quantity's decimals (plus `extraDigits`: chart coordinates carry one
+ * more, below a pixel); null for no value (charts, CSV).
+ */
+/** Chart coordinates: the shown unit with one decimal more than the text. */
+export const plot = (kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit): number | null => convert(kind, v, units, from, 1);
+
+export function convert(kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit, extraDigits = 0): number | null {
   if (!isNumber(v)) return null;
-  const d = digitsOf(kind, units);
+  const d = digitsOf(kind, units) + extraDigits;
   const r = Number(convertRaw(kind, v, units, from).toFixed(d));
   return Object.is(r, -0) ? 0 : r;
 }
@@ -183,8 +193,8 @@ export const speed = (v: Num, units: UnitSystem, from: FromUnit = 'km/h'): strin
 export const deceleration = (v: Num, units: UnitSystem, from: FromUnit = 'm/s2'): string => format('deceleration', v, units, { from });
 export const distance = (v: Num, units: UnitSystem, from: FromUnit = 'm'): string => format('distance', v, units, { from });
 export const energy = (v: Num, units: UnitSystem, from: FromUnit = 'J'): string => format('energy', v, units, { from });
-export const temperature = (v: Num): string => format('temperature', v, 'metric', { from: 'C' });
-export const temperatureRise = (v: Num): string => format('temperature_rise', v, 'metric');
+export const temperature = (v: Num, units: UnitSystem = 'metric'): string => format('temperature', v, units, { from: 'C' });
+export const temperatureRise = (v: Num, units: UnitSystem = 'metric'): string => format('temperature_rise', v, units);
 export const time = (v: Num): string => format('time', v, 'metric');
 export const power = (v: Num, from: FromUnit = 'kW'): string => format('power', v, 'metric', { from });
 export const torque = (v: Num, units: UnitSystem, from: FromUnit = 'N·m'): string => format('torque', v, units, { from });

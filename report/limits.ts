@@ -75,7 +75,7 @@ export function stoppingSection(s: LoadStateResult, i: number, units: UnitSystem
       {
         kind: 'table',
         id: `stopping-table-${i}`,
-        title: `${s.label}: total stopping distance without and with ABS`,
+        title: `${s.label}: total stopping distance (${du}) without and with ABS`,
         columns: [
           col('Speed', F.unitOf('speed', units)),
           col('Adhesion k'),
@@ -244,7 +244,7 @@ export function heatSection(r: EvaluationResult, units: UnitSystem): Section | n
       kind: 'table',
       id: 'heat-stop',
       title: `One stop from ${F.speed(h.single_stop.speed_kmh, units)} at ${F.deceleration(h.single_stop.deceleration_ms2, units)} (estimate)`,
-      columns: [col('Case'), col('Mass', F.unitOf('mass', units)), col('Energy', kj), col('Front share', '%'), col('Per front brake', kj), col('Per rear brake', kj), col('Front rotor rise', 'K'), col('Rear rotor rise', 'K')],
+      columns: [col('Case'), col('Mass', F.unitOf('mass', units)), col('Energy', kj), col('Front share', '%'), col('Per front brake', kj), col('Per rear brake', kj), col('Front rotor rise', F.unitOf('temperature_rise', units)), col('Rear rotor rise', F.unitOf('temperature_rise', units))],
       rows: h.single_stop.rows.map((x) => ({
         cells: [
           label(x.case),
@@ -260,12 +260,12 @@ export function heatSection(r: EvaluationResult, units: UnitSystem): Section | n
     },
     text(
       `Type-I-like sequence, load state ${label(ti.load_state)}: ${ti.cycles} brakings from ${F.speed(ti.v1_kmh, units)} to ${F.speed(ti.v2_kmh, units)} at ${F.deceleration(ti.deceleration_ms2, units)}, ` +
-        `one every ${F.time(ti.interval_s)}, ambient ${F.temperature(h.ambient_c)}, cooling ${F.ratio(h.cooling_coefficient_per_s)} 1/s.`,
+        `one every ${F.time(ti.interval_s)}, ambient ${F.temperature(h.ambient_c, units)}, cooling ${F.ratio(h.cooling_coefficient_per_s)} 1/s.`,
     ),
     text(
-      `This vehicle: front rotor peaks at ${F.temperature(ti.vehicle.front_final_peak_c)}, rear ${F.temperature(ti.vehicle.rear_final_peak_c)} after the last braking` +
+      `This vehicle: front rotor peaks at ${F.temperature(ti.vehicle.front_final_peak_c, units)}, rear ${F.temperature(ti.vehicle.rear_final_peak_c, units)} after the last braking` +
         (ti.base_vehicle
-          ? `; the same brakes on the base vehicle (${F.mass(ti.base_vehicle.mass_kg, units)}): front ${F.temperature(ti.base_vehicle.front_final_peak_c)}, rear ${F.temperature(ti.base_vehicle.rear_final_peak_c)}`
+          ? `; the same brakes on the base vehicle (${F.mass(ti.base_vehicle.mass_kg, units)}): front ${F.temperature(ti.base_vehicle.front_final_peak_c, units)}, rear ${F.temperature(ti.base_vehicle.rear_final_peak_c, units)}`
           : '') +
         '.',
     ),

@@ -17,7 +17,7 @@ function tableText(t: Table, indent: string): string[] {
   for (const r of t.rows) {
     const extra = r.cells.flatMap((c) => {
       const x = asCell(c);
-      return [...(x.sub ?? []), ...(x.verify ? [x.verify] : [])];
+      return [...(x.sub ?? []), ...(x.more ?? []), ...(x.verify ? [x.verify] : [])];
     });
     if (extra.length) out.push(`${indent}${IND}${cellText(r.cells[0]!)}: ${extra.join('; ')}`);
   }
@@ -42,7 +42,7 @@ function listText(t: Table, indent: string): string[] {
     out.push(`${indent}${IND}${parts.join('; ')}`);
     const pad = `${indent}${IND}${' '.repeat(13)}`;
     if (source) out.push(`${pad}${source.text} [${status?.text ?? ''}${status?.verify ? `: ${status.verify}` : ''}]`);
-    for (const x of source?.sub ?? []) out.push(`${pad}${x}`);
+    for (const x of [...(source?.sub ?? []), ...(source?.more ?? [])]) out.push(`${pad}${x}`);
   }
   return out;
 }

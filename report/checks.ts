@@ -41,7 +41,7 @@ function checkRow(c: CheckResult, units: UnitSystem): Row {
       c.applies && c.passed !== null ? F.margin(c.worst_margin, c.margin_unit, units) : F.DASH,
       c.applies && c.worst_at_braking_rate !== null ? F.brakingRate(c.worst_at_braking_rate) : F.DASH,
       c.failing_ranges.length ? `z ${c.failing_ranges.map(F.zRange).join(', ')}` : F.DASH,
-      { text: `${c.source.document}, ${c.source.paragraph}`, sub: c.note ? [c.note] : [] },
+      { text: `${c.source.document}, ${c.source.paragraph}`, ...(c.note ? { more: [c.note] } : {}) },
       statusCell(c.status),
     ],
   };

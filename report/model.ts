@@ -11,6 +11,8 @@ export interface Cell {
   code?: string;
   /** Smaller lines under the text (scenario, source note). */
   sub?: string[];
+  /** Longer notes behind the figure (how it was found): folded on the page, printed by the command line. */
+  more?: string[];
   /** Lines to flag in the cell ("verify against the current official text"). */
   verify?: string;
 }

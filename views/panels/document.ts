@@ -12,7 +12,9 @@ const TONE_CLASS: Record<Tone, string> = { ok: 'ok', fail: 'fail', nc: 'nc', na:
 
 export function cellInner(c: CellLike): SafeHtml {
   const x = asCell(c);
-  return html`${x.text}${(x.sub ?? []).map((s) => html`<br><small>${s}</small>`)}${x.verify ? html`<br><small class="verify">${x.verify}</small>` : ''}`;
+  return html`${x.text}${(x.sub ?? []).map((s) => html`<br><small>${s}</small>`)}${x.verify ? html`<br><small class="verify">${x.verify}</small>` : ''}${
+    x.more?.length ? html`<details class="cell-more"><summary>How it was found</summary>${x.more.map((m) => html`<small>${m}</small>`)}</details>` : ''
+  }`;
 }
 
 function cellHtml(c: CellLike, head: string, first: boolean): SafeHtml {

@@ -273,7 +273,7 @@ export function heatAnalysis(design: DesignFile, models: readonly StateModel[]):
       `${Math.round(s.share * 100)} % of the heat into the rotor${h.heat_to_rotor_share === undefined ? ' (assumption, from memory)' : ' (user value)'}; ` +
       `cooling coefficient ${s.b} 1/s${h.cooling_coefficient_per_s === undefined ? ' (rough default, from memory; measure yours)' : ' (user value)'}.`,
     'Regenerative braking is not credited: the friction brakes take the whole energy (full battery or a fault).',
-    `Type-I sequence after 71/320/EEC Annex II 1.3: v1 = ${h.max_speed_kmh !== undefined ? '80 % of max_speed_kmh' : 'the category cap (max_speed_kmh not given: 80 % of the maximum speed is assumed to reach it)'}, ` +
+    `Type-I sequence after 71/320/EEC Annex II 1.3: v1 = ${h.max_speed_kmh !== undefined ? '80 % of the maximum speed' : 'the category cap (vehicle maximum speed not given: 80 % of the maximum speed is assumed to reach it)'}, ` +
       `v2 = v1/2, braking at ${TYPE_I_DECELERATION} m/s².`,
   ];
   if (base && h.base_vehicle_front_axle_kg === undefined) {

@@ -6,7 +6,7 @@
  *
  * Conversion factors: core/units.ts (NIST SP 811 (2008), appendix B).
  */
-import { TO_SI, type Unit, type UnitSystem } from '../core/index.ts';
+import { type FieldMeta, type Quantity, TO_SI, type Unit, unitLabel as coreUnitLabel, type UnitSystem } from '../core/index.ts';
 
 export type { UnitSystem };
 
@@ -37,10 +37,11 @@ export type Kind =
   | 'power'
   | 'torque'
   | 'volume' // fluid volume
+  | 'angle'
   | 'mass_margin'; // a signed mass difference (ratings)
 
 interface Spec {
-  unit: Record<UnitSystem, Unit | '%' | '°C' | ''>;
+  unit: Record<UnitSystem, Unit | '%' | '°C' | '°F' | ''>;
   digits: Record<UnitSystem, number>;
 }
 
@@ -60,17 +61,18 @@ export const KINDS: Readonly<Record<Kind, Spec>> = {
   pedal_force: { unit: { metric: 'N', us: 'lbf' }, digits: { metric: 0, us: 0 } },
   mass: { unit: { metric: 'kg', us: 'lb' }, digits: { metric: 0, us: 0 } },
   mass_margin: { unit: { metric: 'kg', us: 'lb' }, digits: { metric: 0, us: 0 } },
-  length: { unit: { metric: 'm', us: 'in' }, digits: { metric: 3, us: 1 } },
+  length: { unit: { metric: 'm', us: 'in' }, digits: { metric: 3, us: 2 } },
   short_length: { unit: { metric: 'mm', us: 'in' }, digits: { metric: 1, us: 2 } },
   speed: { unit: { metric: 'km/h', us: 'mph' }, digits: { metric: 0, us: 0 } },
   deceleration: { unit: { metric: 'm/s2', us: 'ft/s2' }, digits: { metric: 2, us: 1 } },
-  distance: { unit: { metric: 'm', us: 'ft' }, digits: { metric: 1, us: 0 } },
+  distance: { unit: { metric: 'm', us: 'ft' }, digits: { metric: 1, us: 1 } },
   energy: { unit: { metric: 'kJ', us: 'kJ' }, digits: { metric: 1, us: 1 } },
-  temperature: { unit: { metric: '°C', us: '°C' }, digits: { metric: 0, us: 0 } },
-  temperature_rise: { unit: { metric: 'K', us: 'K' }, digits: { metric: 1, us: 1 } },
+  temperature: { unit: { metric: '°C', us: '°F' }, digits: { metric: 0, us: 0 } },
+  temperature_rise: { unit: { metric: 'K', us: '°F' }, digits: { metric: 1, us: 1 } },
   time: { unit: { metric: 's', us: 's' }, digits: { metric: 2, us: 2 } },
   power: { unit: { metric: 'kW', us: 'kW' }, digits: { metric: 0, us: 0 } },
   torque: { unit: { metric: 'N*m', us: 'lbf*ft' }, digits: { metric: 0, us: 0 } },
+  angle: { unit: { metric: 'deg', us: 'deg' }, digits: { metric: 2, us: 2 } },
   volume: { unit: { metric: 'mm3', us: 'in3' }, digits: { metric: 0, us: 3 } },
 };
 
@@ -84,6 +86,8 @@ const LABELS: Partial<Record<string, string>> = {
   in3: 'in³',
   deg: '°',
   '1': '',
+  'N*m': 'N·m',
+  'lbf*ft': 'lbf·ft',
 };
 
 /** How a unit is written for people: "m/s²", "psi", "" for a dimensionless number. */
@@ -113,14 +117,22 @@ export function convertRaw(kind: Kind, v: number, units: UnitSystem, from?: From
   const shown = KINDS[kind].unit[units];
   if (shown === '%') return from === 'pct' ? v : v * 100;
   if (shown === '' || shown === '°C') return v;
+  // degrees Fahrenheit: t/°F = 1.8 t/°C + 32, a difference of 1 K is 1.8 °F (NIST SP 811 B.8)
+  if (shown === '°F') return kind === 'temperature' ? v * 1.8 + 32 : v * 1.8;
   const si = from === undefined || from === 'ratio' || from === 'pct' || from === 'C' ? v : v * TO_SI[from];
   return si / TO_SI[shown];
 }
 
-/** The value in the shown unit, rounded to the quantity's decimals; null for no value (charts, CSV). */
-export function convert(kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit): number | null {
+/**
+ * The value in the shown unit, rounded to the quantity's decimals (plus `extraDigits`: chart coordinates carry one
+ * more, below a pixel); null for no value (charts, CSV).
+ */
+/** Chart coordinates: the shown unit with one decimal more than the text. */
+export const plot = (kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit): number | null => convert(kind, v, units, from, 1);
+
+export function convert(kind: Kind, v: number | null | undefined, units: UnitSystem, from?: FromUnit, extraDigits = 0): number | null {
   if (!isNumber(v)) return null;
-  const d = digitsOf(kind, units);
+  const d = digitsOf(kind, units) + extraDigits;
   const r = Number(convertRaw(kind, v, units, from).toFixed(d));
   return Object.is(r, -0) ? 0 : r;
 }
@@ -183,8 +195,8 @@ export const speed = (v: Num, units: UnitSystem, from: FromUnit = 'km/h'): strin
 export const deceleration = (v: Num, units: UnitSystem, from: FromUnit = 'm/s2'): string => format('deceleration', v, units, { from });
 export const distance = (v: Num, units: UnitSystem, from: FromUnit = 'm'): string => format('distance', v, units, { from });
 export const energy = (v: Num, units: UnitSystem, from: FromUnit = 'J'): string => format('energy', v, units, { from });
-export const temperature = (v: Num): string => format('temperature', v, 'metric', { from: 'C' });
-export const temperatureRise = (v: Num): string => format('temperature_rise', v, 'metric');
+export const temperature = (v: Num, units: UnitSystem = 'metric'): string => format('temperature', v, units, { from: 'C' });
+export const temperatureRise = (v: Num, units: UnitSystem = 'metric'): string => format('temperature_rise', v, units);
 export const time = (v: Num): string => format('time', v, 'metric');
 export const power = (v: Num, from: FromUnit = 'kW'): string => format('power', v, 'metric', { from });
 export const torque = (v: Num, units: UnitSystem, from: FromUnit = 'N*m'): string => format('torque', v, units, { from });
@@ -223,4 +235,37 @@ export function list(kind: Kind, vs: readonly Num[], units: UnitSystem = 'metric
 export function headWithUnit(head: string, kind: Kind, units: UnitSystem): string {
   const u = unitOf(kind, units);
   return u ? `${head} (${u})` : head;
+}
+
+/** The kind each quantity of the design file's quantity table (core/field-registry.ts) is shown as. */
+const KIND_OF_QUANTITY: Partial<Record<Quantity, Kind>> = {
+  mass: 'mass',
+  length: 'length',
+  short_length: 'short_length',
+  force: 'force',
+  pressure: 'pressure',
+  acceleration: 'deceleration',
+  speed: 'speed',
+  distance: 'distance',
+  ratio: 'ratio',
+  angle: 'angle',
+  energy: 'energy',
+  temperature_rise: 'temperature_rise',
+  time: 'time',
+  power: 'power',
+  torque: 'torque',
+  volume: 'volume',
+};
+
+/**
+ * A design-file value by its field's quantity and file unit (`fieldMeta(path)`): "28.0 bar", "406 psi". Quantities
+ * with no kind of their own (compliance, specific heat, rates, percentages) are written in their file unit.
+ */
+export function fieldValue(meta: Pick<FieldMeta, 'quantity' | 'unit'>, v: Num, units: UnitSystem): string {
+  const kind = KIND_OF_QUANTITY[meta.quantity];
+  if (kind) return format(kind, v, units, { from: meta.unit });
+  if (!isNumber(v)) return DASH;
+  const u = coreUnitLabel(meta.unit);
+  const n = String(Number(v.toPrecision(4)));
+  return u === '' ? n : `${n} ${u}`;
 }

@@ -135,6 +135,12 @@ export const LIMITED_BY_LABELS: Words<string> = {
   rear_lift_off: 'rear-axle lift-off',
   slip: 'wheel slip',
   pedal_limit: 'pedal-force limit',
+  // traction (core/traction.ts TractionLimitedBy)
+  front_axle: 'front axle grip',
+  rear_axle: 'rear axle grip',
+  both_axles: 'grip of both axles',
+  front_lift: 'front wheels lift',
+  no_grip: 'no grip',
 };
 export const limitedByLabel = (code: string): string => lookup(LIMITED_BY_LABELS, code) ?? plainWords(code);
 
@@ -379,7 +385,9 @@ export function defaultLabel(path: string): string {
 export function pathLabel(path: string, stateLabels: readonly string[] = []): string {
   if (path === '') return 'the design';
   const out: string[] = [];
-  for (const seg of path.split('.')) {
+  const segs = path.split('.');
+  if (segs.length > 1 && segs[0] === 'hardware') segs.shift();
+  for (const seg of segs) {
     const m = /^([A-Za-z_]+)\[(\d+)\]$/.exec(seg);
     if (m) {
       const i = Number(m[2]);
@@ -390,4 +398,30 @@ export function pathLabel(path: string, stateLabels: readonly string[] = []): st
     }
   }
   return out.join(', ');
+}
+
+/** Load states the checks derive themselves (core/checks lightly-loaded.ts, towing.ts). */
+export const DERIVED_STATE_LABELS: Words<string> = {
+  'lightly-loaded': 'lightly loaded vehicle',
+  'lightly-loaded-derived': 'lightly loaded vehicle',
+  towing: 'towing the trailer',
+};
+export const derivedStateLabel = (id: string): string => lookup(DERIVED_STATE_LABELS, id) ?? plainWords(id);
+
+/** Pedal-travel cases (core/fluid-volume.ts): the service brake, or one circuit failed. */
+export function travelCaseLabel(code: string): string {
+  if (code === 'service') return 'service brake';
+  const m = /^(.+)_circuit_failed$/.exec(code);
+  if (m) return `${circuitLabel(m[1]!)} failed`;
+  return plainWords(code);
+}
+
+/** Heat-stop cases (core/brake-heat.ts). */
+export const HEAT_CASE_LABELS: Words<string> = { vehicle: 'this vehicle', base_vehicle: 'base vehicle', laden: 'laden', unladen: 'unladen' };
+export const heatCaseLabel = (code: string): string => lookup(HEAT_CASE_LABELS, code) ?? plainWords(code);
+
+/** A hydraulic circuit (core/fluid-volume.ts circuitsOf): "front circuit", "diagonal circuit 1". */
+export function circuitLabel(id: string): string {
+  const m = /^diagonal_(\d)$/.exec(id);
+  return m ? `diagonal circuit ${m[1]}` : `${plainWords(id)} circuit`;
 }

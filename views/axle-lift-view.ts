@@ -10,7 +10,7 @@ import { type AxleLiftResultFile, BUDGET_SOURCE_WORDS, CAUTION, type FieldIssue,
 import { cgLiftOp, LIFT_MASS_TOLERANCE, LIFT_UNITS_FIELD, MAX_LIFTS } from '../form/axle-lift-form.ts';
 import { displayUnitOf, type FormValues, listIndices, unitLabel } from '../form/design-form.ts';
 import { type InputContext, numberField, selectField } from './fields.ts';
-import { fixed, shownUnit } from './format.ts';
+import * as F from '../report/format.ts';
 import { html, type SafeHtml } from './html.ts';
 import { formErrors } from '../form/errors.ts';
 
@@ -100,14 +100,13 @@ function massMismatch(weighedKg: number, stateKg: number | null | undefined, uni
   if (stateKg === null || stateKg === undefined || !(weighedKg > 0)) return null;
   const share = (stateKg - weighedKg) / weighedKg;
   if (Math.abs(share) <= LIFT_MASS_TOLERANCE) return null;
-  const m = shownUnit('mass', units);
-  return `This load state's mass (${fixed(m.from(stateKg), 0)} ${m.label}) differs from the weighed mass (${fixed(m.from(weighedKg), 0)} ${m.label}) by ${fixed(100 * Math.abs(share), 1)} %: the CG height measured at one load does not carry over to another. Weigh and lift the vehicle in this load state, or derive its CG height from the mass build-up.`;
+  return `This load state's mass (${F.mass(stateKg, units)}) differs from the weighed mass (${F.mass(weighedKg, units)}) by ${F.percentOfRatio(Math.abs(share))}: the CG height measured at one load does not carry over to another. Weigh and lift the vehicle in this load state, or derive its CG height from the mass build-up.`;
 }
 
 export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'metric', loadStates: ReadonlyArray<{ id: string; label: string; massKg?: number | null }> = []): SafeHtml {
-  const len = shownUnit('length', units);
-  const m = shownUnit('mass', units);
-  const ld = units === 'us' ? 2 : 3;
+  const len = { label: F.unitOf('length', units) };
+  const m = { label: F.unitOf('mass', units) };
+  const lv = (v: number | null | undefined) => F.format('length', v, units, { unit: false });
   const snippet = JSON.stringify({
     cg_height_m: Number(r.cg_height_m.toFixed(3)),
     cg_height_uncertainty_m: Number(r.standard_uncertainty_m.toFixed(3)),
@@ -117,11 +116,11 @@ export function axleLiftFragment(r: AxleLiftResultFile, units: UnitSystem = 'met
   const largest = r.budget.largest_source;
   return html`<h4>Result</h4>
 <table class="numbers data cg-lift-result"><tbody>
-<tr><th scope="row">CG height above ground</th><td>${fixed(len.from(r.cg_height_m), ld)} ${len.label}</td></tr>
-<tr><th scope="row">Standard uncertainty (k = 1)</th><td>${fixed(len.from(r.standard_uncertainty_m), ld)} ${len.label}</td></tr>
-<tr><th scope="row">CG behind the front axle</th><td>${fixed(len.from(r.cg_to_front_axle_m), ld)} ${len.label}</td></tr>
-<tr><th scope="row">Vehicle mass (level)</th><td>${fixed(m.from(r.mass_kg), units === 'us' ? 0 : 1)} ${m.label}</td></tr>
-${r.scatter_uncertainty_m !== null ? html`<tr><th scope="row">Scatter of the lifts about the fit</th><td>${fixed(len.from(r.scatter_uncertainty_m), ld)} ${len.label}</td></tr>` : ''}
+<tr><th scope="row">CG height above ground</th><td>${F.length(r.cg_height_m, units)}</td></tr>
+<tr><th scope="row">Standard uncertainty (k = 1)</th><td>${F.length(r.standard_uncertainty_m, units)}</td></tr>
+<tr><th scope="row">CG behind the front axle</th><td>${F.length(r.cg_to_front_axle_m, units)}</td></tr>
+<tr><th scope="row">Vehicle mass (level)</th><td>${F.mass(r.mass_kg, units)}</td></tr>
+${r.scatter_uncertainty_m !== null ? html`<tr><th scope="row">Scatter of the lifts about the fit</th><td>${F.length(r.scatter_uncertainty_m, units)}</td></tr>` : ''}
 </tbody></table>
 ${largest ? html`<p class="largest"><strong>Largest contribution: ${BUDGET_SOURCE_WORDS[largest] ?? largest}</strong> (single input: ${r.budget.largest_input}). Improve that measurement first to narrow the result.</p>` : ''}
 ${r.warnings.length ? html`<ul class="warnings">${r.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
@@ -134,10 +133,10 @@ ${loadStates.map((s) => {
     : ''}
 <h4>Each lift alone</h4>
 <div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Lift</th><th scope="col">Raised</th><th scope="col">Axle read</th><th scope="col">Angle<br><span class="unit">°</span></th><th scope="col">Change<br><span class="unit">${m.label}</span></th><th scope="col">h<br><span class="unit">${len.label}</span></th><th scope="col">u(h)<br><span class="unit">${len.label}</span></th></tr></thead>
-<tbody>${r.lifts.map((l) => html`<tr><td>${l.index + 1}</td><td>${l.raised_axle}</td><td>${l.read_axle}</td><td>${fixed(l.lift_angle_deg, 2)}</td><td>${fixed(m.from(l.reading_change_kg), 1)}</td><td>${fixed(len.from(l.cg_height_m), ld)}</td><td>${fixed(len.from(l.standard_uncertainty_m), ld)}</td></tr>`)}</tbody></table></div>
+<tbody>${r.lifts.map((l) => html`<tr><td>${l.index + 1}</td><td>${l.raised_axle}</td><td>${l.read_axle}</td><td>${F.format('angle', l.lift_angle_deg, units, { from: 'deg', unit: false })}</td><td>${F.format('mass', l.reading_change_kg, units, { unit: false })}</td><td>${lv(l.cg_height_m)}</td><td>${lv(l.standard_uncertainty_m)}</td></tr>`)}</tbody></table></div>
 <h4>Uncertainty budget</h4>
 <div class="scroll"><table class="numbers data"><thead><tr><th scope="col">Source</th><th scope="col">Contribution<br><span class="unit">${len.label}</span></th><th scope="col">Share of variance<br><span class="unit">%</span></th></tr></thead>
-<tbody>${r.budget.by_source.map((b) => html`<tr${b.source === largest ? html` class="largest"` : ''}><td>${BUDGET_SOURCE_WORDS[b.source] ?? b.source}${b.source === largest ? html` <strong>(largest)</strong>` : ''}</td><td>${fixed(len.from(b.contribution_m), units === 'us' ? 3 : 4)}</td><td>${fixed(100 * b.variance_share, 1)}</td></tr>`)}</tbody></table></div>
+<tbody>${r.budget.by_source.map((b) => html`<tr${b.source === largest ? html` class="largest"` : ''}><td>${BUDGET_SOURCE_WORDS[b.source] ?? b.source}${b.source === largest ? html` <strong>(largest)</strong>` : ''}</td><td>${lv(b.contribution_m)}</td><td>${F.format('percent', b.variance_share, units, { from: 'ratio', unit: false })}</td></tr>`)}</tbody></table></div>
 <p class="hint">In a design file, the same is written into the load state as <code>${snippet}</code>.</p>
 <p class="hint">${CAUTION}</p>`;
 }

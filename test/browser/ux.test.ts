@@ -286,3 +286,103 @@ describe('workbench on a desktop (1440×900)', { timeout: 60000 }, () => {
     expect([...new Set(desk.problems)]).toEqual([]);
   }, 60000);
 });
+
+/** What an internal code looks like in text: snake_case, UPPER_CASE codes, JSON paths, file names (issue 15 point 9). */
+const CODE_PATTERNS = [/\b[a-z][a-z0-9]*_[a-z0-9_]+\b/.source, /\b[A-Z][A-Z0-9]*_[A-Z0-9_]+\b/.source, /\b[a-z_]+\[\d+\]/.source, /\b[\w-]+\.(json|ts|js|mjs|md)\b/.source];
+/** Metric units after a number or as a column's unit, which must not show in US units (issue 15 point 6). */
+const METRIC_UNIT = /(\d\s?|\(|^)(bar|kg|N|km\/h|mm|m\/s²)(?=$|[\s),;.:·/])/;
+
+/** Scrolls through the page so every deferred panel asks for its results, then waits for them. */
+async function loadEverything(page: Page): Promise<void> {
+  const h = await page.evaluate(() => document.documentElement.scrollHeight);
+  for (let y = 0; y < h + 1500; y += 700) {
+    await page.evaluate((top) => window.scrollTo(0, top), y);
+    await page.waitForTimeout(60);
+  }
+  await page.waitForFunction(() => document.querySelectorAll('.deferred').length === 0, undefined, { timeout: 30000 }).catch(() => undefined);
+  await settled(page);
+}
+
+/** Visible text nodes matching a code pattern: not in script, closed <details> (its summary aside) or hidden parts. */
+function visibleCodes(page: Page): Promise<string[]> {
+  return page.evaluate((sources) => {
+    const pats = sources.map((s) => new RegExp(s));
+    const out: string[] = [];
+    const walker = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT);
+    for (let n = walker.nextNode(); n; n = walker.nextNode()) {
+      const t = (n.textContent ?? '').trim();
+      const el = n.parentElement;
+      if (!t || !el || !pats.some((p) => p.test(t)) || el.closest('script,style,template,option')) continue;
+      const closed = el.closest('details:not([open])');
+      if (closed && !el.closest('summary')) continue;
+      const r = el.getBoundingClientRect();
+      const cs = getComputedStyle(el);
+      if (r.width === 0 || r.height === 0 || cs.visibility === 'hidden') continue;
+      out.push(`${el.closest('[id]')?.id ?? ''}: ${t.slice(0, 120)}`);
+    }
+    return out;
+  }, CODE_PATTERNS);
+}
+
+/** The axis titles of every chart on the page (the plotly specs the page carries as JSON). */
+function axisTitles(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('.chart[data-chart]')].flatMap((c) => {
+      // a drawn chart keeps its layout on the element (plotly); one not drawn yet has it in its JSON block
+      const drawn = (c as unknown as { layout?: Record<string, { title?: { text?: string } }> }).layout;
+      const data = document.getElementById(c.getAttribute('data-chart')!);
+      const layout = drawn ?? (data ? (JSON.parse(data.textContent!) as { layout: Record<string, { title?: { text?: string } }> }).layout : {});
+      return Object.entries(layout)
+        .filter(([k]) => /^[xy]axis\d*$/.test(k))
+        .map(([, a]) => a.title?.text ?? '')
+        .filter((t) => t !== '');
+    }),
+  );
+}
+
+describe('people’s words and the chosen units (issue 15 points 6, 7, 9)', { timeout: 120000 }, () => {
+  for (const [name, which] of [['desktop 1440×900', () => desk], ['phone 390×844', () => phone]] as const) {
+    it(`${name}: no internal code visible, in metric and in US units; US units show no metric unit; every axis names its unit`, async () => {
+      const page = which().page;
+      await page.goto(`${which().base}/?fresh`);
+      await page.waitForSelector('#chart-a .chart[data-drawn]', { timeout: 30000 });
+      await loadEverything(page);
+      expect(await visibleCodes(page)).toEqual([]);
+      const metricTitles = await axisTitles(page);
+      expect(metricTitles.length).toBeGreaterThan(8);
+      for (const t of metricTitles) expect(t).toMatch(/\(.+\)$/);
+      // US units: the switch recomputes every panel
+      await choose(page, '#units', 'us');
+      await loadEverything(page);
+      expect(await visibleCodes(page)).toEqual([]);
+      const text = (sel: string) => page.locator(sel).innerText();
+      // load-state names are the user's words (e.g. "Laden to 3500 kg"), not units of the page
+      const labels = await page.evaluate(() => [...document.querySelectorAll('#design-inputs input[name$=".label"]')].map((e) => (e as HTMLInputElement).value).filter((v) => v !== ''));
+      const unlabelled = (t: string) => labels.reduce((a, l) => a.split(l).join('…'), t);
+      const checks = unlabelled(await text('#panel-checks'));
+      expect(checks).toMatch(/ft\/s²/);
+      expect(checks.split('\n').filter((l) => METRIC_UNIT.test(l))).toEqual([]);
+      // the sizing panel's sentences (part designations of metric series, e.g. a 28 mm bore, keep their names)
+      const sizing = unlabelled((await page.locator('#panel-sizing p').allInnerTexts()).join('\n'));
+      expect(sizing).toMatch(/psi|lbf|in\b/);
+      expect(sizing.split('\n').filter((l) => METRIC_UNIT.test(l))).toEqual([]);
+      const regen = unlabelled(await page.locator('#panel-limits').innerText());
+      const regenPart = regen.slice(regen.indexOf('Regenerative braking'), regen.indexOf('Stopping distance'));
+      expect(regenPart).toMatch(/lbf/);
+      expect(regenPart.split('\n').filter((l) => METRIC_UNIT.test(l))).toEqual([]);
+      const pedal = unlabelled(await text('#panel-hardware'));
+      expect(pedal).toMatch(/lbf/);
+      expect(pedal.split('\n').filter((l) => /pedal/i.test(l) && METRIC_UNIT.test(l))).toEqual([]);
+      const usTitles = await axisTitles(page);
+      for (const t of usTitles) {
+        expect(t).toMatch(/\(.+\)$/);
+        expect(t).not.toMatch(METRIC_UNIT);
+      }
+      expect(usTitles.some((t) => /psi/.test(t)) && usTitles.some((t) => /lbf/.test(t)) && usTitles.some((t) => /in\)/.test(t))).toBe(true);
+      await page.evaluate(() => window.scrollTo(0, 0));
+      await page.screenshot({ path: `test-results/ux-us-${name.startsWith('desktop') ? 'desktop' : 'phone'}.png` });
+      await choose(page, '#units', 'metric');
+      expect(which().problems).toEqual([]);
+    });
+  }
+});

@@ -1,9 +1,8 @@
-// Text sections for the limits (cli/limits-report.ts).
+// Text sections for the limits (report/limits.ts rendered by cli/text-report.ts).
 // Sources: issue 7 contract (traction, regeneration, stopping in m and ft, tester, heat in the CLI output,
 // each labelled as an estimate); brief "Rules of the house" (every output keeps the caution).
 import { describe, expect, it } from 'vitest';
 import { CAUTION, demoDesign, evaluate } from '../../core/index.ts';
-import { limitsSection } from '../../cli/limits-report.ts';
 import { textReport } from '../../cli/text-report.ts';
 
 describe('limits in the text report', () => {
@@ -12,14 +11,14 @@ describe('limits in the text report', () => {
     for (const s of ['Traction limits', 'Stopping distance', 'Roller brake tester', 'Regenerative braking (estimate)', 'Brake heat (estimate']) {
       expect(text).toContain(s);
     }
-    expect(text).toMatch(/total m\s+ft/);
+    expect(text).toMatch(/No ABS: total \(m\)\s+No ABS: total \(ft\)/);
     expect(text).toContain(`CAUTION: ${CAUTION}`);
   });
   it('without regen and heat blocks those parts are left out, the per-state parts stay', () => {
     const d = demoDesign();
     delete d.regen;
     delete d.heat;
-    const lines = limitsSection(evaluate(d)).join('\n');
+    const lines = textReport(evaluate(d));
     expect(lines).not.toContain('Regenerative braking');
     expect(lines).not.toContain('Brake heat');
     expect(lines).toContain('Traction limits');
@@ -33,7 +32,7 @@ describe('limits in the text report', () => {
     const d = demoDesign();
     d.hydraulics.rear_valve = { type: 'none' };
     d.load_states[0] = { ...d.load_states[0]!, mass_kg: 1800, front_axle_kg: 1500 };
-    const text = limitsSection(evaluate(d)).join('\n');
+    const text = textReport(evaluate(d));
     expect(text).toMatch(/Flag: the rear wheels will slip on the rollers/);
     expect(text).toContain('plan a laden or load-simulated roller test');
   });

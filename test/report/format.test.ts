@@ -36,12 +36,12 @@ describe('report/format', () => {
     // 1500 kg = 3306.9 lb
     expect(F.mass(1500, 'us')).toBe('3307 lb');
     // 2.8 m = 110.2 in; 42 mm = 1.65 in
-    expect(F.length(2.8, 'us')).toBe('110.2 in');
+    expect(F.length(2.8, 'us')).toBe('110.24 in');
     expect(F.shortLength(42, 'us')).toBe('1.65 in');
     expect(F.shortLength(42, 'metric')).toBe('42.0 mm');
     // 100 km/h = 62.14 mph; 70 m = 229.7 ft
     expect(F.speed(100, 'us')).toBe('62 mph');
-    expect(F.distance(70, 'us')).toBe('230 ft');
+    expect(F.distance(70, 'us')).toBe('229.7 ft');
     // 5.8 m/s² = 19.03 ft/s²
     expect(F.deceleration(5.8, 'us')).toBe('19.0 ft/s²');
     expect(F.deceleration(5.8, 'metric')).toBe('5.80 m/s²');

@@ -43,8 +43,8 @@ describe('inspection-case inputs', () => {
   it('the results list the checks of the derived load states and what is not checked', async () => {
     const r = await post('/workbench/update', designToValues(example, 'metric'));
     expect(r.statusCode).toBe(200);
-    expect(r.body).toContain('Derived load state towing');
-    expect(r.body).toContain('Derived load state lightly-loaded');
+    expect(r.body).toContain('Derived load state: towing the trailer');
+    expect(r.body).toContain('Derived load state: lightly loaded vehicle');
     expect(r.body).toContain('performance/towing-service');
     const noLl = { ...example };
     delete noLl.lightly_loaded;

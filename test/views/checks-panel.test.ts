@@ -13,7 +13,8 @@ describe('checks panel', () => {
     const design = splitDesign({ frontPistons: 3, rearPistons: 2 });
     design.load_states[1]!.label = 'laden <script>';
     const page = checksPanel.results!({ design, result: evaluate(design), units: 'metric', warnings: [] }).html;
-    expect(page).toContain('<code>eu-appendix/lock-order</code>');
+    expect(page).toContain('front axle locks first (71/320/EEC Appendix)');
+    expect(page).toContain('title="eu-appendix/lock-order"'); // the rule id only in a tooltip
     expect(page).toContain('FAIL');
     expect(page).toContain('z 0.500–0.800');
     expect(page).toContain('71/320/EEC Annex II Appendix, point 3.1.1, M1 requirement (diagram 1A)');

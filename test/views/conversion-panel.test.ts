@@ -28,10 +28,10 @@ describe('conversion panel', () => {
     expect(out).toContain('battery &lt;b&gt;pack&lt;/b&gt;');
     expect(out).not.toContain('<b>pack</b>');
     expect(out).toMatch(/Subtotals per group/);
-    // battery: +300 kg, front +150.0, rear +150.0 (hand-derived)
-    expect(out).toMatch(/<td>battery<\/td><td>1<\/td><td>\+300\.0<\/td><td>\+150\.0<\/td><td>\+150\.0<\/td>/);
+    // battery: +300 kg, front +150, rear +150 (hand-derived)
+    expect(out).toMatch(/<td>battery<\/td><td>1<\/td><td>\+300<\/td><td>\+150<\/td><td>\+150<\/td>/);
     expect(out).toMatch(/After conversion/);
-    expect(out).toMatch(/Add a <code>ratings<\/code> block/);
+    expect(out).toMatch(/Enter the ratings/);
   });
 
   it('shows rating margins with "over" where a rating is exceeded', () => {
@@ -39,7 +39,7 @@ describe('conversion panel', () => {
     const out = conversionResults({ design: r.design, result: evaluate(r.design), units: 'metric', warnings: r.warnings }).html;
     expect(out).toMatch(/Margins against the ratings/);
     // demo laden state: 3500 kg, front 1610 → rear 1890 kg, 890 kg over a 1000 kg rear rating
-    expect(out).toContain('-890.0 (over)');
+    expect(out).toContain('−890 (over)');
     expect(out).toContain('WARN_AXLE_OVER_RATING');
   });
 });

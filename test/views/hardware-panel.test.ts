@@ -18,7 +18,7 @@ describe('hardware panels', () => {
   it('demo: failed-valve table with the verify note, pedal-travel table and chart, no pitfall', () => {
     const c = ctx();
     const page = hardwarePanel.results!(c).html;
-    expect(page).toContain('load-sensing linkage broken');
+    expect(page).toContain('linkage broken, valve at its lowest knee');
     expect(page).toContain(VERIFY_NOTE);
     expect(page).toContain('Pedal travel and fluid volume');
     expect(page).toContain('data-chart="chart-d-data"');
@@ -27,10 +27,10 @@ describe('hardware panels', () => {
   it('a pitfall shows its message and source, user-facing text escaped', () => {
     const c = ctx((d) => {
       d.conversion = { bias_adjuster: 'driver_adjustable' };
-      d.load_states[0]!.id = 'un<b>laden';
+      d.load_states[0]!.label = 'un<b>laden'; // a load state is named by its label
     });
     expect(pitfallsPanel.results!(c).html).toContain('PITFALL_BIAS_ADJUSTER_REACHABLE');
-    expect(pitfallsPanel.results!(c).html).toContain('Source: UK IVA');
+    expect(pitfallsPanel.results!(c).html).toContain('source: UK IVA');
     const page = hardwarePanel.results!(c).html;
     expect(page).toContain('un&lt;b&gt;laden');
     expect(page).not.toContain('un<b>laden');

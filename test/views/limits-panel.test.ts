@@ -28,9 +28,9 @@ describe('limits panel', () => {
     expect(traces.length).toBe(3 * c.result.load_states.length);
     const own = traces.filter((t) => t.name.includes('(this design)'));
     expect(own.length).toBe(c.result.load_states.length);
-    expect(own.every((t) => t.name.startsWith('rear drive') && t.line.width > 2)).toBe(true);
+    expect(own.every((t) => t.name.startsWith('rear-wheel drive') && t.line.width > 2)).toBe(true);
     // all-wheel drive with an ideal split reaches μ g: the trace equals the adhesion list
-    const awd = traces.find((t) => t.name.startsWith('all drive'))!;
+    const awd = traces.find((t) => t.name.startsWith('all-wheel drive'))!;
     expect(awd.y).toEqual(c.result.adhesion_coefficients);
   });
   it('without regen and heat blocks the panel says so; user text is escaped', () => {
@@ -41,8 +41,8 @@ describe('limits panel', () => {
         d.load_states[0]!.label = 'Un<b>laden';
       }),
     ).html;
-    expect(page).toContain('No <code>regen</code> block');
-    expect(page).toContain('No <code>heat</code> block');
+    expect(page).toContain('No regenerative braking is entered');
+    expect(page).toContain('No rotor masses are entered');
     expect(page).toContain('Un&lt;b&gt;laden');
     expect(page).not.toContain('Un<b>laden');
   });

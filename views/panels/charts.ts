@@ -3,21 +3,20 @@
  * pressures), built from the engine's curves. Load states differ by colour and marker; front/rear and
  * ideal/installed differ by line style, so the charts read in grey print too.
  */
-import { DEFAULT_AT, type LoadStateResult, PA_PER_BAR } from '../../core/index.ts';
+import { DEFAULT_AT, type LoadStateResult } from '../../core/index.ts';
+import { frontLockLine, idealPointPerWeight, rearLockLine } from '../../core/chart-lines.ts';
+import * as F from '../../report/format.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText, seriesStyle, simplifyLine } from '../chart.ts';
-import { pedalUnit, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
 
-/** Chart coordinates to 3 decimals (0.001 of an axis is below a pixel); pressures and forces to 0.1. */
-const r4 = (v: number | null) => (v === null ? null : Math.round(v * 1e3) / 1e3);
-const r1 = (v: number | null) => (v === null ? null : Math.round(v * 10) / 10);
-const round = (a: ReadonlyArray<number | null>) => a.map(r4);
+/** Chart coordinates: dimensionless ones to the decimals of a braking rate (0.001 of an axis is below a pixel). */
+const r4 = (v: number | null) => F.plot('braking_rate', v, 'metric');
 /**
  * x and y of a line trace: straight runs reduced to their end points (views/chart.ts simplifyLine; the installed
  * curves, pressures and pedal force are piecewise linear in z), then rounded for plotting.
  */
-function xy(x: ReadonlyArray<number | null>, y: ReadonlyArray<number | null>, rx = r4, ry = r4): { x: (number | null)[]; y: (number | null)[] } {
+function xy(x: ReadonlyArray<number | null>, y: ReadonlyArray<number | null>, rx: (v: number | null) => number | null = r4, ry: (v: number | null) => number | null = r4): { x: (number | null)[]; y: (number | null)[] } {
   const s = simplifyLine(x, y);
   return { x: s.x.map(rx), y: s.y.map(ry) };
 }
@@ -61,13 +60,13 @@ export function chartA(ctx: ResultContext): ChartSpec {
     for (const v of [...c.ideal_rear_per_weight, ...c.rear_force_per_weight]) yMax = Math.max(yMax, v);
     if (s.critical_braking_rate !== null) {
       const z = s.critical_braking_rate;
-      const chi = s.cg_height_m / E;
+      const p = idealPointPerWeight(s.static_front_share, s.cg_height_m / E, z);
       data.push({
         type: 'scatter', mode: 'markers+text', name: `Critical point – ${name}`, legendgroup: g, showlegend: false,
-        x: [r4(z * (s.static_front_share + z * chi))], y: [r4(z * (1 - s.static_front_share - z * chi))],
-        text: [`z = ${z.toFixed(2)}`], textposition: 'top left',
+        x: [r4(p.x)], y: [r4(p.y)],
+        text: [F.zText(z)], textposition: 'top left',
         marker: { symbol: 'star', size: 14, color: st.colour, line: { width: 1, color: '#000' } },
-        hovertemplate: `critical braking rate z = ${z.toFixed(3)}<extra></extra>`,
+        hovertemplate: `critical braking rate ${F.zText(z)}<extra></extra>`,
       });
     }
   });
@@ -80,7 +79,7 @@ export function chartA(ctx: ResultContext): ChartSpec {
   for (let z = 0.1; z <= 1.0001; z += 0.1) {
     zx.push(0, r4(z), null);
     zy.push(r4(z), 0, null);
-    if (z <= xMax) ann.push({ x: r4(z), y: 0, text: `z=${z.toFixed(1)}`, showarrow: false, yanchor: 'bottom', xanchor: 'right', font: { size: 9, color: '#666' } });
+    if (z <= xMax) ann.push({ x: r4(z), y: 0, text: `z = ${F.brakingRate(z)}`, showarrow: false, yanchor: 'bottom', xanchor: 'right', font: { size: 9, color: '#666' } });
   }
   data.push({ type: 'scatter', mode: 'lines', name: 'constant braking rate z', x: zx, y: zy, line: { color: '#aaaaaa', width: 1 }, hoverinfo: 'skip' });
   // front-lock and rear-lock lines of the focus state, per adhesion
@@ -94,21 +93,22 @@ export function chartA(ctx: ResultContext): ChartSpec {
     const rx: (number | null)[] = [];
     const ry: (number | null)[] = [];
     for (const k of ctx.result.adhesion_coefficients) {
-      // front locks when T1 = k N1: x = k(ψ + χ(x + y)) -> x = k(ψ + χ y) / (1 − kχ)  (x = T1/P, y = T2/P)
-      if (k * chi < 1) {
-        fx.push(r4((k * psi) / (1 - k * chi)), r4((k * (psi + chi * yMax)) / (1 - k * chi)), null);
+      // the lines where the front and the rear axle lock at adhesion k (core/chart-lines.ts)
+      const front = frontLockLine(psi, chi, k, yMax);
+      if (front) {
+        fx.push(r4(front.x[0]), r4(front.x[1]), null);
         fy.push(0, r4(yMax), null);
       }
-      // rear locks when T2 = k N2: y = k(1 − ψ − χ(x + y)) -> y = k(1 − ψ − χ x) / (1 + kχ)
-      ry.push(r4((k * (1 - psi)) / (1 + k * chi)), r4((k * (1 - psi - chi * xMax)) / (1 + k * chi)), null);
+      const rear = rearLockLine(psi, chi, k, xMax);
+      ry.push(r4(rear.y[0]), r4(rear.y[1]), null);
       rx.push(0, r4(xMax), null);
-      ann.push({ x: 0, y: r4((k * (1 - psi)) / (1 + k * chi)), text: `k=${k}`, showarrow: false, xanchor: 'left', yanchor: 'bottom', font: { size: 9, color: '#444' } });
+      ann.push({ x: 0, y: r4(rear.y[0]), text: `k = ${F.adhesion(k)}`, showarrow: false, xanchor: 'left', yanchor: 'bottom', font: { size: 9, color: '#444' } });
     }
     const label = plotText(fs.label);
     data.push({ type: 'scatter', mode: 'lines', name: `front locks at k (${label})`, x: fx, y: fy, line: { color: '#555555', width: 1, dash: 'dash' }, hoverinfo: 'skip' });
     data.push({ type: 'scatter', mode: 'lines', name: `rear locks at k (${label})`, x: rx, y: ry, line: { color: '#555555', width: 1, dash: 'dashdot' }, hoverinfo: 'skip' });
   }
-  const layout = baseLayout('A  Braking forces over weight', 'front braking force / vehicle weight', 'rear braking force / vehicle weight');
+  const layout = baseLayout('A  Braking forces over weight', 'front braking force / vehicle weight (–)', 'rear braking force / vehicle weight (–)');
   (layout.xaxis as Record<string, unknown>).range = [0, xMax];
   (layout.yaxis as Record<string, unknown>).range = [0, yMax];
   layout.annotations = ann;
@@ -123,34 +123,37 @@ export function chartB(ctx: ResultContext): ChartSpec {
     const st = seriesStyle(i);
     const g = `b${i}`;
     const name = plotText(s.label);
-    data.push({ type: 'scatter', mode: 'lines', name: `f1 front – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_utilisation), line: { color: st.colour, width: 2.5 }, hovertemplate: 'z %{x:.2f}: f1 = %{y:.3f}<extra></extra>' });
-    data.push({ type: 'scatter', mode: 'lines', name: `f2 rear – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_utilisation), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: 'z %{x:.2f}: f2 = %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `f1 front – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_utilisation), line: { color: st.colour, width: 2.5 }, hovertemplate: 'z %{x:.3f}: f1 = %{y:.3f}<extra></extra>' });
+    data.push({ type: 'scatter', mode: 'lines', name: `f2 rear – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_utilisation), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: 'z %{x:.3f}: f2 = %{y:.3f}<extra></extra>' });
     const k = atGrid(s);
     data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r4(c.front_utilisation[j] ?? null)), g));
   });
   data.push({ type: 'scatter', mode: 'lines', name: 'k = z (ideal)', x: [0, 1], y: [0, 1], line: { color: '#000000', width: 1, dash: 'dot' }, hoverinfo: 'skip' });
-  const layout = baseLayout('B  Adhesion utilisation', 'braking rate z', 'adhesion utilised f');
+  const layout = baseLayout('B  Adhesion utilisation', 'braking rate z (–)', 'adhesion utilised f (–)');
   (layout.xaxis as Record<string, unknown>).range = [0, 1];
   (layout.yaxis as Record<string, unknown>).range = [0, 1.3];
   return { data, layout };
 }
 
 export function chartC(ctx: ResultContext): ChartSpec {
-  const pu = shownUnit('pressure', ctx.units);
-  const fu = pedalUnit(ctx.units);
+  const u = ctx.units;
+  const pu = { label: F.unitOf('pressure', u) };
+  const fu = { label: F.unitOf('pedal_force', u) };
+  const bar = (v: number | null) => F.plot('pressure', v, u, 'bar');
+  const pedal = (v: number | null) => F.plot('pedal_force', v, u);
   const data: unknown[] = [];
   ctx.result.load_states.forEach((s, i) => {
     const c = s.curves!;
     const st = seriesStyle(i);
     const g = `c${i}`;
     const name = plotText(s.label);
-    data.push({ type: 'scatter', mode: 'lines', name: `front pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_pressure_bar, r4, (v) => r1(v === null ? null : pu.from(v * PA_PER_BAR))), line: { color: st.colour, width: 2.5 }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
-    data.push({ type: 'scatter', mode: 'lines', name: `rear pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_pressure_bar, r4, (v) => r1(v === null ? null : pu.from(v * PA_PER_BAR))), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: `z %{x:.2f}: %{y:.1f} ${pu.label}<extra></extra>` });
-    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.pedal_force_n, r4, (v) => r1(v === null ? null : fu.from(v))), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.2f}: %{y:.0f} ${fu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `front pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.front_pressure_bar, r4, bar), line: { color: st.colour, width: 2.5 }, hovertemplate: `z %{x:.3f}: %{y} ${pu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `rear pressure – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.rear_pressure_bar, r4, bar), line: { color: st.colour, width: 2, dash: 'dash' }, hovertemplate: `z %{x:.3f}: %{y} ${pu.label}<extra></extra>` });
+    data.push({ type: 'scatter', mode: 'lines', name: `pedal force – ${name}`, legendgroup: g, ...xy(c.braking_rate, c.pedal_force_n, r4, pedal), yaxis: 'y2', line: { color: st.colour, width: 1.5, dash: 'dot' }, hovertemplate: `z %{x:.3f}: %{y} ${fu.label}<extra></extra>` });
     const k = atGrid(s);
-    data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => r1(pu.from(c.front_pressure_bar[j]! * PA_PER_BAR))), g));
+    data.push(markerTrace(i, k.map((j) => c.braking_rate[j]!), k.map((j) => bar(c.front_pressure_bar[j]!)), g));
   });
-  const layout = baseLayout('C  Line pressures and pedal force', 'braking rate z', `line pressure (${pu.label})`);
+  const layout = baseLayout('C  Line pressures and pedal force', 'braking rate z (–)', `line pressure (${pu.label})`);
   (layout.xaxis as Record<string, unknown>).range = [0, 1];
   layout.yaxis2 = { title: { text: `pedal force (${fu.label})`, standoff: 8 }, automargin: true, overlaying: 'y', side: 'right', zeroline: false, showgrid: false, tickmode: 'auto' }; // own round steps, not synced to the pressure ticks
   layout.margin = { l: 60, r: 60, t: 40, b: 50 };

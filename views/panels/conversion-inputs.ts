@@ -17,7 +17,7 @@ import {
   selectField,
   textField,
 } from '../fields.ts';
-import { shownUnit } from '../format.ts';
+import { unitOf } from '../../report/format.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel } from './panel.ts';
 
@@ -46,7 +46,7 @@ function itemTable(ctx: InputContext, list: 'removed' | 'added', title: string, 
     prefixLabels(ctx, `${p}.`, `Build-up ${list} ${n}: `);
     return row;
   });
-  const m = (q: 'mass' | 'length') => html`<span class="unit">(${shownUnit(q, ctx.units).label})</span>`;
+  const m = (q: 'mass' | 'length') => html`<span class="unit">(${unitOf(q, ctx.units)})</span>`;
   return html`<fieldset class="table-field"><legend>${title}</legend>
 <p class="hint">${hint} x: behind the front axle centre; height: of the item's CG above the ground; y: lateral offset, right positive.</p>
 ${idx.length ? html`<div class="scroll"><table class="inputs-table items"><thead><tr><th scope="col">Name</th><th scope="col">Mass ${m('mass')}</th><th scope="col">x ${m('length')}</th><th scope="col">Height ${m('length')}</th><th scope="col">y ${m('length')} <span class="opt">opt.</span></th><th scope="col">Group <span class="opt">opt.</span></th><th scope="col"><span class="sr">Actions</span></th></tr></thead><tbody>

@@ -2,95 +2,67 @@
  * Hardware sanity (issue 9): pitfall warnings beside the verdict, and a panel with the failed
  * distribution valve cases and the pedal-travel margin with its chart (pedal travel against braking rate).
  */
-import type { EvaluationResult } from '../../core/index.ts';
+import type { EvaluationResult, UnitSystem } from '../../core/index.ts';
+import { buildDocument, sectionOf } from '../../report/document.ts';
+import * as F from '../../report/format.ts';
+import { travelCaseLabel } from '../../report/labels.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText, seriesStyle } from '../chart.ts';
 import { type InputContext, numberField, selectField, triStateField } from '../fields.ts';
-import { fixed, shownUnit } from '../format.ts';
 import { html, type SafeHtml } from '../html.ts';
+import { blockHtml, blocksHtml, itemsHtml } from './document.ts';
 import type { Panel, ResultContext } from './panel.ts';
 
-const travelUnit = (ctx: ResultContext) => shownUnit('short_length', ctx.units, ctx.units === 'us' ? 'in' : 'mm');
-const pressureUnit = (ctx: ResultContext) => shownUnit('pressure', ctx.units);
+const docOf = (ctx: ResultContext) => buildDocument(ctx.result, { units: ctx.units });
 
-export function pitfallList(r: Pick<EvaluationResult, 'pitfalls'>): SafeHtml {
-  if (r.pitfalls.length === 0) {
+export function pitfallList(r: EvaluationResult, units: UnitSystem = 'metric'): SafeHtml {
+  const s = sectionOf(buildDocument(r, { units }), 'pitfalls');
+  if (!s) {
     return html`<p class="hint">None of the listed pitfalls applies to the facts this design states (base vehicle and conversion blocks).</p>`;
   }
-  return html`<ul class="warnings pitfalls">${r.pitfalls.map(
-    (p) => html`<li><code>${p.code}</code> <span class="path">${p.path}</span>: ${p.message}<br><small>Source: ${p.source}</small></li>`,
-  )}</ul>`;
+  return html`${s.blocks.map((b) => (b.kind === 'items' ? itemsHtml(b, 'warnings pitfalls') : blockHtml(b)))}`;
 }
 
 export function failedValveTable(ctx: ResultContext): SafeHtml {
-  const fm = ctx.result.failure_modes;
-  if (fm.length === 0) return html`<p class="hint">No rear valve is fitted, so there is no distribution device whose failure needs checking.</p>`;
-  const first = fm[0]!;
-  return html`<p>Deceleration at the ${fixed(first.pedal_force_limit_n, 0)} N pedal-force limit, not above the first wheel lock on adhesion ${fixed(first.test_adhesion, 2)},
-against the secondary-braking figure. <small>${first.source} — ${first.verify_note}.</small></p>
-<div class="scroll"><table class="failure-modes data">
-<caption class="sr">Failed distribution valve per mode and load state</caption>
-<tr><th scope="col">Failed state</th><th scope="col">Load state</th><th scope="col">Reached (m/s²)</th><th scope="col">Required (m/s²)</th><th scope="col">Verdict</th><th scope="col">Limited by</th><th scope="col">Rear locks first on k (0.2–0.8)</th></tr>
-${fm.map(
-  (f) => html`<tr><td>${f.description}</td><td>${f.load_state}</td><td>${fixed(f.max_deceleration_ms2, 2)}</td><td>${fixed(f.required_ms2, 1)}</td>
-<td class="${f.passed ? 'ok' : 'fail'}">${f.passed ? 'pass' : 'FAIL'}</td><td>${f.limited_by.replace(/_/g, ' ')}</td><td>${f.rear_first_on.length ? f.rear_first_on.join(', ') : 'none'}</td></tr>`,
-)}
-</table></div>`;
+  const s = sectionOf(docOf(ctx), 'valve-failure');
+  return s ? blocksHtml(s.blocks, { cls: 'failure-modes data' }) : html``;
 }
 
 export function pedalTravelChart(ctx: ResultContext): ChartSpec {
-  const tu = travelUnit(ctx);
+  const u = ctx.units;
   const t = ctx.result.pedal_travel;
+  const tu = F.unitOf('short_length', u);
+  const travel = (mm: number) => F.plot('short_length', mm, u, 'mm');
   const data: unknown[] = [];
   const dash: Record<string, string> = { service: 'solid' };
+  const stateLabel = (id: string) => ctx.result.load_states.find((s) => s.id === id)?.label ?? id;
   t.states.forEach((s, i) => {
     const st = seriesStyle(i);
     for (const sr of s.series) {
       data.push({
-        type: 'scatter', mode: 'lines', name: plotText(`${sr.case.replace(/_/g, ' ')} – ${s.load_state}`), legendgroup: `p${i}`,
-        x: sr.braking_rate.map((z) => Math.round(z * 1e4) / 1e4),
-        y: sr.pedal_travel_mm.map((v) => Math.round(tu.from(v * 1e-3) * 1e3) / 1e3),
+        type: 'scatter', mode: 'lines', name: plotText(`${travelCaseLabel(sr.case)} – ${stateLabel(s.load_state)}`), legendgroup: `p${i}`,
+        x: sr.braking_rate.map((z) => F.plot('braking_rate', z, u)),
+        y: sr.pedal_travel_mm.map(travel),
         line: { color: st.colour, width: sr.case === 'service' ? 2.5 : 1.5, dash: dash[sr.case] ?? (sr.case.startsWith(t.circuits[0] ?? '') ? 'dash' : 'dot') },
-        hovertemplate: `z %{x:.2f}: %{y:.1f} ${tu.label}<extra></extra>`,
+        hovertemplate: `z %{x:.3f}: %{y} ${tu}<extra></extra>`,
       });
     }
   });
-  const avail = tu.from(t.pedal_travel_available_mm * 1e-3);
-  const warn = (avail * t.warn_pct) / 100;
+  const avail = travel(t.pedal_travel_available_mm) ?? 0;
+  const warn = travel((t.pedal_travel_available_mm * t.warn_pct) / 100) ?? 0;
   data.push({ type: 'scatter', mode: 'lines', name: 'travel available', x: [0, 1], y: [avail, avail], line: { color: '#000000', width: 1 }, hoverinfo: 'skip' });
-  data.push({ type: 'scatter', mode: 'lines', name: `warning share (${t.warn_pct} %)`, x: [0, 1], y: [warn, warn], line: { color: '#777777', width: 1, dash: 'dash' }, hoverinfo: 'skip' });
-  const layout = baseLayout('D  Pedal travel', 'braking rate z', `pedal travel (${tu.label})`);
+  data.push({ type: 'scatter', mode: 'lines', name: `warning share (${F.percent(t.warn_pct)})`, x: [0, 1], y: [warn, warn], line: { color: '#777777', width: 1, dash: 'dash' }, hoverinfo: 'skip' });
+  const layout = baseLayout('D  Pedal travel', 'braking rate z (–)', `pedal travel (${tu})`);
   (layout.xaxis as Record<string, unknown>).range = [0, 1];
   return { data, layout };
 }
 
 export function pedalTravelBlock(ctx: ResultContext): SafeHtml {
-  const t = ctx.result.pedal_travel;
-  const tu = travelUnit(ctx);
-  const pu = pressureUnit(ctx);
-  const mm = (v: number) => fixed(tu.from(v * 1e-3), ctx.units === 'us' ? 2 : 1);
-  return html`<p>Travel available ${mm(t.pedal_travel_available_mm)} ${tu.label}; warning when the service test deceleration takes more than ${fixed(t.warn_pct, 0)} %.
-Master-cylinder stroke ${mm(t.master_cylinder_total_stroke_mm)} ${tu.label}; circuits ${t.circuits.join(' + ')}.</p>
-<div class="scroll"><table class="pedal-travel data">
-<caption class="sr">Pedal travel per load state, service and one circuit failed</caption>
-<tr><th scope="col">Load state</th><th scope="col">Case</th><th scope="col">At (m/s²)</th><th scope="col">Master pressure (${pu.label})</th><th scope="col">Pedal travel (${tu.label})</th><th scope="col">Used</th><th scope="col">Margin (${tu.label})</th><th scope="col">Pedal force (N)</th></tr>
-${t.states.flatMap((s) =>
-  s.cases.map((c) => {
-    const p = c.point;
-    const over = p !== null && (p.bottomed || p.margin_mm < 0 || (c.case === 'service' && p.share_of_available_pct > t.warn_pct));
-    return html`<tr class="${over ? 'fail' : ''}"><td>${s.load_state}</td><td>${c.case.replace(/_/g, ' ')}</td><td>${fixed(c.target_ms2, 1)}</td>
-<td>${p ? fixed(pu.from(p.master_pressure_bar * 1e5), 1) : '–'}</td><td>${p ? mm(p.pedal_travel_mm) : 'not reached'}</td>
-<td>${p ? `${fixed(p.share_of_available_pct, 0)} %` : '–'}${p?.bottomed ? ' (master cylinder bottoms)' : ''}${over ? html` <span class="flag">too much travel</span>` : ''}</td><td>${p ? mm(p.margin_mm) : '–'}</td>
-<td>${p ? fixed(p.pedal_force_n, 0) : '–'}${p && p.pedal_force_n > c.pedal_force_limit_n ? ` (above ${c.pedal_force_limit_n})` : ''}</td></tr>`;
-  }),
-)}
-</table></div>
-${t.warnings.length ? html`<ul class="warnings">${t.warnings.map((w) => html`<li><code>${w.code}</code> <span class="path">${w.path}</span>: ${w.message}</li>`)}</ul>` : ''}
-${t.defaults_used.length ? html`<p class="hint">Defaults used (${t.defaults_note}): ${t.defaults_used.join(', ')}.</p>` : ''}
-<p class="hint">${t.method}</p>
+  const s = sectionOf(docOf(ctx), 'pedal-travel');
+  return html`${s ? blocksHtml(s.blocks, { cls: 'pedal-travel data' }) : ''}
 ${chartBlock('chart-d', pedalTravelChart(ctx), html`Pedal travel against braking rate per load state: thick line service brake, dashed and dotted lines with one circuit failed. Black: travel available; grey dashed: the warning share.`, 'Pedal travel against braking rate')}`;
 }
 
-export const pitfallsPanel: Panel = { id: 'pitfalls', title: 'Pitfalls', results: (ctx) => pitfallList(ctx.result) };
+export const pitfallsPanel: Panel = { id: 'pitfalls', title: 'Pitfalls', results: (ctx) => pitfallList(ctx.result, ctx.units) };
 
 const NOT_STATED = ['', 'not stated'] as const;
 

@@ -7,27 +7,28 @@
  * Deferred (computed when in view). The page runs the Monte Carlo with PAGE_SAMPLES samples, only when the
  * "Run robustness analysis" button asks for it; `lockstep size` defaults to 100 000.
  */
-import { CAUTION, PA_PER_BAR, rearValveFamily, type SizingResult, sizeDesign, type UnitSystem, valveSettings, VERIFY_NOTE } from '../../core/index.ts';
-import { displayUnitOf, formatFieldNumber, unitLabel } from '../../form/design-form.ts';
+import { CAUTION, rearValveFamily, type SizingResult, sizeDesign, type UnitSystem, valveSettings, VERIFY_NOTE } from '../../core/index.ts';
 import { sizingOp, SIZING_UNDO_FIELD } from '../../form/sizing-apply.ts';
 import { baseLayout, chartBlock, type ChartSpec, plotText } from '../chart.ts';
 import { numberField, selectField } from '../fields.ts';
-import { fixed, shownUnit } from '../format.ts';
+import * as F from '../../report/format.ts';
+import { ruleLabel, valveTypeLabel } from '../../report/labels.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { InputContext, Panel, ResultContext } from './panel.ts';
 
 export const PAGE_SAMPLES = 1000;
 export const PAGE_SEED = 1;
 
-const pct = (x: number | null | undefined) => (x === null || x === undefined ? '–' : `${fixed(100 * x, 1)} %`);
-const signed = (x: number | null | undefined, d = 3) => (x === null || x === undefined ? '–' : `${x >= 0 ? '+' : '−'}${fixed(Math.abs(x), d)}`);
+const pct = (x: number | null | undefined) => F.percentOfRatio(x);
+/** A margin in adhesion units, signed. */
+const signed = (x: number | null | undefined) => F.format('utilisation', x, 'metric', { signed: true });
 
 function applyButton(path: string, value: unknown, label: string): SafeHtml {
   return html`<button type="button" class="op apply" name="_op" value="${sizingOp(path, value)}" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" title="${`Write this into the design (${path}); Undo appears under the tolerances`}">${label}</button>`;
 }
 
-function bandChart(r: SizingResult): ChartSpec {
-  const names = r.per_rule.map((p) => `${p.rule} · ${p.load_state}`);
+function bandChart(r: SizingResult, stateLabel: (id: string) => string): ChartSpec {
+  const names = r.per_rule.map((p) => `${ruleLabel(p.rule)} · ${stateLabel(p.load_state)}`);
   const data: unknown[] = [];
   r.per_rule.forEach((p, i) => {
     for (const [lo, hi] of p.intervals) {
@@ -38,7 +39,7 @@ function bandChart(r: SizingResult): ChartSpec {
   if (r.band) shapes.push({ type: 'rect', xref: 'x', yref: 'paper', x0: r.band.min_front_share, x1: r.band.max_front_share, y0: 0, y1: 1, fillcolor: '#009E73', opacity: 0.15, line: { width: 0 } });
   const line = (x: number | null, colour: string, dash: string) => (x === null ? null : { type: 'line', xref: 'x', yref: 'paper', x0: x, x1: x, y0: 0, y1: 1, line: { color: colour, width: 2, dash } });
   for (const s of [line(r.current_front_share, '#D55E00', 'dash'), line(r.recommended_front_share, '#000000', 'solid')]) if (s) shapes.push(s);
-  const layout = baseLayout('Front shares that pass, per rule and load state', 'front share of the braking force (fixed split)', '');
+  const layout = baseLayout('Front shares that pass, per rule and load state', 'front share of the braking force, fixed split (%)', '');
   layout.xaxis = { ...(layout.xaxis as object), range: [0, 1], tickformat: '.0%' };
   layout.yaxis = { ...(layout.yaxis as object), automargin: true, title: { text: '' } };
   layout.barmode = 'overlay';
@@ -52,14 +53,14 @@ function valveMap(r: SizingResult, units: UnitSystem): ChartSpec | null {
   if (!vs) return null;
   const m = vs.map;
   // the knee axis in the page's pressure unit (plotly then picks round tick steps in that unit)
-  const pu = shownUnit('pressure', units);
-  const knee = m.knee_bar.map((k) => Math.round(pu.from(k * PA_PER_BAR) * 10) / 10);
-  const layout = baseLayout('Proportioning valve: smallest margin over rules and load states', `knee (${pu.label})`, 'ratio above the knee');
+  const pu = { label: F.unitOf('pressure', units) };
+  const knee = m.knee_bar.map((k) => F.plot('pressure', k, units, 'bar'));
+  const layout = baseLayout('Proportioning valve: smallest margin over rules and load states', `knee (${pu.label})`, 'ratio above the knee (–)');
   return {
     data: [
       { type: 'heatmap', x: knee, y: m.ratio, z: m.smallest_margin, zmid: 0, colorscale: 'RdBu', colorbar: { title: { text: 'margin' } }, hovertemplate: `knee %{x} ${pu.label}, ratio %{y}: %{z:.3f}<extra></extra>` },
       { type: 'contour', x: knee, y: m.ratio, z: m.smallest_margin, showscale: false, contours: { start: 0, end: 0, size: 1, coloring: 'lines' }, line: { color: '#000', width: 2 }, hoverinfo: 'skip', name: 'margin 0 (edge of the passing region)' },
-      { type: 'scatter', mode: 'markers', x: [Math.round(pu.from(m.chosen.knee_bar * PA_PER_BAR) * 10) / 10], y: [m.chosen.ratio], marker: { symbol: 'star', size: 14, color: '#E69F00', line: { color: '#000', width: 1 } }, name: 'chosen setting' },
+      { type: 'scatter', mode: 'markers', x: [F.plot('pressure', m.chosen.knee_bar, units, 'bar')], y: [m.chosen.ratio], marker: { symbol: 'star', size: 14, color: '#E69F00', line: { color: '#000', width: 1 } }, name: 'chosen setting' },
     ],
     layout,
   };
@@ -71,7 +72,7 @@ function histogram(r: SizingResult): ChartSpec {
   const width = h.edges.length > 1 ? h.edges[1]! - h.edges[0]! : 0;
   const shapes: unknown[] = [{ type: 'line', xref: 'x', yref: 'paper', x0: 0, x1: 0, y0: 0, y1: 1, line: { color: '#D55E00', width: 2 } }];
   if (r.robustness.p05_margin !== null) shapes.push({ type: 'line', xref: 'x', yref: 'paper', x0: r.robustness.p05_margin, x1: r.robustness.p05_margin, y0: 0, y1: 1, line: { color: '#000', width: 1, dash: 'dot' } });
-  const layout = baseLayout('Smallest margin of the perturbed vehicles', 'smallest margin (adhesion units)', 'samples');
+  const layout = baseLayout('Smallest margin of the perturbed vehicles', 'smallest margin (adhesion units)', 'samples (number)');
   layout.shapes = shapes;
   return { data: [{ type: 'bar', x: centres, y: h.counts, width: width, marker: { color: '#0072B2' }, hovertemplate: '%{x:.4f}: %{y}<extra></extra>' }], layout };
 }
@@ -86,25 +87,21 @@ function optionsTable(r: SizingResult): SafeHtml {
   )}</tbody></table></div>`;
 }
 
-function boreSection(r: SizingResult): SafeHtml {
+function boreSection(r: SizingResult, units: UnitSystem): SafeHtml {
   const b = r.master_cylinder;
   if (!b) return html``;
   const ok = b.candidates.filter((c) => c.meets);
   return html`<h3>Master-cylinder bore</h3>
-<p>${b.rule}: ${fixed(b.required_deceleration_ms2, 2)} m/s² needs ${fixed(b.pressure_for_required_bar, 1)} bar. Bores from ${fixed(b.min_bore_mm, 1)} to ${fixed(b.max_bore_mm, 1)} mm keep the pedal force at most ${fixed(b.pedal_force_target_n, 0)} N (limit ${b.pedal_force_limit_n} N) and the line pressure at the limit at most ${b.max_line_pressure_bar} bar (common practice, no source). Now ${b.current_bore_mm} mm.</p>
+<p>${ruleLabel(b.rule)}: ${F.deceleration(b.required_deceleration_ms2, units)} needs ${F.pressure(b.pressure_for_required_bar, units, 'bar')}. Bores from ${F.shortLength(b.min_bore_mm, units)} to ${F.shortLength(b.max_bore_mm, units)} keep the pedal force at most ${F.pedalForce(b.pedal_force_target_n, units)} (limit ${F.pedalForce(b.pedal_force_limit_n, units)}) and the line pressure at the limit at most ${F.pressure(b.max_line_pressure_bar, units, 'bar')} (common practice, no source). Now ${F.shortLength(b.current_bore_mm, units)}.</p>
 ${b.notes.map((n) => html`<p class="hint">${n}</p>`)}
-${ok.length ? html`<div class="scroll"><table class="data"><thead><tr><th scope="col">Bore</th><th scope="col">Pedal force (N)</th><th scope="col">Pressure at the limit (bar)</th><th scope="col"></th></tr></thead><tbody>${ok.map((c) => html`<tr><th scope="row">${c.label}</th><td>${fixed(c.pedal_force_n, 0)}</td><td>${fixed(c.pressure_at_limit_bar, 1)}</td><td>${applyButton(b.path, Math.round(c.bore_mm * 1000) / 1000, 'Apply')}</td></tr>`)}</tbody></table></div>` : ''}`;
+${ok.length ? html`<div class="scroll"><table class="data"><thead><tr><th scope="col">Bore</th><th scope="col">Pedal force (${F.unitOf('pedal_force', units)})</th><th scope="col">Pressure at the limit (${F.unitOf('pressure', units)})</th><th scope="col"></th></tr></thead><tbody>${ok.map((c) => html`<tr><th scope="row">${c.label}</th><td>${F.format('pedal_force', c.pedal_force_n, units, { unit: false })}</td><td>${F.format('pressure', c.pressure_at_limit_bar, units, { from: 'bar', unit: false })}</td><td>${applyButton(b.path, Math.round(c.bore_mm * 1000) / 1000, 'Apply')}</td></tr>`)}</tbody></table></div>` : ''}`;
 }
 
 function valveSection(r: SizingResult, units: UnitSystem): SafeHtml {
   if (!r.valve || !r.valve_search) return html``;
   const v = r.valve.valve;
   // the valve in words, from its type's module and the quantity table (core/valves/, core/field-meta.ts)
-  const settings = valveSettings(v).map((st) => {
-    const name = `hydraulics.rear_valve.${st.path}`;
-    const unit = unitLabel(displayUnitOf(name, units));
-    return `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${formatFieldNumber(name, st.value, units)}${unit ? ` ${unit}` : ''}`;
-  });
+  const settings = valveSettings(v).map((st) => `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${F.fieldValue(st.meta, st.value, units)}`);
   const text = `${rearValveFamily(v).name}${settings.length ? `, ${settings.join(', ')}` : ''}`;
   const map = valveMap(r, units);
   return html`<h3>Rear valve</h3>
@@ -135,7 +132,7 @@ function robustnessSection(r: SizingResult, asked: boolean): SafeHtml {
   }
   const rb = r.robustness;
   return html`<h3>Robustness</h3>
-<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${fixed(100 * rb.probability_of_failure, 1)} %</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ? rb.sensitivity[0]!.label : '–'}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
+<p>For ${rb.applies_to}: ${rb.samples} perturbed vehicles (seed ${rb.seed}, ${rb.distribution}; ± limits as 2 standard deviations): a rule fails in some load state in <strong>${F.percentOfRatio(rb.probability_of_failure)}</strong> of them; 5th-percentile smallest margin ${signed(rb.p05_margin)}; worst corner ${signed(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail). Matters most: <strong>${rb.most_influential ? rb.sensitivity[0]!.label : F.DASH}</strong>. Tolerances: ${rb.tolerances_source}. The command line runs 100 000 samples.</p>
 ${chartBlock('chart-sizing-histogram', histogram(r), html`Red line: margin 0 (below it a rule fails); dotted: 5th percentile.`, 'Histogram of the smallest margin over the perturbed vehicles')}
 <div class="scroll"><table class="data"><caption>Sensitivity: each input alone at its ± limit</caption><thead><tr><th scope="col">Input</th><th scope="col">± limit</th><th scope="col">Margin at −</th><th scope="col">Margin at +</th></tr></thead>
 <tbody>${rb.sensitivity.map((s) => html`<tr><th scope="row">${s.label}</th><td>${s.tolerance}</td><td>${signed(s.margin_at_minus)}</td><td>${signed(s.margin_at_plus)}</td></tr>`)}</tbody></table></div>`;
@@ -146,9 +143,9 @@ export function sizingResults(ctx: ResultContext): SafeHtml {
   const r = sizeDesign(ctx.design, { samples: asked ? PAGE_SAMPLES : 0, seed: PAGE_SEED });
   return html`<p class="sum"><strong>${r.band ? `Fixed splits from ${pct(r.band.min_front_share)} to ${pct(r.band.max_front_share)} pass every rule in every load state.` : 'No fixed split passes every rule in every load state: the band is empty.'}</strong>
 Now ${pct(r.current_front_share)} at low pressure (${r.current.passes ? 'passes' : 'fails'}, smallest margin ${signed(r.current.smallest_margin)}); recommended ${pct(r.recommended_front_share)}.</p>
-${chartBlock('chart-sizing-band', bandChart(r), html`Blue bars: front shares that pass each rule in each load state (fixed split, thresholds and valves left out). Green: the common band. Dashed: this design's share at low pressure; solid black: the recommended share (largest smallest margin).`, 'Bars of passing front shares per rule and load state with the common band')}
+${chartBlock('chart-sizing-band', bandChart(r, (id) => ctx.result.load_states.find((x) => x.id === id)?.label ?? id), html`Blue bars: front shares that pass each rule in each load state (fixed split, thresholds and valves left out). Green: the common band. Dashed: this design's share at low pressure; solid black: the recommended share (largest smallest margin).`, 'Bars of passing front shares per rule and load state with the common band')}
 ${optionsTable(r)}
-${boreSection(r)}
+${boreSection(r, ctx.units)}
 ${valveSection(r, ctx.units)}
 ${barSection(r)}
 ${robustnessSection(r, asked)}

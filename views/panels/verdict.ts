@@ -3,27 +3,13 @@
  * regeneration cases), green only when it is "pass", each failing or not-checked item linked to its row in the checks
  * table; then per load state the lock order on every surface, critical braking rate, lowest efficiency, warnings.
  */
-import { type CheckRef, type EvaluationResult, type LoadStateResult, type LockResult, overallWord, type Verdict } from '../../core/index.ts';
-import { fixed } from '../format.ts';
+import { type CheckRef, type EvaluationResult, type LoadStateResult, overallWord, type UnitSystem, type Verdict } from '../../core/index.ts';
+import { buildDocument, sectionOf, type Text } from '../../report/document.ts';
+import * as F from '../../report/format.ts';
+import { lockSummary, lockTable, stateFacts, warningItems } from '../../report/states.ts';
+import { blockHtml, itemsHtml } from './document.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { Panel, ResultContext } from './panel.ts';
-
-const AXLE_TEXT: Record<LockResult['first_axle'], string> = { front: 'front', rear: 'REAR', both: 'both', none: 'lift-off' };
-
-/** One sentence on the lock order of a load state. */
-export function lockSummary(s: LoadStateResult): { tone: 'ok' | 'warn'; text: string } {
-  const rear = s.lock.filter((l) => l.first_axle === 'rear');
-  const none = s.lock.filter((l) => l.first_axle === 'none');
-  const ks = (ls: LockResult[]) => ls.map((l) => l.adhesion).join(', ');
-  if (rear.length === 0 && none.length === 0) {
-    const both = s.lock.filter((l) => l.first_axle === 'both');
-    return { tone: 'ok', text: `The front axle locks first on every surface analysed${both.length ? ` (both together on k = ${ks(both)})` : ''}.` };
-  }
-  const parts: string[] = [];
-  if (rear.length) parts.push(`the rear axle locks first on k = ${ks(rear)}`);
-  if (none.length) parts.push(`the rear wheels lift off before any lock on k = ${ks(none)}`);
-  return { tone: 'warn', text: `Attention: ${parts.join('; ')}.` };
-}
 
 function itemLine(ref: CheckRef, word: string, cls: string): SafeHtml {
   return html`<li class="ov-${cls}"><a href="#${ref.anchor}"><strong class="ov-word">${word}</strong> ${ref.description}</a></li>`;
@@ -54,35 +40,35 @@ ${v.advisories.length ? html`<details class="ov-info"><summary>For information, 
 </section>`;
 }
 
-function stateVerdict(s: LoadStateResult, i: number, overallPass: boolean): SafeHtml {
+function stateVerdict(s: LoadStateResult, i: number, overallPass: boolean, units: UnitSystem, warnings: SafeHtml): SafeHtml {
   const sum = lockSummary(s);
-  const crit = s.critical_braking_rate;
   // green only when the whole design passes (a load state whose lock order is right can still fail a check)
   const tone = sum.tone === 'ok' ? (overallPass ? 'ok' : 'neutral') : 'warn';
+  const facts: Text[] = stateFacts(s, units);
   return html`<article class="verdict ${tone}" id="verdict-${i}" aria-labelledby="verdict-${i}-h">
-<h3 id="verdict-${i}-h"><span class="swatch s${i % 8}" aria-hidden="true"></span>${s.label} <small>(${s.kind}, id ${s.id})</small></h3>
+<h3 id="verdict-${i}-h"><span class="swatch s${i % 8}" aria-hidden="true"></span>${s.label} <small>(${s.kind})</small></h3>
 <p class="sum"><strong>${sum.tone === 'ok' ? 'Front first' : 'Check'}</strong> ${sum.text}${sum.tone === 'ok' && !overallPass ? ' Lock order only: see the verdict above.' : ''}</p>
 <dl class="facts">
-<div><dt>Critical braking rate</dt><dd>${crit === null ? 'none' : `z = ${fixed(crit, 3)}`}</dd></div>
-<div><dt>Lowest braking efficiency</dt><dd>${s.lowest_efficiency ? `${fixed(s.lowest_efficiency.efficiency * 100, 1)} % on k = ${s.lowest_efficiency.adhesion}` : '–'}</dd></div>
-<div><dt>Rear lift-off at</dt><dd>z = ${fixed(s.rear_lift_off_braking_rate, 2)}</dd></div>
+<div><dt>Critical braking rate</dt><dd>${s.critical_braking_rate === null ? 'none' : F.zText(s.critical_braking_rate)}</dd></div>
+<div><dt>Lowest braking efficiency</dt><dd>${s.lowest_efficiency ? `${F.efficiency(s.lowest_efficiency.efficiency)} on k = ${F.adhesion(s.lowest_efficiency.adhesion)}` : F.DASH}</dd></div>
+<div><dt>Rear lift-off at</dt><dd>${F.zText(s.rear_lift_off_braking_rate)}</dd></div>
 </dl>
-<div class="scroll"><table class="lock">
-<caption class="sr">First axle to lock per surface, ${s.label}</caption>
-<tr><th scope="row">Adhesion k</th>${s.lock.map((l) => html`<td>${l.adhesion}</td>`)}</tr>
-<tr><th scope="row">Locks first</th>${s.lock.map((l) => html`<td class="ax-${l.first_axle}">${AXLE_TEXT[l.first_axle]}</td>`)}</tr>
-<tr><th scope="row">at z</th>${s.lock.map((l) => html`<td>${fixed(l.braking_rate, 3)}</td>`)}</tr>
-<tr><th scope="row">Efficiency</th>${s.lock.map((l) => html`<td>${fixed(l.efficiency * 100, 0)} %</td>`)}</tr>
-</table></div>
-${s.critical_braking_rates.length > 1 ? html`<p class="hint">The installed curve crosses the ideal at z = ${s.critical_braking_rates.map((z) => fixed(z, 3)).join(', ')}.</p>` : ''}
-${s.warnings.length ? html`<ul class="warnings">${s.warnings.map((w) => html`<li><code>${w.code}</code> ${w.message}</li>`)}</ul>` : ''}
+${blockHtml(lockTable(s, i), { cls: 'lock', caption: 'sr' })}
+<details class="state-facts"><summary>More figures of this load state</summary>${facts.map((f) => html`<p>${f.text}</p>`)}</details>
+${warnings}
 </article>`;
 }
 
 export function verdicts(ctx: ResultContext): SafeHtml {
   const pass = ctx.result.verdict.overall === 'pass';
-  return html`<div class="verdicts">${ctx.result.load_states.map((s, i) => stateVerdict(s, i, pass))}</div>
-${ctx.warnings.length ? html`<ul class="warnings design-warnings">${ctx.warnings.map((w) => html`<li><code>${w.code}</code> ${w.path ? html`<span class="path">${w.path}</span>: ` : ''}${w.message}</li>`)}</ul>` : ''}`;
+  const doc = buildDocument(ctx.result, { units: ctx.units });
+  const stateWarnings = (i: number) => {
+    const b = sectionOf(doc, `state-${i}`)?.blocks.find((x) => x.kind === 'items');
+    return b && b.kind === 'items' ? itemsHtml(b) : html``;
+  };
+  const labels = ctx.result.load_states.map((s) => s.label);
+  return html`<div class="verdicts">${ctx.result.load_states.map((s, i) => stateVerdict(s, i, pass, ctx.units, stateWarnings(i)))}</div>
+${ctx.warnings.length ? itemsHtml(warningItems(ctx.warnings, labels, 'design-warnings'), 'warnings design-warnings') : ''}`;
 }
 
 export const verdictPanel: Panel = { id: 'verdict', title: 'Lock order per load state', results: verdicts };

@@ -1,7 +1,7 @@
 /**
  * Brake gain per axle.
  * Sources: design-file spec "Physics" (disc G = 2·2·μ·A_clamp·r_eff/R, A_clamp = Σ piston areas for a
- * sliding caliper, half of it for a fixed one; drum G = 2·C*·A_wc·r_drum/R); 
+ * sliding caliper, half of it for a fixed one; drum G = 2·C*·A_wc·r_drum/R);
  * T. H. Wentzell, Machine Design, Example 16.4, p. 361, as
  * recomputed in the FOSSEE companion); NIST SP 811 appendix B.8 for the inch and pound-force.
  */

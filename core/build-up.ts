@@ -2,11 +2,12 @@
  * Mass build-up of a conversion: from the weighed base vehicle, minus what was taken out, plus what
  * went in, to the unladen and laden states.
  *
- * Statics (hand-derived; worked-examples.md E7 and E8): with x measured from the front axle centre,
- * rearward positive, an item of mass m at x loads the rear axle with m x / L and the front axle with
- * m − m x / L (an item ahead of the front axle, x < 0, adds more than its own mass to the front and
- * unloads the rear). Masses add; so do their moments about the front axle (Σ m x) and about the ground
- * (Σ m z), giving the CG position x = Σ m x / Σ m and CG height h = Σ m z / Σ m. Laterally (y positive
+ * Statics (hand-derived; checked against R. N. Jazar, Vehicle Dynamics: Theory and Application (2008),
+ * Example 40, and a medium-duty truck body-builder manual, appendix "Weight Distribution"): with x measured
+ * from the front axle centre, rearward positive, an item of mass m at x loads the rear axle with m x / L and
+ * the front axle with m − m x / L (an item ahead of the front axle, x < 0, adds more than its own mass to the
+ * front and unloads the rear). Masses add; so do their moments about the front axle (Σ m x) and about the
+ * ground (Σ m z), giving the CG position x = Σ m x / Σ m and CG height h = Σ m z / Σ m. Laterally (y positive
  * to the right, track t) an item loads the right wheels with m (1/2 + y/t) and the left with m (1/2 − y/t).
  */
 import { BuildUp, type BuildUpItem, type DerivedFrom } from './build-up-schema.ts';

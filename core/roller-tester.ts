@@ -4,14 +4,15 @@
  *
  * On the rollers the vehicle stands still, one axle at a time; the axle carries its static load P_i
  * (no load transfer). The wheels slip on the rollers once the axle's brake force reaches μ_roller · P_i,
- * so that is the largest force the tester can record (roller adhesion about 0.85: field-practice.md,
- * "Roller and plate tester results" [practitioner source]). The brake force at line pressure follows the
- * installed brakes: front T1 = G1 (p − threshold1), rear T2 = G2 (valve(p) − threshold2).
+ * so that is the largest force the tester can record (roller adhesion about 0.85: practitioner reports,
+ * no published source). The brake force at line pressure follows the installed brakes:
+ * front T1 = G1 (p − threshold1), rear T2 = G2 (valve(p) − threshold2).
  * The tester records, per axle, the smaller of the slip force and the force at the pedal-force limit
- * (default: the category's service-brake pedal limit, 500 N M1 / 700 N others, braking-requirements.md
- * 5.2 [P]). Service-brake percentage = (recorded front + rear) / (test mass · g) · 100, the roller
- * tester's efficiency (field-practice.md 1.3: total roller brake effort ÷ test weight); required 50 %
- * by default (field-practice.md 1.3, the periodic test's service-brake figure [practitioner source]).
+ * (default: the category's service-brake pedal limit, 500 N M1 / 700 N others, 71/320/EEC Annex II
+ * 2.1.1, partly verified; verify against the current official text). Service-brake percentage =
+ * (recorded front + rear) / (test mass · g) · 100, the roller tester's efficiency (UK MOT practice:
+ * total roller brake effort ÷ test weight); required 50 % by default (the UK MOT service-brake
+ * figure: practitioner reports, no published source).
  */
 import { G_N, PA_PER_BAR } from './constants.ts';
 import type { DesignFile } from './design.ts';
@@ -21,9 +22,9 @@ import { masterPressureForRear } from './valves/index.ts';
 import type { StateModel } from './state-model.ts';
 
 export const TESTER_DEFAULTS = {
-  /** field-practice.md, "Roller and plate tester results" [practitioner source]. */
+  /** Practitioner reports, no published source. */
   roller_adhesion: 0.85,
-  /** field-practice.md 1.3, service brake ≥ 50 % [practitioner source]. */
+  /** UK MOT service brake ≥ 50 %: practitioner reports, no published source. */
   required_pct: 50,
 } as const;
 

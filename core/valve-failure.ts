@@ -1,6 +1,7 @@
 /**
- * Failure of the distribution device (71/320/EEC Annex II Appendix point 6, status [P] in the
- * reference sheet): when compliance relies on a special device such as a rear valve, a failure of its
+ * Failure of the distribution device (71/320/EEC Annex II Appendix point 6, partly verified: read in
+ * the EU agricultural-tractor text of the same structure; verify against the current official text):
+ * when compliance relies on a special device such as a rear valve, a failure of its
  * control must still let the vehicle stop under the secondary-braking conditions (R13 Annex 4 2.2).
  *
  * Failed states per rear-valve type, each built as a `Distribution` so lock order works unchanged:

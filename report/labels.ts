@@ -229,7 +229,7 @@ export const PROVENANCE_LABELS: Words<ProvenanceSource> = {
 
 export const VERDICT_LABELS: Words<VerdictOverall> = { pass: 'pass', fail: 'fail', incomplete: 'incomplete' };
 
-/** How sure the rule's text is (reference sheet [V], [P], [M]). */
+/** How sure the rule's text is (verified / partly verified / from memory). */
 export const RULE_STATUS_LABELS: Words<RuleStatus> = {
   verified: 'verified',
   partial: 'partly verified',

@@ -1,11 +1,11 @@
 /**
- * The FMVSS No. 135 lightly loaded vehicle (reference sheet 6.2, from memory): the unloaded vehicle
- * plus 180 kg for the driver and the test instruments. Whenever a rule of the fmvss135 set is selected
- * it is derived from the `lightly_loaded` block as a load state of kind "unladen" and checked beside
- * the design's own load states by every FMVSS rule that covers unladen states. Without the block those
- * rules get a "not checked" result naming it (never a pass). Axle loads: the added mass m_a at a
- * distance x behind the front axle puts m_a·(1 − x/E) on the front axle; the CG height is the
- * mass-weighted mean h = (m_u·h_u + m_a·h_a)/(m_u + m_a).
+ * The FMVSS No. 135 lightly loaded vehicle (49 CFR 571.135 S7.2 / S7.4, from memory; verify against the
+ * current official text): the unloaded vehicle plus 180 kg for the driver and the test instruments. Whenever
+ * a rule of the fmvss135 set is selected it is derived from the `lightly_loaded` block as a load state of
+ * kind "unladen" and checked beside the design's own load states by every FMVSS rule that covers unladen
+ * states. Without the block those rules get a "not checked" result naming it (never a pass). Axle loads: the
+ * added mass m_a at a distance x behind the front axle puts m_a·(1 − x/E) on the front axle; the CG height is
+ * the mass-weighted mean h = (m_u·h_u + m_a·h_a)/(m_u + m_a).
  */
 import { LIGHTLY_LOADED_ADDED_KG } from '../cases-schema.ts';
 import type { DesignFile, LoadState } from '../design.ts';

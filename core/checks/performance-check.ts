@@ -6,7 +6,8 @@
  * it is capped by the first lock of the braked wheels on the test surface (test_adhesion), or, with
  * ABS working, by the surface adhesion itself. a = z·g is compared with the required deceleration:
  * the stated minimum and the one implied by the stopping-distance limit, s ≤ c·v + v²/(25.92·a)
- * (reference sheet 5.1: v in km/h, a in m/s², the c·v term is the text's allowance for reaction).
+ * (71/320/EEC Annex II 1.1.2 and UN R13 Annex 4 1.1.2, verified: v in km/h, a in m/s², the c·v term
+ * is the text's allowance for reaction).
  *
  * Parking: on a gradient of q per cent, θ = atan(q/100); the holding force is m g sin θ; the normal
  * load on the braked axle with the load transfer on the slope is, facing uphill,
@@ -40,7 +41,7 @@ export function testSurfaceFor(design: DesignFile, rule: DecelerationRule | Park
 /** Decelerations within this of the requirement count as met, m/s². */
 export const DECELERATION_TOLERANCE = 1e-9;
 
-/** Conversion in the stopping-distance formulas: s = v² / (25.92 · a), v in km/h (reference sheet 5.1). */
+/** Conversion in the stopping-distance formulas: s = v² / (25.92 · a), v in km/h (71/320/EEC Annex II 1.1.2). */
 export const KMH2_PER_M_TO_MS2 = 25.92;
 
 export interface RequiredDeceleration {

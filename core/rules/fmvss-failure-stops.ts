@@ -1,9 +1,10 @@
 /**
- * FMVSS No. 135 stops with part of the system failed (reference sheet 6.3, all [M]): from 100 km/h with
- * pedal force ≤ 500 N, variable-proportioning system failed within 110 m (0.10V + 0.0100V²), antilock
- * functional failure within 85 m (0.10V + 0.0075V²). "Variable brake proportioning system" (definition
- * in 571.135 [V]): devices that change the front/rear pressure ratio automatically with load or
- * deceleration — a load-sensing, proportioning or limiting valve, or electronic brake-force distribution.
+ * FMVSS No. 135 stops with part of the system failed (49 CFR 571.135, all from memory; verify against the
+ * current official text): from 100 km/h with pedal force ≤ 500 N, variable-proportioning system failed within
+ * 110 m (0.10V + 0.0100V²), antilock functional failure within 85 m (0.10V + 0.0075V²). "Variable brake
+ * proportioning system" (definition in 571.135, verified): devices that change the front/rear pressure ratio
+ * automatically with load or deceleration — a load-sensing, proportioning or limiting valve, or electronic
+ * brake-force distribution.
  */
 import type { FailureStopRule } from './case-rule-types.ts';
 

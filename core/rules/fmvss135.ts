@@ -1,7 +1,8 @@
 /**
  * Rule set `fmvss135`: US FMVSS No. 135 (49 CFR 571.135), light vehicle brake systems, vehicles up
  * to 3 500 kg GVWR (S3, verified). The wheel-lockup sequence and all figures except the 70 m
- * cold-effectiveness stop are from memory (reference sheet section 6): shown as design guidance.
+ * cold-effectiveness stop are from memory (the 70 m stop is verified in NHTSA interpretation letter 11409.MLS,
+ * https://nhtsa.gov/node/44266): shown as design guidance; verify against the current official text.
  */
 import type { RuleSet } from './rule-types.ts';
 

@@ -1,7 +1,8 @@
 /**
  * Hot performance after the Type-I heating sequence (UN R13 Annex 4 / R13-H Annex 3, paragraph
- * 1.5.3.1 as quoted in a clause collection that does not name the regulation, reference sheet
- * section 4 [V for the figures, P for where they stand]): measured like the engine-disconnected
+ * 1.5.3.1 as quoted in a public clause collection, https://lawinsider.com/clause/hot-performance, which
+ * does not name the regulation; figures verified, where they stand partly verified — verify against the
+ * current official text): measured like the engine-disconnected
  * Type-0 test, the hot stop must reach at least 80 % of the prescribed deceleration and at least
  * 60 % of the Type-0 (cold) result.
  */

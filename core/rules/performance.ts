@@ -1,8 +1,9 @@
 /**
  * Rule set `performance`: braking-performance figures of 71/320/EEC Annex II and UN R13 Annex 4
- * per vehicle category (reference sheet section 5): service braking Type-0 engine disconnected
- * (5.2, [P]), secondary braking (5.3, R13 Rev.4 Annex 4 para 2.2, [V]), booster failure compared
- * with the secondary figures ([M]) and parking on 18 % ([M]).
+ * per vehicle category: service braking Type-0 engine disconnected (71/320/EEC Annex II 2.1.1,
+ * partly verified: the same figures are tabulated in Dir. 70/311/EEC Annex II), secondary braking
+ * (R13 Rev.4 Annex 4 para 2.2, verified), booster failure compared with the secondary figures (from
+ * memory) and parking on 18 % (from memory); verify against the current official text.
  * Distances: s ≤ a·v + b·v² with v in km/h (e.g. M1 0.1v + v²/150).
  */
 import type { Category, DecelerationFigures, DecelerationRule, ParkingRule, Rule, RuleSet } from './rule-types.ts';

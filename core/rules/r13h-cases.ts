@@ -1,6 +1,7 @@
 /**
- * UN R13-H cases beyond Annex 5 and the Annex 3 figures (reference sheet sections 3 and 4, all [M]
- * except the category names A and B, which the texts use [V]):
+ * UN R13-H cases beyond Annex 5 and the Annex 3 figures (UN R13-H 02 series, OJ L 2026/502; all from memory,
+ * verify against the current official text, except the regeneration category names A and B, which
+ * are verified in the hot-performance clause 1.5.3.1 and the 2012 GRRF-72-02 proposal):
  *   regeneration category B (part of the service brake) must keep the Annex 5 distribution rules with
  *   the regeneration acting; a failure that changes the distribution must be signalled to the driver;
  *   M1 vehicles must have antilock; M1 and N1 vehicles must have stability control (from memory).

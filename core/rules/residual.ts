@@ -1,8 +1,8 @@
 /**
  * Residual braking after failure of part of the service-braking transmission (71/320/EEC Annex II
- * 2.1.4 / UN R13 Annex 4, reference sheet 5.4): the service control must still give
- *   laden   d_m ≥ 1.7 (M1), 1.5 (M2, M3), 1.3 m/s² (N)   — shown in 70/311 Annex II [P];
- *   unladen d_m ≥ 1.5 (M1), 1.3 (M2, M3), 1.1 m/s² (N)   — from memory [M];
+ * 2.1.4 / UN R13 Annex 4; verify against the current official text): the service control must still give
+ *   laden   d_m ≥ 1.7 (M1), 1.5 (M2, M3), 1.3 m/s² (N)   — shown in 70/311 Annex II, partly verified;
+ *   unladen d_m ≥ 1.5 (M1), 1.3 (M2, M3), 1.1 m/s² (N)   — from memory;
  * distances 0.1v + (100/30)·v²/150 laden and 0.1v + (100/25)·v²/150 unladen for M1, with 0.15v and
  * v²/130 (M2, M3) or v²/115 (N) for the others, control force ≤ 700 N, from memory. Test speeds as for
  * secondary braking (M1 80, M2/M3 60, N1 70, N2 50, N3 40 km/h; from memory).

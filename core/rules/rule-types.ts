@@ -8,7 +8,7 @@
 export const VEHICLE_CATEGORIES = ['M1', 'M2', 'M3', 'N1', 'N2', 'N3'] as const;
 export type Category = (typeof VEHICLE_CATEGORIES)[number];
 
-/** How sure we are of the requirement's text (reference sheet: [V], [P], [M]). */
+/** How sure we are of the requirement's text (verified / partly verified / from memory). */
 export type RuleStatus = 'verified' | 'partial' | 'memory';
 
 export type LoadKind = 'unladen' | 'laden' | 'other';
@@ -16,7 +16,7 @@ export type LoadKind = 'unladen' | 'laden' | 'other';
 export interface RuleSource {
   /** Regulation or directive, edition included where known. */
   document: string;
-  /** Paragraph / point / annex reference as printed in the reference sheet. */
+  /** Paragraph / point / annex reference as printed in the regulation. */
   paragraph: string;
 }
 
@@ -28,7 +28,7 @@ export interface Line {
 
 /**
  * The regulations write the limit lines as "z ≥ a + b·(k − c)"; solved for k this is
- * k ≤ c + (z − a)/b (reference sheet, section 1, "How to read the k–z lines").
+ * k ≤ c + (z − a)/b (71/320/EEC Annex II Appendix points 2 and 3.1.1).
  */
 export function lineFromRegulationForm(a: number, b: number, c: number): Line {
   return { intercept: c - a / b, slope: 1 / b };

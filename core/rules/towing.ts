@@ -1,5 +1,6 @@
 /**
- * Towing (reference sheet 5.5 and 5.6, [M]): the parking brake of a vehicle allowed to tow must hold
+ * Towing (71/320/EEC and UN R13 / R13-H Annex 3 parking provisions, from memory; verify against the
+ * current official text): the parking brake of a vehicle allowed to tow must hold
  * the combination on 12 % up and down (71/320 / R13; R13-H likewise), with the control forces of the
  * solo parking test; and the combination's service braking with the trailer's nose load on the hitch
  * and, for an unbraked trailer, the trailer's mass to stop. The combination service requirement is

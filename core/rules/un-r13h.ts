@@ -2,7 +2,8 @@
  * Rule set `un-r13h`: UN Regulation 13-H (M1 and N1), 02 series (OJ L 2026/502). Annex 5 carries
  * over the 71/320 Appendix logic; the detailed paragraphs could not be read, so the curve rules are
  * "partial" (structure seen in a closely related text) and the efficiency coefficient and the Annex 3
- * figures are "memory" (reference sheet sections 3, 5.6 and open items 1 and 4).
+ * figures are "memory" (from memory: Annex 5 point 3.1.1 and the Annex 3 figures; verify against the
+ * current official text).
  */
 import { EFFICIENCY_BRANCHES, M1_LOCK_BRANCHES, N1_LOCK_BRANCHES } from './eu-appendix.ts';
 import type { Branch, CurveRule, RuleSet } from './rule-types.ts';

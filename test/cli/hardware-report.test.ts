@@ -1,7 +1,7 @@
 // Sources: issue 9 contract — pitfalls, failed-valve cases and the pedal-travel margin appear in the CLI
-// text, never silently; caution kept on every output (house rules). Pitfall sources: field-practice.md
-// 1.3 (IVA bias adjuster) and section 2 (load-sensing valve on modified suspension). Failed-valve rule:
-// 71/320/EEC Annex II Appendix point 6 [P], shown with the verify note.
+// text, never silently; caution kept on every output (house rules). Pitfall sources: practitioner reports, no
+// published source (IVA bias adjuster; load-sensing valve on modified suspension). Failed-valve rule:
+// 71/320/EEC Annex II Appendix point 6 (partly verified), shown with the verify note.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CAUTION, demoDesign, evaluate, readDesign, VERIFY_NOTE } from '../../core/index.ts';

@@ -3,8 +3,9 @@
  * Sources:
  * - synthetic vehicles whose true CG height is known: the scale readings are generated here by rigid-
  *   body statics (rotate the body, take moments about the lower wheel's contact point), independently
- *   of the formula under test (worked-examples.md, "Known wrong published answers", asks for this);
- * - the known-wrong published example (worked-examples.md: Jazar, Example 43): only the recomputation
+ *   of the formula under test, because the published example below is known to be wrong;
+ * - the known-wrong published example (R. N. Jazar, Vehicle Dynamics: Theory and Application
+ *   (2008), Example 43): only the recomputation
  *   "its inputs give 1.876 m, not the printed 0.34 m" is checked, never used as the method's truth;
  * - GUM (JCGM 100:2008, from memory): a resolution step δ as a rectangular distribution, u = δ/√12;
  *   linear propagation u² = Σ (c_i u_i)².
@@ -242,7 +243,7 @@ describe('axleLift warnings', () => {
   });
 });
 
-describe('the known-wrong published example (worked-examples.md: Jazar, Example 43)', () => {
+describe('the known-wrong published example (Jazar, Vehicle Dynamics, Example 43)', () => {
   it('its inputs give 1.876 m, not the printed 0.34 m', () => {
     // Published inputs: m = 2000 kg, front reaction 2Fz1 = 18000 N with the rear raised by φ = 30°,
     // a1 = 1.10 m, l = 2.30 m, R = 0.30 m, g = 9.81 m/s² as the book uses. The level front axle mass

@@ -2,8 +2,8 @@
  * Axle loads under braking.
  * Sources: 71/320/EEC Annex II Appendix, point 2 (symbols P, P1, P2, h, E, χ = h/E, z) and point 3.1.3
  * (N1 = P1 + z h P / E, N2 = P2 − z h P / E), 71/320/EEC Annex II Appendix
- * point 3.1.3; worked example E2 (R. Limpert, "Motorcycle
- * Braking Dynamics", 2008, section 2).
+ * point 3.1.3; R. Limpert, "Motorcycle
+ * Braking Dynamics", 2008, section 2.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

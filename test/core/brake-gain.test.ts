@@ -1,8 +1,8 @@
 /**
  * Brake gain per axle.
  * Sources: design-file spec "Physics" (disc G = 2·2·μ·A_clamp·r_eff/R, A_clamp = Σ piston areas for a
- * sliding caliper, half of it for a fixed one; drum G = 2·C*·A_wc·r_drum/R); worked example E4
- * (T. H. Wentzell, Machine Design, Example 16.4, p. 361, as
+ * sliding caliper, half of it for a fixed one; drum G = 2·C*·A_wc·r_drum/R);
+ * T. H. Wentzell, Machine Design, Example 16.4, p. 361, as
  * recomputed in the FOSSEE companion); NIST SP 811 appendix B.8 for the inch and pound-force.
  */
 import { describe, expect, it } from 'vitest';

@@ -1,8 +1,8 @@
 // Brake heat (core/brake-heat.ts).
-// Sources: worked-examples.md E5 (U. C. Jindal, Machine Design, Ex. 23-5: 1100 kg from 65 km/h, four
+// Sources: U. C. Jindal, Machine Design, Example 23-5, p. 621 (1100 kg from 65 km/h, four
 // brakes sharing equally, 12 kg drums, c = 460 J/(kg K), rotating parts +10 %, no loss during the stop:
 // 49 307.97 J per brake, 8.93 K); ½ m v² (kinetic energy, common practice, no source needed beyond
-// mechanics); Type-I parameters of 71/320/EEC Annex II 1.3 [V];
+// mechanics); Type-I parameters of 71/320/EEC Annex II 1.3, verified;
 // hand derivations for the cooling model.
 import { describe, expect, it } from 'vitest';
 import { G_N } from '../../core/constants.ts';

@@ -1,12 +1,18 @@
 /**
  * Mass build-up, load states derived from it, ratings (core/build-up.ts, core/ratings.ts).
  * Sources:
- * - worked-examples.md E7 (Jazar Example 40: CG 1.1084 m behind the front axle from per-wheel loads;
- *   lecture slides Example 1: 890 kg at 0.78 m on 2.35 m → 2916.5 N / 1449 N per wheel, g = 9.81);
- * - worked-examples.md E8 (body-builder manual: 14 500 lb at 156 in on a 214 in wheelbase → rear
- *   +10 570 lb, front +3 929.9 lb; an item ahead of the front axle adds more than its own weight to the front);
+ * - R. N. Jazar, Vehicle Dynamics: Theory and Application (2008), Example 40, p. 41: CG 1.1084 m
+ *   behind the front axle from per-wheel loads; lecture slides "Forward Vehicle Dynamics", Example 1
+ *   (built on Jazar ch. 2): 890 kg at 0.78 m on 2.35 m → 2916.5 N / 1449 N per wheel, g = 9.81;
+ * - a medium-duty truck body-builder manual, appendix "Weight Distribution" (14 500 lb at 156 in on a
+ *   214 in wheelbase → rear +10 570 lb, front +3 929.9 lb; an item ahead of the front axle adds more
+ *   than its own weight to the front);
  * - moment balance about the front axle and the ground (statics) as fast-check properties;
- * - field-practice.md sections 1.1, 1.3 and 3 for the occupant masses;
+ * - occupant masses: Regulation (EU) No 1230/2012 Art. 2 (75 kg driver, from memory); NSW (Australia)
+ *   RMS "Brake assessment manual" v1.0 (2013), definition of MLTM (68 kg per unoccupied seat); UK MOT
+ *   testing guide, class 5 test weight (140 lb per passenger seat,
+ *   http://www.motinfo.gov.uk/htdocs/m4s03000802.htm); US 154 lb per sleeping position (49 CFR 571.110,
+ *   from memory; practitioner reports, no published source read);
  * - hand-derived: the arithmetic written beside each figure.
  */
 import fc from 'fast-check';
@@ -167,7 +173,7 @@ describe('build-up moment balance (properties)', () => {
 });
 
 describe('occupant masses listed with their sources', () => {
-  it('carries the values regimes use (field-practice.md 1.1, 1.3, 3)', () => {
+  it('carries the values regimes use (EU, NSW, UK MOT and US figures)', () => {
     const byId = Object.fromEntries(OCCUPANT_MASSES.map((o) => [o.id, o]));
     expect(byId['eu-75']!.mass_kg).toBe(75); // EU MRO includes a 75 kg driver
     expect(byId['au-nsw-68']!.mass_kg).toBe(68); // NSW MLTM: 68 kg per unoccupied seat

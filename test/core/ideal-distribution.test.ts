@@ -1,8 +1,8 @@
 /**
  * The ideal distribution.
  * Sources: 71/320/EEC Annex II Appendix point 3.1 (the ideal line f1 = f2 = z, symbols of point 2),
- * 71/320/EEC Annex II Appendix point 2; worked example E1
- * (T. Bevan, The Theory of Machines, ch. 8, Example 6).
+ * 71/320/EEC Annex II Appendix point 2;
+ * T. Bevan, The Theory of Machines, ch. 8, Example 6.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

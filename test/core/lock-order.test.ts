@@ -2,8 +2,8 @@
  * First lock and braking efficiency.
  * Sources: design-file spec "Physics" (first lock = smallest z with f1 or f2 = k; "both" when the two
  * rates differ by less than 0.001; efficiency = z / k), 71/320/EEC Annex II Appendix point 3.1.1
- * (f = T / N), 71/320/EEC Annex II Appendix point 2; worked example E1
- * (T. Bevan, The Theory of Machines, ch. 8, Example 6);
+ * (f = T / N), 71/320/EEC Annex II Appendix point 2;
+ * T. Bevan, The Theory of Machines, ch. 8, Example 6;
  * hand derivations in the comments.
  */
 import fc from 'fast-check';
@@ -20,7 +20,7 @@ function fixedSplit(P: number, phi: number): Distribution {
   return { P, z: [0, 1], t1: [0, phi * P], t2: [0, (1 - phi) * P] };
 }
 
-describe('E1 single-axle limits (Bevan, ch. 8 Ex. 6; worked-examples.md E1)', () => {
+describe('E1 single-axle limits (T. Bevan, The Theory of Machines, ch. 8, Example 6)', () => {
   // Source: L = 9.5 ft, h = 2.0 ft, CG 4.0 ft ahead of the rear axle (l_f = 5.5 ft from the front),
   // 30 mph = 44 ft/s, μ = 0.6, g = 32.2 ft/s² (the source's g, kept as a parameter).
   // Adaptation: "front brakes only" is a fixed split φ = 1, "rear only" φ = 0; the engine's first lock

@@ -1,8 +1,9 @@
 /**
  * Pedal force and master-cylinder pressure.
  * Sources: design-file spec "Physics" (F = p·A_mc/(pedal_ratio·booster_ratio) up to the runout,
- * unassisted above it); worked example E3 (hot-rod technical
- * page "Formula for Master Cylinder Pressure", which uses π = 3.14; ±1 psi); NIST SP 811 appendix B.8
+ * unassisted above it); the hot-rod technical
+ * page "Formula for Master Cylinder Pressure" (hotrodheaven.com/tech/brakes/brakes4.htm, which uses
+ * π = 3.14; ±1 psi); NIST SP 811 appendix B.8
  * (inch, pound-force, psi).
  */
 import fc from 'fast-check';

@@ -1,6 +1,6 @@
 // Roller brake tester prediction (core/roller-tester.ts).
 // Sources: roller adhesion about 0.85 and efficiency = total roller brake effort ÷ test weight
-// (field-practice.md, "Roller and plate tester results" and 1.3 [practitioner sources]); brake gains from
+// (UK MOT practice; practitioner reports, no published source); brake gains from
 // the design-file spec ("Physics"); every number below hand-derived in the comments.
 import { describe, expect, it } from 'vitest';
 import type { DesignFile } from '../../core/design.ts';

@@ -1,5 +1,5 @@
 // Stopping distances (core/stopping.ts).
-// Sources: worked-examples.md E1 (T. Bevan, The Theory of Machines, ch. 8, Example 6: braking distance
+// Sources: T. Bevan, The Theory of Machines, ch. 8, Example 6 (braking distance
 // from 30 mph = 44 ft/s with rear brakes only 97.5 ft, front only 104 ft, all wheels at the limit 50.1 ft;
 // g = 32.2 ft/s² there, 9.80665 m/s² here, a 0.08 % difference, inside the tolerance used), and hand
 // derivations of the linear build-up ramp shown beside each check.

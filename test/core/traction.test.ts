@@ -1,6 +1,8 @@
 // Traction limits (core/traction.ts).
-// Sources: worked-examples.md E6 (traction-limited acceleration, h = 0 case and the load-transfer forms)
-// and E1 (T. Bevan, The Theory of Machines, ch. 8, Example 6), used through a mirror argument explained below.
+// Sources: traction-limited acceleration without load transfer (physicshelpforum.com/threads/dynamic.2565;
+// wyzant.com/resources/answers/5249; Q&A sites, arithmetic checked), R. N. Jazar, Vehicle Dynamics: Theory
+// and Application (2008), eqs. 2.118–2.120, p. 55, and the load-transfer forms checked with T. Bevan,
+// The Theory of Machines, ch. 8, Example 6, through a mirror argument explained below.
 import { describe, expect, it } from 'vitest';
 import { axleLoadModel } from '../../core/axle-loads.ts';
 import { G_N } from '../../core/constants.ts';

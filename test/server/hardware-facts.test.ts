@@ -1,9 +1,9 @@
 // The yes/no facts of the optional base_vehicle and conversion blocks (core/hardware-schema.ts, docs/hardware.md)
 // as three-way selects in the workbench (views/fields.ts triStateField), through inject (no network).
-// Sources: field-practice.md section 2 (helper springs, air assistance, lift or lowering stop a load-sensing valve
-// reading the load; the demo has a load-sensing rear valve, so "suspension modified: yes" must raise
-// PITFALL_LOAD_SENSING_SUSPENSION); docs/hardware.md ("each pitfall check uses what is given": a fact not stated is
-// absent from the design, not false).
+// Sources: practitioner reports, no published source (helper springs, air assistance, lift or lowering stop a
+// load-sensing valve reading the load; the demo has a load-sensing rear valve, so "suspension modified: yes"
+// must raise PITFALL_LOAD_SENSING_SUSPENSION); docs/hardware.md ("each pitfall check uses what is given": a
+// fact not stated is absent from the design, not false).
 import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoDesign } from '../../core/index.ts';

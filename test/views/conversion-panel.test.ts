@@ -1,8 +1,9 @@
 /**
  * The conversion panel (views/panels/conversion.ts).
  * Sources: hand-derived figures of a small build-up (wheelbase 3.0 m; baseline 1200 / 800 kg; battery
- * 300 kg added at x = 1.5 m → front +150 kg, rear +150 kg by the E8 rule rear = m x / L in
- * worked-examples.md), and OWASP rule #1 for the escaping of user text (item names).
+ * 300 kg added at x = 1.5 m → front +150 kg, rear +150 kg by the rule rear = m x / L of a medium-duty
+ * truck body-builder manual, appendix "Weight Distribution"), and OWASP rule #1 for the escaping of
+ * user text (item names).
  */
 import { describe, expect, it } from 'vitest';
 import { demoDesign, evaluate, readDesign } from '../../core/index.ts';

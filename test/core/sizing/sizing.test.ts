@@ -123,8 +123,9 @@ describe('catalogue and master cylinder', () => {
     expect(sevenEighths.diameter_mm).toBeCloseTo(22.225, 12);
   });
 
-  it('line pressure at the pedal-force limit follows p = F·i_pedal/A (worked example E3)', () => {
-    // worked-examples.md E3 (hot-rod tech page, π = 3.14, ±1 psi): 100 lbf, ratio 6:1, no booster, 7/8 in → 998 psi.
+  it('line pressure at the pedal-force limit follows p = F·i_pedal/A (hot-rod tech page)', () => {
+    // Hot-rod technical page "Formula for Master Cylinder Pressure" (hotrodheaven.com/tech/brakes/brakes4.htm,
+    // π = 3.14, ±1 psi): 100 lbf, ratio 6:1, no booster, 7/8 in → 998 psi.
     // Pressure is proportional to force, so at the rule's 700 N limit p = 998 psi × 700 N / 100 lbf.
     // 1 lbf = 4.448222 N, 1 psi = 6894.757 Pa (NIST SP 811 B.8).
     const d = fixedSplitDesign({ rules: ['eu-appendix', 'performance'] });

@@ -79,7 +79,7 @@ export function chartA(ctx: ResultContext): ChartSpec {
   for (let z = 0.1; z <= 1.0001; z += 0.1) {
     zx.push(0, r4(z), null);
     zy.push(r4(z), 0, null);
-    if (z <= xMax) ann.push({ x: r4(z), y: 0, text: `z = ${F.brakingRate(z)}`, showarrow: false, yanchor: 'bottom', xanchor: 'right', font: { size: 9, color: '#666' } });
+    if (z <= xMax) ann.push({ x: r4(z), y: 0, text: F.adhesion(z), showarrow: false, yanchor: 'bottom', xanchor: 'right', font: { size: 9, color: '#666' } });
   }
   data.push({ type: 'scatter', mode: 'lines', name: 'constant braking rate z', x: zx, y: zy, line: { color: '#aaaaaa', width: 1 }, hoverinfo: 'skip' });
   // front-lock and rear-lock lines of the focus state, per adhesion

@@ -298,7 +298,7 @@ export const PARKING_CONTROL_LABELS: Words<'hand' | 'foot'> = { hand: 'hand cont
 export const DERIVED_FROM_LABELS: Words<(typeof DERIVED_FROM)[number]> = {
   build_up: 'mass build-up',
   measured: 'measured',
-  entered: 'entered',
+  entered: 'entered by hand',
 };
 export const BUILD_UP_STATE_LABELS: Words<(typeof BUILD_UP_STATES)[number]> = { unladen: 'unladen', laden: 'laden' };
 export const CG_HEIGHT_SOURCE_LABELS: Words<(typeof CG_HEIGHT_SOURCES)[number]> = {

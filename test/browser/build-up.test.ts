@@ -43,10 +43,10 @@ describe('mass build-up inputs in chromium', { timeout: 60000 }, () => {
     await page.fill('#f-build_up-added-0-x_m', '3.665'); // demo wheelbase: over the rear axle
     await page.fill('#f-build_up-added-0-cg_height_m', '0.5');
     await page.selectOption('#f-load_states-0-from_build_up', 'unladen');
-    await expect.poll(unladenMass, { timeout: 15000 }).toMatch(/^2800\.0/);
+    await expect.poll(unladenMass, { timeout: 15000 }).toMatch(/^2800(?![\d.])/);
     expect(await page.locator('#f-load_states-0-mass_kg').count()).toBe(0); // figures now come from the build-up
     await page.fill('#f-build_up-added-0-mass_kg', '300');
-    await expect.poll(unladenMass, { timeout: 15000 }).toMatch(/^2900\.0/);
+    await expect.poll(unladenMass, { timeout: 15000 }).toMatch(/^2900(?![\d.])/);
     mkdirSync('test-results', { recursive: true });
     await page.locator('#panel-conversion-inputs').screenshot({ path: 'test-results/build-up-inputs.png' });
     expect(problems).toEqual([]);

@@ -195,7 +195,7 @@ describe('the axle-lift form', () => {
       expect(out.body.html).toContain(`name="load_states[1].${k}`);
     }
     // the recompute follows: the results table of where the figures come from shows the measured height
-    expect(out.body.html).toMatch(/Laden to 3500 kg<\/th><td>entered<\/td><td>0\.951<\/td><td>0\.012<\/td><td>measured<\/td>/);
+    expect(out.body.html).toMatch(/Laden to 3500 kg<\/th><td>entered by hand<\/td><td>0\.951<\/td><td>0\.012<\/td><td>measured<\/td>/);
   });
 
   it('in US units the applied height is shown in inches and the exact metres reach the design', () => {

@@ -5,9 +5,3 @@ export function textTable(header: string[], rows: string[][], indent = '  '): st
     indent + cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ');
   return [line(header), indent + widths.map((w) => '-'.repeat(w)).join('  '), ...rows.map(line)].join('\n');
 }
-
-/** A number with fixed decimals or a dash: for the cg-lift and size command texts, which format their own figures. */
-export function fmt(v: number | null | undefined, digits: number): string {
-  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
-  return v.toFixed(digits);
-}

@@ -183,6 +183,8 @@ export const percent = (p: Num): string => format('percent', p, 'metric', { from
 /** Percentage points, signed: "+2.1 points". */
 export const percentPoints = (p: Num): string =>
   isNumber(p) ? `${format('percent', p, 'metric', { from: 'pct', unit: false, signed: true })} points` : DASH;
+/** A margin in adhesion units (the sizing assistant's smallest margin), signed: "+0.084", "−0.012". */
+export const adhesionMargin = (m: Num): string => format('utilisation', m, 'metric', { signed: true });
 /** A dimensionless ratio, 3 decimals. */
 export const ratio = (r: Num): string => format('ratio', r, 'metric');
 export const pressure = (v: Num, units: UnitSystem, from: FromUnit = 'Pa'): string => format('pressure', v, units, { from });

@@ -4,54 +4,66 @@ import { type AxleLiftResultFile, axleLiftResultFile, BUDGET_SOURCE_WORDS, readA
 import { cliErrors } from '../errors.ts';
 import type { CommandOutput } from '../output.ts';
 import { readJsonFile } from '../read-json.ts';
-import { fmt, textTable } from '../table.ts';
+import * as F from '../../report/format.ts';
+import { textTable } from '../table.ts';
+
+/** The command's text is in metric units (it has no units option). */
+const UNITS = 'metric' as const;
+const len = (v: number | null | undefined) => F.length(v, UNITS);
+const bare = (kind: F.Kind, v: number | null | undefined, from?: F.FromUnit) => F.format(kind, v, UNITS, { from, unit: false });
+/** A budget entry's value in the quantity of its unit (metres, kilograms or degrees). */
+function entryValue(v: number, unit: string): string {
+  if (unit === 'kg') return F.mass(v, UNITS);
+  if (unit === '°') return F.format('angle', v, UNITS, { from: 'deg' });
+  return len(v);
+}
 
 export function axleLiftText(r: AxleLiftResultFile): string {
   const out: string[] = [];
   out.push(`CG height by axle lift${r.name ? `: ${r.name}` : ''}`);
   out.push('');
-  out.push(`  CG height above ground:  ${fmt(r.cg_height_m, 3)} m  (standard uncertainty ${fmt(r.standard_uncertainty_m, 3)} m, k = 1)`);
-  out.push(`  CG behind front axle:    ${fmt(r.cg_to_front_axle_m, 3)} m  (from the level readings)`);
-  out.push(`  Vehicle mass (level):    ${fmt(r.mass_kg, 1)} kg`);
+  out.push(`  CG height above ground:  ${len(r.cg_height_m)}  (standard uncertainty ${len(r.standard_uncertainty_m)}, k = 1)`);
+  out.push(`  CG behind front axle:    ${len(r.cg_to_front_axle_m)}  (from the level readings)`);
+  out.push(`  Vehicle mass (level):    ${F.mass(r.mass_kg, UNITS)}`);
   if (r.scatter_uncertainty_m !== null) {
-    out.push(`  Scatter of the lifts about the fit: ${fmt(r.scatter_uncertainty_m, 3)} m (χ² ${fmt(r.fit_chi_squared, 2)}, ${r.fit_degrees_of_freedom} degrees of freedom)`);
+    out.push(`  Scatter of the lifts about the fit: ${len(r.scatter_uncertainty_m)} (χ² ${F.ratio(r.fit_chi_squared)}, ${r.fit_degrees_of_freedom} degrees of freedom)`);
   }
   out.push('');
-  out.push('  Each lift alone (angle in degrees, reading change in kg, heights in m):');
+  out.push('  Each lift alone (angle, reading change and heights in the units of the column heads):');
   out.push(
     textTable(
-      ['lift', 'raised', 'axle read', 'angle °', 'change kg', 'h m', 'u(h) m'],
+      ['lift', 'raised', 'axle read', F.headWithUnit('angle', 'angle', UNITS), F.headWithUnit('change', 'mass', UNITS), F.headWithUnit('h', 'length', UNITS), F.headWithUnit('u(h)', 'length', UNITS)],
       r.lifts.map((l) => [
         String(l.index + 1),
         l.raised_axle,
         l.read_axle,
-        fmt(l.lift_angle_deg, 2),
-        fmt(l.reading_change_kg, 1),
-        fmt(l.cg_height_m, 3),
-        fmt(l.standard_uncertainty_m, 3),
+        bare('angle', l.lift_angle_deg, 'deg'),
+        bare('mass', l.reading_change_kg),
+        bare('length', l.cg_height_m),
+        bare('length', l.standard_uncertainty_m),
       ]),
       '    ',
     ),
   );
   out.push('');
-  out.push('  Uncertainty budget (contribution = |sensitivity| × standard uncertainty, m):');
+  out.push('  Uncertainty budget (contribution = |sensitivity| × standard uncertainty):');
   out.push(
     textTable(
-      ['input', 'value', 'u', 'contribution m', 'share %'],
+      ['input', 'value', 'u', F.headWithUnit('contribution', 'length', UNITS), F.headWithUnit('share', 'percent', UNITS)],
       r.budget.entries.map((e) => [
         e.input,
-        `${fmt(e.value, e.unit === 'kg' ? 1 : 3)} ${e.unit}`,
-        `${fmt(e.standard_uncertainty, e.unit === 'kg' ? 2 : 4)} ${e.unit}`,
-        fmt(e.contribution_m, 4),
-        fmt(e.variance_share * 100, 1),
+        entryValue(e.value, e.unit),
+        entryValue(e.standard_uncertainty, e.unit),
+        bare('length', e.contribution_m),
+        F.format('percent', e.variance_share, UNITS, { from: 'ratio', unit: false }),
       ]),
       '    ',
     ),
   );
   out.push(
     textTable(
-      ['by source', 'contribution m', 'share %'],
-      r.budget.by_source.map((b) => [BUDGET_SOURCE_WORDS[b.source] ?? b.source, fmt(b.contribution_m, 4), fmt(b.variance_share * 100, 1)]),
+      ['by source', F.headWithUnit('contribution', 'length', UNITS), F.headWithUnit('share', 'percent', UNITS)],
+      r.budget.by_source.map((b) => [BUDGET_SOURCE_WORDS[b.source] ?? b.source, bare('length', b.contribution_m), F.format('percent', b.variance_share, UNITS, { from: 'ratio', unit: false })]),
       '    ',
     ),
   );

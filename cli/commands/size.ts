@@ -4,11 +4,13 @@
  * passes every selected rule in every load state, 1 when nothing proposed passes, 2 invalid input.
  */
 import { parseArgs } from 'node:util';
-import { readDesign, rearValveFamily, unitLabel, valveSettings } from '../../core/index.ts';
+import { readDesign, rearValveFamily, valveSettings } from '../../core/index.ts';
 import { sizeDesign, type SizingResult } from '../../core/sizing/sizing.ts';
 import { cliErrors } from '../errors.ts';
 import { readJsonFile } from '../read-json.ts';
-import { fmt, textTable } from '../table.ts';
+import * as F from '../../report/format.ts';
+import { partChangeText } from '../../report/part-change.ts';
+import { textTable } from '../table.ts';
 import type { CommandOutput } from '../output.ts';
 import { parseRuleSelection } from './evaluate.ts';
 
@@ -33,7 +35,10 @@ export function sizingFindsPass(r: SizingResult): boolean {
   return r.current.passes || r.options.some((o) => o.passes) || (r.valve?.passes ?? false) || (r.balance_bar?.with_recommended.passes ?? false);
 }
 
-const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(1)} %`);
+const pct = F.percentOfRatio;
+const margin = F.adhesionMargin;
+/** The command's text is in metric units (it has no units option). */
+const UNITS = 'metric' as const;
 
 export function sizingText(r: SizingResult): string {
   const out: string[] = [];
@@ -50,15 +55,15 @@ export function sizingText(r: SizingResult): string {
   out.push('');
   if (r.band) out.push(`Band that passes everything: ${pct(r.band.min_front_share)} – ${pct(r.band.max_front_share)}${r.band_intervals.length > 1 ? ` (and ${r.band_intervals.length - 1} more interval(s))` : ''}`);
   else out.push('Band that passes everything: EMPTY — no fixed split passes every rule in every load state.');
-  out.push(`Current design: front share ${pct(r.current_front_share)} at low pressure; smallest margin ${fmt(r.current.smallest_margin, 4)} (${r.current.passes ? 'passes' : 'FAILS'} with the full model)`);
-  out.push(`Recommended front share: ${pct(r.recommended_front_share)} (smallest margin of that fixed split ${fmt(r.recommended_split_margin, 4)})`);
+  out.push(`Current design: front share ${pct(r.current_front_share)} at low pressure; smallest margin ${margin(r.current.smallest_margin)} (${r.current.passes ? 'passes' : 'FAILS'} with the full model)`);
+  out.push(`Recommended front share: ${pct(r.recommended_front_share)} (smallest margin of that fixed split ${margin(r.recommended_split_margin)})`);
   out.push('');
   if (r.options.length) {
     out.push('Parts that move the split there (each checked with the full model):');
     out.push(
       textTable(
         ['change', 'series', 'front share', 'smallest margin', 'verdict'],
-        r.options.map((o) => [o.change, o.series, pct(o.front_share), fmt(o.smallest_margin, 4), o.passes ? 'passes' : 'fails']),
+        r.options.map((o) => [partChangeText(o, UNITS), o.series, pct(o.front_share), margin(o.smallest_margin), o.passes ? 'passes' : 'fails']),
       ),
     );
     out.push('  Catalogue sizes: common practice, no source.');
@@ -66,18 +71,18 @@ export function sizingText(r: SizingResult): string {
   }
   const mc = r.master_cylinder;
   if (mc) {
-    out.push(`Master cylinder (${mc.rule}): ${mc.required_deceleration_ms2.toFixed(2)} m/s² needs ${mc.pressure_for_required_bar.toFixed(1)} bar; pedal-force target ${mc.pedal_force_target_n.toFixed(0)} N (limit ${mc.pedal_force_limit_n} N); line pressure at the limit ≤ ${mc.max_line_pressure_bar} bar (common practice)`);
-    out.push(`  bore window: ${fmt(mc.min_bore_mm, 1)} – ${fmt(mc.max_bore_mm, 1)} mm (now ${mc.current_bore_mm} mm)`);
+    out.push(`Master cylinder (${mc.rule}): ${F.deceleration(mc.required_deceleration_ms2, UNITS)} needs ${F.pressure(mc.pressure_for_required_bar, UNITS, 'bar')}; pedal-force target ${F.pedalForce(mc.pedal_force_target_n, UNITS)} (limit ${F.pedalForce(mc.pedal_force_limit_n, UNITS)}); line pressure at the limit ≤ ${F.pressure(mc.max_line_pressure_bar, UNITS, 'bar')} (common practice)`);
+    out.push(`  bore window: ${F.shortLength(mc.min_bore_mm, UNITS)} – ${F.shortLength(mc.max_bore_mm, UNITS)} (now ${F.shortLength(mc.current_bore_mm, UNITS)})`);
     const ok = mc.candidates.filter((c) => c.meets);
-    if (ok.length) out.push(textTable(['bore', 'pedal force N', 'bar at limit'], ok.map((c) => [c.label, c.pedal_force_n.toFixed(0), c.pressure_at_limit_bar.toFixed(1)])));
+    if (ok.length) out.push(textTable(['bore', F.headWithUnit('pedal force', 'pedal_force', UNITS), F.headWithUnit('pressure at limit', 'pressure', UNITS)], ok.map((c) => [c.label, F.format('pedal_force', c.pedal_force_n, UNITS, { unit: false }), F.format('pressure', c.pressure_at_limit_bar, UNITS, { from: 'bar', unit: false })])));
     for (const n of mc.notes) out.push(`  note: ${n}`);
     out.push('');
   }
   if (r.valve) {
     const v = r.valve.valve;
     // the valve from its type's module, its numbers with the unit and label of the quantity table (core/valves/)
-    const desc = [rearValveFamily(v).name, ...valveSettings(v).map((st) => `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${st.value}${unitLabel(st.meta.unit) ? ` ${unitLabel(st.meta.unit)}` : ''}`)].join(', ');
-    out.push(`Rear valve: ${desc}; smallest margin ${fmt(r.valve.smallest_margin, 4)} (${r.valve.passes ? 'passes' : 'fails'})`);
+    const desc = [rearValveFamily(v).name, ...valveSettings(v).map((st) => `${st.meta.label.charAt(0).toLowerCase()}${st.meta.label.slice(1)} ${F.fieldValue(st.meta, st.value, UNITS)}`)].join(', ');
+    out.push(`Rear valve: ${desc}; smallest margin ${margin(r.valve.smallest_margin)} (${r.valve.passes ? 'passes' : 'fails'})`);
     if (r.valve_search) out.push(`  proportioning map: ${r.valve_search.map.feasible_cells} of ${r.valve_search.map.knee_bar.length * r.valve_search.map.ratio.length} knee × ratio cells pass`);
     out.push('');
   }
@@ -89,10 +94,10 @@ export function sizingText(r: SizingResult): string {
   }
   const rb = r.robustness;
   out.push(`Robustness of ${rb.applies_to}`);
-  out.push(`  (${rb.samples} samples, seed ${rb.seed}, ${rb.distribution}; tolerances: pad friction ±${rb.tolerances.pad_friction_front_pct} % front / ±${rb.tolerances.pad_friction_rear_pct} % rear, CG height ±${rb.tolerances.cg_height_m} m, front axle ±${rb.tolerances.front_axle_kg} kg, tyre radius ±${rb.tolerances.tyre_radius_pct} %, rear valve knee ±${rb.tolerances.valve_knee_pct} % and ratio ±${rb.tolerances.valve_ratio_pct} %, threshold pressure ±${rb.tolerances.threshold_front_bar} bar front / ±${rb.tolerances.threshold_rear_bar} bar rear):`);
-  out.push(`  probability that a rule fails in some load state: ${(100 * rb.probability_of_failure).toFixed(2)} % (± ${(100 * rb.probability_standard_error).toFixed(2)} %)`);
-  out.push(`  5th-percentile smallest margin: ${fmt(rb.p05_margin, 4)}; worst corner: ${fmt(rb.worst_corner.smallest_margin, 4)} (${rb.failing_corners} of ${rb.corners} corners fail)`);
-  out.push(`  matters most: ${rb.most_influential ? rb.sensitivity[0]!.label : '—'} (${rb.sensitivity.map((s) => `${s.label} ${s.effect.toFixed(4)}`).join('; ')})`);
+  out.push(`  (${rb.samples} samples, seed ${rb.seed}, ${rb.distribution}; tolerances: pad friction ±${F.percent(rb.tolerances.pad_friction_front_pct)} front / ±${F.percent(rb.tolerances.pad_friction_rear_pct)} rear, CG height ±${F.length(rb.tolerances.cg_height_m, UNITS)}, front axle ±${F.mass(rb.tolerances.front_axle_kg, UNITS)}, tyre radius ±${F.percent(rb.tolerances.tyre_radius_pct)}, rear valve knee ±${F.percent(rb.tolerances.valve_knee_pct)} and ratio ±${F.percent(rb.tolerances.valve_ratio_pct)}, threshold pressure ±${F.pressure(rb.tolerances.threshold_front_bar, UNITS, 'bar')} front / ±${F.pressure(rb.tolerances.threshold_rear_bar, UNITS, 'bar')} rear):`);
+  out.push(`  probability that a rule fails in some load state: ${pct(rb.probability_of_failure)} (± ${pct(rb.probability_standard_error)})`);
+  out.push(`  5th-percentile smallest margin: ${margin(rb.p05_margin)}; worst corner: ${margin(rb.worst_corner.smallest_margin)} (${rb.failing_corners} of ${rb.corners} corners fail)`);
+  out.push(`  matters most: ${rb.most_influential ? rb.sensitivity[0]!.label : F.DASH} (${rb.sensitivity.map((s) => `${s.label} ${F.utilisation(s.effect)}`).join('; ')})`);
   out.push('');
   for (const m of r.messages) out.push(`Note: ${m}`);
   if (r.verify_note) out.push(`Rules marked partly verified or from memory: ${r.verify_note}.`);

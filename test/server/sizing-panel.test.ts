@@ -45,6 +45,27 @@ describe('sizing panel', () => {
     }
   });
 
+  it('writes the part changes in the page\'s unit system: inches on a US page, millimetres on a metric one', async () => {
+    // 1 in = 25.4 mm exactly (NIST SP 811 (2008), appendix B.9): the 66 mm rear piston reads 2.60 in
+    const app = buildApp();
+    try {
+      const rows = async (units: 'metric' | 'us') => {
+        const res = await app.inject({ method: 'POST', url: '/workbench/panel/sizing', headers: { 'content-type': 'application/x-www-form-urlencoded', 'hx-request': 'true' }, payload: new URLSearchParams({ ...designToValues(failing(), units), _units: units }).toString() });
+        const table = /<table class="sizing-options data">[\s\S]*?<\/table>/.exec(res.body)?.[0] ?? '';
+        return [...table.matchAll(/<th scope="row">([^<]*)<\/th>/g)].map((m) => m[1]!);
+      };
+      const us = await rows('us');
+      expect(us.length).toBeGreaterThan(0);
+      expect(us.filter((t) => t.startsWith('rear')).every((t) => t.includes('2.60 in →'))).toBe(true);
+      expect(us.some((t) => /\bmm\b/.test(t))).toBe(false);
+      const metric = await rows('metric');
+      expect(metric.filter((t) => t.startsWith('rear')).every((t) => t.includes('66.0 mm →'))).toBe(true);
+      expect(metric.some((t) => /\bin\b/.test(t))).toBe(false);
+    } finally {
+      await app.close();
+    }
+  });
+
   it('Apply writes the recommended part; the design then passes; Undo restores the old value', () => {
     const d = failing();
     const r = sizeDesign(d, { samples: 200 });

@@ -13,6 +13,7 @@ import { baseLayout, chartBlock, type ChartSpec, plotText } from '../chart.ts';
 import { numberField, selectField } from '../fields.ts';
 import * as F from '../../report/format.ts';
 import { ruleLabel, valveTypeLabel } from '../../report/labels.ts';
+import { partChangeText } from '../../report/part-change.ts';
 import { html, type SafeHtml } from '../html.ts';
 import type { InputContext, Panel, ResultContext } from './panel.ts';
 
@@ -21,7 +22,7 @@ export const PAGE_SEED = 1;
 
 const pct = (x: number | null | undefined) => F.percentOfRatio(x);
 /** A margin in adhesion units, signed. */
-const signed = (x: number | null | undefined) => F.format('utilisation', x, 'metric', { signed: true });
+const signed = F.adhesionMargin;
 
 function applyButton(path: string, value: unknown, label: string): SafeHtml {
   return html`<button type="button" class="op apply" name="_op" value="${sizingOp(path, value)}" form="design-form" hx-post="/workbench/update" hx-include="#design-form" hx-target="#status" hx-swap="outerHTML" title="${`Write this into the design (${path}); Undo appears under the tolerances`}">${label}</button>`;
@@ -77,13 +78,13 @@ function histogram(r: SizingResult): ChartSpec {
   return { data: [{ type: 'bar', x: centres, y: h.counts, width: width, marker: { color: '#0072B2' }, hovertemplate: '%{x:.4f}: %{y}<extra></extra>' }], layout };
 }
 
-function optionsTable(r: SizingResult): SafeHtml {
+function optionsTable(r: SizingResult, units: UnitSystem): SafeHtml {
   if (r.options.length === 0) return html`<p class="hint">No part change found: the recommended share cannot be reached by resizing one axle within the allowed diameters.</p>`;
   return html`<div class="scroll"><table class="sizing-options data">
 <caption>Parts that move the split to ${pct(r.recommended_front_share)} (the other axle kept), each checked with the full model</caption>
 <thead><tr><th scope="col">Change</th><th scope="col">Series and source</th><th scope="col">Front share</th><th scope="col">Smallest margin</th><th scope="col">Verdict</th><th scope="col"></th></tr></thead>
 <tbody>${r.options.map(
-    (o) => html`<tr class="${o.passes ? 'check-ok' : 'check-fail'}"><th scope="row">${o.change}</th><td>${o.series}<br><small>${o.source}</small></td><td>${pct(o.front_share)}</td><td>${signed(o.smallest_margin)}</td><td class="verdict-word">${o.passes ? 'passes' : 'fails'}</td><td>${applyButton(o.path, o.value, 'Apply')}</td></tr>`,
+    (o) => html`<tr class="${o.passes ? 'check-ok' : 'check-fail'}"><th scope="row">${partChangeText(o, units)}</th><td>${o.series}<br><small>${o.source}</small></td><td>${pct(o.front_share)}</td><td>${signed(o.smallest_margin)}</td><td class="verdict-word">${o.passes ? 'passes' : 'fails'}</td><td>${applyButton(o.path, o.value, 'Apply')}</td></tr>`,
   )}</tbody></table></div>`;
 }
 
@@ -144,7 +145,7 @@ export function sizingResults(ctx: ResultContext): SafeHtml {
   return html`<p class="sum"><strong>${r.band ? `Fixed splits from ${pct(r.band.min_front_share)} to ${pct(r.band.max_front_share)} pass every rule in every load state.` : 'No fixed split passes every rule in every load state: the band is empty.'}</strong>
 Now ${pct(r.current_front_share)} at low pressure (${r.current.passes ? 'passes' : 'fails'}, smallest margin ${signed(r.current.smallest_margin)}); recommended ${pct(r.recommended_front_share)}.</p>
 ${chartBlock('chart-sizing-band', bandChart(r, (id) => ctx.result.load_states.find((x) => x.id === id)?.label ?? id), html`Blue bars: front shares that pass each rule in each load state (fixed split, thresholds and valves left out). Green: the common band. Dashed: this design's share at low pressure; solid black: the recommended share (largest smallest margin).`, 'Bars of passing front shares per rule and load state with the common band')}
-${optionsTable(r)}
+${optionsTable(r, ctx.units)}
 ${boreSection(r, ctx.units)}
 ${valveSection(r, ctx.units)}
 ${barSection(r)}

@@ -149,13 +149,15 @@ export interface FormatOptions {
   unit?: boolean;
   /** Write a sign in front: "+0.084", "−0.173". */
   signed?: boolean;
+  /** Decimals beyond the quantity's own, for small figures such as uncertainties and their contributions. */
+  extraDigits?: number;
 }
 
 /** The number alone or with its unit: "0.633", "87.7 %", "1 450 lb" is written "1450 lb", a dash for no value. */
 export function format(kind: Kind, v: number | null | undefined, units: UnitSystem, opts: FormatOptions = {}): string {
   if (!isNumber(v)) return DASH;
   const shown = convertRaw(kind, v, units, opts.from);
-  const d = digitsOf(kind, units);
+  const d = digitsOf(kind, units) + (opts.extraDigits ?? 0);
   let n = digitsText(opts.signed ? Math.abs(shown) : shown, d);
   if (opts.signed) n = `${Number(n) === 0 ? '±' : shown > 0 ? '+' : '−'}${n}`;
   else if (n.startsWith('-')) n = `−${n.slice(1)}`;
@@ -203,6 +205,8 @@ export const time = (v: Num): string => format('time', v, 'metric');
 export const power = (v: Num, from: FromUnit = 'kW'): string => format('power', v, 'metric', { from });
 export const torque = (v: Num, units: UnitSystem, from: FromUnit = 'N*m'): string => format('torque', v, units, { from });
 export const volume = (v: Num, units: UnitSystem, from: FromUnit = 'mm3'): string => format('volume', v, units, { from });
+/** A standard uncertainty or an uncertainty contribution: two decimals more than the quantity's own ("1.44 kg"). */
+export const uncertainty = (kind: Kind, v: Num, units: UnitSystem, opts: FormatOptions = {}): string => format(kind, v, units, { ...opts, extraDigits: 2 });
 /** A signed mass difference: "+120 kg", "−35 kg". */
 export const massMargin = (v: Num, units: UnitSystem, from: FromUnit = 'kg'): string => format('mass_margin', v, units, { from, signed: true });
 

@@ -12,10 +12,10 @@ const UNITS = 'metric' as const;
 const len = (v: number | null | undefined) => F.length(v, UNITS);
 const bare = (kind: F.Kind, v: number | null | undefined, from?: F.FromUnit) => F.format(kind, v, UNITS, { from, unit: false });
 /** A budget entry's value in the quantity of its unit (metres, kilograms or degrees). */
-function entryValue(v: number, unit: string): string {
-  if (unit === 'kg') return F.mass(v, UNITS);
-  if (unit === '°') return F.format('angle', v, UNITS, { from: 'deg' });
-  return len(v);
+function entryValue(v: number, unit: string, extraDigits = 0): string {
+  if (unit === 'kg') return F.format('mass', v, UNITS, { extraDigits });
+  if (unit === '°') return F.format('angle', v, UNITS, { from: 'deg', extraDigits });
+  return F.format('length', v, UNITS, { extraDigits });
 }
 
 export function axleLiftText(r: AxleLiftResultFile): string {
@@ -53,8 +53,8 @@ export function axleLiftText(r: AxleLiftResultFile): string {
       r.budget.entries.map((e) => [
         e.input,
         entryValue(e.value, e.unit),
-        entryValue(e.standard_uncertainty, e.unit),
-        bare('length', e.contribution_m),
+        entryValue(e.standard_uncertainty, e.unit, 2),
+        F.uncertainty('length', e.contribution_m, UNITS, { unit: false }),
         F.format('percent', e.variance_share, UNITS, { from: 'ratio', unit: false }),
       ]),
       '    ',
@@ -63,7 +63,7 @@ export function axleLiftText(r: AxleLiftResultFile): string {
   out.push(
     textTable(
       ['by source', F.headWithUnit('contribution', 'length', UNITS), F.headWithUnit('share', 'percent', UNITS)],
-      r.budget.by_source.map((b) => [BUDGET_SOURCE_WORDS[b.source] ?? b.source, bare('length', b.contribution_m), F.format('percent', b.variance_share, UNITS, { from: 'ratio', unit: false })]),
+      r.budget.by_source.map((b) => [BUDGET_SOURCE_WORDS[b.source] ?? b.source, F.uncertainty('length', b.contribution_m, UNITS, { unit: false }), F.format('percent', b.variance_share, UNITS, { from: 'ratio', unit: false })]),
       '    ',
     ),
   );

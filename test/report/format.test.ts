@@ -2,6 +2,7 @@
  * One formatter per quantity: fixed decimals, units of the chosen system, a dash for no value.
  * Conversion factors: NIST SP 811 (2008), appendix B (1 psi = 6 894.757 Pa, 1 lbf = 4.448 222 N,
  * 1 lb = 0.453 592 37 kg, 1 in = 25.4 mm, 1 mph = 1.609 344 km/h, 1 ft = 0.3048 m).
+ * Decimals per quantity and the sign and dash conventions: the project's choice (common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
 import * as F from '../../report/format.ts';

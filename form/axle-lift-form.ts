@@ -22,7 +22,9 @@ import {
   type FormValues,
   listIndices,
   parseFieldNumber,
+  NOTE_FIELD,
   parseHiddenJson,
+  SOURCE_FIELD,
   withShownRange,
 } from './design-form.ts';
 import { fieldNameProblem } from './field-names.ts';
@@ -239,6 +241,19 @@ export function applyCgLiftOp(values: FormValues, op: string, units: UnitSystem)
   }
   if (Object.keys(exact).length > 0) out._exact = JSON.stringify(exact);
   out[`${p}.cg_height_derived_from`] = 'measured';
+  // the height's source is the lift, recorded for the new value; an entry made for the former height is dropped
+  const cgName = `${p}.cg_height_m`;
+  try {
+    const prov = values._provenance ? parseHiddenJson(values._provenance) : null;
+    if (prov !== null && typeof prov === 'object' && !Array.isArray(prov) && Object.hasOwn(prov, cgName)) {
+      const rest = Object.fromEntries(Object.entries(prov).filter(([k]) => k !== cgName));
+      out._provenance = JSON.stringify(rest);
+    }
+  } catch {
+    /* a damaged hidden field only loses the provenance notes (as the form reader does) */
+  }
+  out[`${SOURCE_FIELD}${cgName}`] = 'measured';
+  out[`${NOTE_FIELD}${cgName}`] = 'CG height measured by axle lift';
   const ov = listIndices(values, `${p}.overrides`);
   if (!ov.some((i) => values[`${p}.overrides[${i}]`] === 'cg_height_m')) out[`${p}.overrides[${ov.length === 0 ? 0 : ov.at(-1)! + 1}]`] = 'cg_height_m';
   return out;

@@ -189,6 +189,8 @@ describe('the axle-lift form', () => {
       const s = after.design.load_states[1]!;
       expect([s.cg_height_m, s.cg_height_uncertainty_m, s.cg_height_derived_from, s.overrides]).toEqual([0.9512, 0.0123, 'measured', ['cg_height_m']]);
       expect(after.design.load_states[0]!.cg_height_m).toBe(0.78); // the other state is untouched (demo value)
+      // its source is the lift, recorded for the applied value, never a note left from the former height
+      expect(after.design.provenance?.['load_states[1].cg_height_m']).toEqual({ source: 'measured', value: 0.9512, note: 'CG height measured by axle lift' });
     }
     // the rebuilt form carries the same keys (docs/build-up.md, "Load states from the build-up")
     for (const k of ['cg_height_uncertainty_m" value="0.0123"', 'cg_height_derived_from" value="measured"', 'overrides[0]" value="cg_height_m"']) {
